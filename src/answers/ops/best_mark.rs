@@ -1,0 +1,70 @@
+//! `best_mark`: the best mark so far in a discipline, across every contest
+//! of it (heats and finals alike), optionally for one category.
+
+use super::support::{entry_label, mark_value};
+use super::*;
+use crate::dataset::{mark, Better, EntryStatus, Status};
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "best_mark",
+    summary: "the best mark so far in a discipline",
+    params: &[
+        Param { name: "discipline", kind: EntityKind::Discipline, required: true },
+        Param { name: "category", kind: EntityKind::Category, required: false },
+    ],
+    outcomes: &[
+        answered("answered", &["discipline_name", "mark", "holder", "contest_name"]),
+        no_data("none_yet", &["discipline_name"]),
+    ],
+    run,
+};
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let Some(EntityRef::Discipline(s, d)) = input.entity("discipline") else {
+        return OpOutput::done("none_yet", Facts::new(), vec![]);
+    };
+    let category = input.text("category");
+    let mut name = data.sports[s].disciplines[d].name.clone();
+    if let Some(cat) = category {
+        name = format!("{}{} {name}", cat, if cat == "women" || cat == "men" { "'s" } else { "" });
+    }
+    let f = Facts::new().set("discipline_name", name);
+    let mut best: Option<(usize, usize)> = None;
+    for (ci, c) in data.contests.iter().enumerate() {
+        if data.discipline_ref(ci) != (s, d) || c.status == Status::Scheduled {
+            continue;
+        }
+        if category.is_some_and(|cat| c.category.as_deref() != Some(cat)) {
+            continue;
+        }
+        for (ei, e) in c.entries.iter().enumerate() {
+            // A disqualified mark does not stand.
+            if e.status != EntryStatus::Ok {
+                continue;
+            }
+            let Some(m) = &data.facts[ci].marks[ei] else { continue };
+            let better = match best {
+                None => true,
+                Some((bc, be)) => {
+                    let cur = data.facts[bc].marks[be].as_ref().expect("best has a mark");
+                    mark::compare(data.facts[ci].better == Better::Lower, m, cur) == std::cmp::Ordering::Less
+                }
+            };
+            if better {
+                best = Some((ci, ei));
+            }
+        }
+    }
+    let Some((ci, ei)) = best else {
+        return OpOutput::done("none_yet", f, vec![EntityRef::Discipline(s, d)]);
+    };
+    let c = &data.contests[ci];
+    let mut f = f.set("holder", entry_label(data, &c.entries[ei])).set("contest_name", data.contest_name(ci));
+    if let Some(m) = mark_value(data, ci, ei) {
+        f.put("mark", m);
+    }
+    let mut mentioned = vec![EntityRef::Discipline(s, d), EntityRef::Contest(ci)];
+    mentioned.extend(super::support::entry_entity(data, &c.entries[ei]));
+    OpOutput::done("answered", f, mentioned)
+}

@@ -1,0 +1,65 @@
+//! `leader`: who leads a live contest and by how much.
+
+use super::support::{labels, margin_value, mark_value, placed, when_value};
+use super::*;
+use crate::dataset::Status;
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "leader",
+    summary: "the current leader of a live contest and the margin",
+    params: &[Param { name: "contest", kind: EntityKind::Contest, required: true }],
+    outcomes: &[
+        answered("live", &["contest_name", "leader", "mark", "second", "margin", "updated"]),
+        answered("tied", &["contest_name", "leader", "mark"]),
+        answered("final", &["contest_name", "winner", "mark", "second", "margin"]),
+        no_data("scheduled", &["contest_name", "start"]),
+        no_data("no_result", &["contest_name"]),
+    ],
+    run,
+};
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let Some(ci) = input.contest("contest") else {
+        return OpOutput::done("no_result", Facts::new(), vec![]);
+    };
+    let c = &data.contests[ci];
+    let me = EntityRef::Contest(ci);
+    let mut f = Facts::new().set("contest_name", data.contest_name(ci));
+    if c.status == Status::Scheduled {
+        f.put("start", when_value(&data.facts[ci].start, input.now));
+        return OpOutput::done("scheduled", f, vec![me]);
+    }
+    let order = placed(c);
+    let Some(&first) = order.first() else {
+        return OpOutput::done("no_result", f, vec![me]);
+    };
+    let top_place = c.entries[first].place;
+    let leaders: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == top_place).collect();
+    if let Some(m) = mark_value(data, ci, first) {
+        f.put("mark", m);
+    }
+    let mut mentioned = vec![me];
+    mentioned.extend(leaders.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i])));
+    if leaders.len() > 1 {
+        f.put("leader", labels(data, c, &leaders));
+        return OpOutput::done("tied", f, mentioned);
+    }
+    let key = if c.status == Status::Final { "winner" } else { "leader" };
+    f.put(key, labels(data, c, &leaders));
+    if let Some(&second) = order.get(1) {
+        let seconds: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == c.entries[second].place).collect();
+        f.put("second", labels(data, c, &seconds));
+        if let Some(m) = margin_value(data, ci, first, second) {
+            f.put("margin", m);
+        }
+    }
+    if c.status == Status::Final {
+        return OpOutput::done("final", f, mentioned);
+    }
+    if let Some(t) = data.facts[ci].updated {
+        let z = t.to_zoned_datetime(data.tz.clone());
+        f.put("updated", format!("{:02}:{:02}", z.hour(), z.minute()));
+    }
+    OpOutput::done("live", f, mentioned)
+}

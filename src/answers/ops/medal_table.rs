@@ -1,0 +1,74 @@
+//! `medal_table`: who leads the medal table, and the top N.
+
+use super::support::{medal_table, MedalRow};
+use super::*;
+use crate::answers::value::int_words;
+use crate::answers::value::Style;
+use crate::answers::words;
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "medal_table",
+    summary: "the medal table leader and the top of the table",
+    params: &[Param { name: "count", kind: EntityKind::Count, required: false }],
+    outcomes: &[
+        answered("answered", &["leader", "leader_breakdown", "leaders_count", "top", "shown"]),
+        no_data("empty", &[]),
+    ],
+    run,
+};
+
+/// How many rows to list when the reader does not say, unless the intent's
+/// `settings.rows` says otherwise.
+const DEFAULT_ROWS: usize = 3;
+
+fn breakdown(data: &Dataset, row: &MedalRow) -> Value {
+    let text: Vec<String> = data
+        .awards()
+        .iter()
+        .zip(&row.counts)
+        .map(|(a, &n)| format!("{} {a}", int_words(n as i64, Style::Text, false)))
+        .collect();
+    let spoken: Vec<String> = data
+        .awards()
+        .iter()
+        .zip(&row.counts)
+        .map(|(a, &n)| format!("{} {a}", words::cardinal(n as u64)))
+        .collect();
+    Value::Dual { text: words::join_list(&text, "and"), spoken: words::join_list(&spoken, "and") }
+}
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let table = medal_table(data);
+    if table.is_empty() {
+        return OpOutput::done("empty", Facts::new(), vec![]);
+    }
+    let n = match input.slots.get("count") {
+        Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
+        _ => input.settings.get("rows").and_then(|s| s.parse().ok()).unwrap_or(DEFAULT_ROWS),
+    };
+    let leaders: Vec<&MedalRow> = table.iter().filter(|r| r.rank == 1).collect();
+    let mut f = Facts::new();
+    f.put("leader", Value::List(leaders.iter().map(|r| Value::Text(data.groups[r.group].name.clone())).collect()));
+    f.put("leaders_count", Value::Int(leaders.len() as i64));
+    f.put("leader_breakdown", breakdown(data, leaders[0]));
+    // Include every row tied with the last one shown, so a cut never splits
+    // a shared rank.
+    let cutoff_rank = table.get(n.min(table.len()) - 1).map(|r| r.rank).unwrap_or(1);
+    let shown: Vec<&MedalRow> = table.iter().filter(|r| r.rank <= cutoff_rank).collect();
+    let lines: Vec<Value> = shown
+        .iter()
+        .map(|r| {
+            let b = breakdown(data, r);
+            let name = &data.groups[r.group].name;
+            Value::Dual {
+                text: format!("{}. {name} ({})", r.rank, b.render(Style::Text)),
+                spoken: format!("{}, {name}, with {}", words::ordinal(r.rank as u64), b.render(Style::Spoken)),
+            }
+        })
+        .collect();
+    f.put("shown", Value::Int(lines.len() as i64));
+    f.put("top", Value::List(lines));
+    let mentioned = leaders.iter().map(|r| EntityRef::Group(r.group)).collect();
+    OpOutput::done("answered", f, mentioned)
+}

@@ -1,0 +1,101 @@
+//! `podium`: who won a contest and who took each award, or who holds one
+//! award when the reader asks for it ("and who got silver?").
+
+use super::support::{holders, labels, placed, when_value};
+use super::*;
+use crate::dataset::Status;
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "podium",
+    summary: "the winner and medallists of a contest",
+    params: &[
+        Param { name: "contest", kind: EntityKind::Contest, required: true },
+        Param { name: "award", kind: EntityKind::Award, required: false },
+    ],
+    outcomes: &[
+        // Everyone on the podium; `missing` lists awards not given (a tie).
+        answered("answered", &["winner", "gold", "silver", "bronze", "missing", "missing_count"]),
+        // The holders of the one award asked for.
+        answered("award", &["holders", "shared"]),
+        // The asked-for award was not given, because of a tie above it.
+        answered("not_awarded", &["tied", "tied_award"]),
+        // Still under way: who leads now.
+        no_data("live", &["leader", "mark"]),
+        no_data("scheduled", &["start"]),
+        no_data("no_result", &[]),
+    ],
+    run,
+};
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let Some(ci) = input.contest("contest") else {
+        return OpOutput::done("no_result", Facts::new(), vec![]);
+    };
+    let c = &data.contests[ci];
+    let me = EntityRef::Contest(ci);
+    match c.status {
+        Status::Scheduled => {
+            return OpOutput::done("scheduled", Facts::new().set("start", when_value(&data.facts[ci].start, input.now)), vec![me])
+        }
+        Status::Live => {
+            let order = placed(c);
+            let Some(&first) = order.first() else {
+                return OpOutput::done("live", Facts::new(), vec![me]);
+            };
+            let leaders: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == c.entries[first].place).collect();
+            let mut f = Facts::new().set("leader", labels(data, c, &leaders));
+            if let Some(m) = super::support::mark_value(data, ci, first) {
+                f.put("mark", m);
+            }
+            return OpOutput::done("live", f, vec![me]);
+        }
+        Status::Final => {}
+    }
+    let awards = data.awards();
+    if let Some(award) = input.text("award") {
+        let ix = holders(c, award);
+        if ix.is_empty() {
+            // Say why: which award above it was shared.
+            let pos = awards.iter().position(|a| a == award).unwrap_or(0);
+            for above in awards[..pos].iter().rev() {
+                let h = holders(c, above);
+                if h.len() > 1 {
+                    let f = Facts::new().set("tied", labels(data, c, &h)).set("tied_award", above.as_str());
+                    return OpOutput::done("not_awarded", f, vec![me]);
+                }
+            }
+            return OpOutput::done("no_result", Facts::new(), vec![me]);
+        }
+        let mentioned = std::iter::once(me).chain(ix.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i]))).collect();
+        let f = Facts::new().set("holders", labels(data, c, &ix)).set("shared", if ix.len() > 1 { "shared" } else { "" });
+        return OpOutput::done("award", f, mentioned);
+    }
+    if placed(c).is_empty() {
+        return OpOutput::done("no_result", Facts::new(), vec![me]);
+    }
+    let mut f = Facts::new();
+    let mut missing = Vec::new();
+    let mut mentioned = vec![me];
+    for (k, a) in awards.iter().enumerate() {
+        let ix = holders(c, a);
+        if ix.is_empty() {
+            missing.push(a.clone());
+        }
+        mentioned.extend(ix.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i])));
+        // The first three awards have fixed fact names editors can use.
+        let key = match k {
+            0 => "gold",
+            1 => "silver",
+            2 => "bronze",
+            _ => continue,
+        };
+        f.put(key, labels(data, c, &ix));
+        if k == 0 {
+            f.put("winner", labels(data, c, &ix));
+        }
+    }
+    f.put("missing_count", Value::Int(missing.len() as i64));
+    f.put("missing", Value::from(missing));
+    OpOutput::done("answered", f, mentioned)
+}

@@ -1,0 +1,84 @@
+//! `result`: how one competitor did in one contest.
+
+use super::support::{mark_value, status_phrase, when_value};
+use super::*;
+use crate::answers::words;
+use crate::dataset::{EntryStatus, Status};
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "result",
+    summary: "a competitor's result in a contest",
+    params: &[
+        Param { name: "competitor", kind: EntityKind::Competitor, required: true },
+        Param { name: "contest", kind: EntityKind::Contest, required: false },
+    ],
+    outcomes: &[
+        answered("answered", &["name", "place", "place_nth", "mark", "award", "contest_name"]),
+        answered("did_not_finish", &["name", "status", "contest_name"]),
+        no_data("live", &["name", "place", "place_nth", "mark", "contest_name"]),
+        no_data("scheduled", &["name", "start", "contest_name"]),
+        no_data("not_entered", &["name", "contest_name"]),
+        no_data("no_result", &["name", "contest_name"]),
+    ],
+    run,
+};
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let Some(pi) = input.competitor("competitor") else {
+        return OpOutput::done("no_result", Facts::new(), vec![]);
+    };
+    let who = EntityRef::Competitor(pi);
+    let name = data.competitors[pi].name();
+    let theirs = data.contests_of(pi);
+    let (ci, ei) = match input.contest("contest") {
+        Some(ci) => match theirs.iter().find(|(c, _)| *c == ci) {
+            Some(&pair) => pair,
+            None => {
+                let f = Facts::new().set("name", name).set("contest_name", data.contest_name(ci));
+                return OpOutput::done("not_entered", f, vec![who, EntityRef::Contest(ci)]);
+            }
+        },
+        None => match theirs.as_slice() {
+            [] => return OpOutput::done("no_result", Facts::new().set("name", name), vec![who]),
+            [only] => *only,
+            // Several contests: ask which, never pick one silently.
+            many => {
+                return OpOutput::Choose {
+                    slot: "contest",
+                    options: many.iter().map(|(c, _)| EntityRef::Contest(*c)).collect(),
+                }
+            }
+        },
+    };
+    let c = &data.contests[ci];
+    let e = &c.entries[ei];
+    let mentioned = vec![who, EntityRef::Contest(ci)];
+    let mut f = Facts::new().set("name", name).set("contest_name", data.contest_name(ci));
+    if c.status == Status::Scheduled {
+        f.put("start", when_value(&data.facts[ci].start, input.now));
+        return OpOutput::done("scheduled", f, mentioned);
+    }
+    if e.status != EntryStatus::Ok {
+        f.put("status", status_phrase(e.status));
+        return OpOutput::done("did_not_finish", f, mentioned);
+    }
+    let Some(place) = e.place else {
+        return OpOutput::done(if c.status == Status::Live { "live" } else { "no_result" }, f, mentioned);
+    };
+    f.put("place", Value::Int(place as i64));
+    f.put(
+        "place_nth",
+        Value::Dual { text: words::ordinal_figure(place as u64), spoken: words::ordinal(place as u64) },
+    );
+    if let Some(m) = mark_value(data, ci, ei) {
+        f.put("mark", m);
+    }
+    if c.status == Status::Live {
+        return OpOutput::done("live", f, mentioned);
+    }
+    if let Some(a) = &e.award {
+        f.put("award", a.as_str());
+    }
+    OpOutput::done("answered", f, mentioned)
+}

@@ -1,0 +1,344 @@
+//! Reading intent YAML and checking it against the operations.
+
+use std::collections::{BTreeMap, HashMap, HashSet};
+use std::fmt;
+use std::path::Path;
+
+use serde::Deserialize;
+use serde_saphyr::Spanned;
+
+use super::{Catalog, Intent, ServiceWording, SlotDef, Template};
+use crate::answers::ops::{self, EntityKind};
+
+/// One problem in a catalog file.
+#[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
+pub struct CatalogProblem {
+    pub file: String,
+    pub line: u64,
+    pub column: u64,
+    pub message: String,
+}
+
+impl fmt::Display for CatalogProblem {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        write!(f, "{}:{}:{}: {}", self.file, self.line, self.column, self.message)
+    }
+}
+
+/// Why a catalog could not be loaded: every problem found.
+#[derive(Debug, Clone, thiserror::Error)]
+#[error("{}", .0.iter().map(|p| p.to_string()).collect::<Vec<_>>().join("\n"))]
+pub struct CatalogError(pub Vec<CatalogProblem>);
+
+#[derive(Debug, Deserialize)]
+#[serde(deny_unknown_fields)]
+struct IntentFile {
+    intent: Spanned<String>,
+    #[serde(default)]
+    summary: Option<String>,
+    operation: Spanned<String>,
+    phrasings: Vec<Spanned<String>>,
+    #[serde(default)]
+    slots: BTreeMap<String, Spanned<SlotFile>>,
+    replies: Spanned<BTreeMap<String, Spanned<String>>>,
+    #[serde(default)]
+    settings: BTreeMap<String, String>,
+    #[serde(default)]
+    suggestions: Vec<String>,
+}
+
+#[derive(Debug, Deserialize)]
+#[serde(deny_unknown_fields)]
+struct SlotFile {
+    entity: Spanned<String>,
+    #[serde(default)]
+    required: Option<bool>,
+    #[serde(default)]
+    ask: Option<String>,
+}
+
+#[derive(Debug, Deserialize)]
+#[serde(deny_unknown_fields)]
+struct ServiceFile {
+    not_understood: Spanned<String>,
+    choose: Spanned<String>,
+    reset: Spanned<String>,
+    #[serde(default)]
+    examples: Vec<String>,
+}
+
+/// The file holding service-wide wording in an intents folder.
+pub const SERVICE_FILE: &str = "service.yaml";
+
+/// Loads every `*.yaml` file of an intents folder.
+pub fn load_dir(dir: &Path) -> Result<Catalog, CatalogError> {
+    let entries = std::fs::read_dir(dir).map_err(|e| {
+        CatalogError(vec![CatalogProblem { file: dir.display().to_string(), line: 0, column: 0, message: format!("cannot read the folder: {e}") }])
+    })?;
+    let mut files = Vec::new();
+    for entry in entries.flatten() {
+        let path = entry.path();
+        if path.extension().is_some_and(|e| e == "yaml" || e == "yml") {
+            match std::fs::read_to_string(&path) {
+                Ok(text) => files.push((path.display().to_string(), text)),
+                Err(e) => {
+                    return Err(CatalogError(vec![CatalogProblem {
+                        file: path.display().to_string(),
+                        line: 0,
+                        column: 0,
+                        message: format!("cannot read: {e}"),
+                    }]))
+                }
+            }
+        }
+    }
+    files.sort();
+    load_texts(&files)
+}
+
+/// Loads a catalog from (file name, text) pairs; the service file is the one
+/// whose name ends with `service.yaml`.
+pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
+    let mut problems = Vec::new();
+    let mut intents = Vec::new();
+    let mut service = None;
+    let mut names: HashMap<String, String> = HashMap::new();
+    for (file, text) in files {
+        if file.ends_with(SERVICE_FILE) {
+            match serde_saphyr::from_str::<ServiceFile>(text) {
+                Ok(s) => service = service_wording(file, s, &mut problems),
+                Err(e) => problems.push(yaml_problem(file, &e)),
+            }
+            continue;
+        }
+        match serde_saphyr::from_str::<IntentFile>(text) {
+            Ok(f) => {
+                if let Some(i) = check_intent(file, f, &mut problems) {
+                    if let Some(other) = names.insert(i.name.clone(), file.clone()) {
+                        problems.push(CatalogProblem {
+                            file: file.clone(),
+                            line: 1,
+                            column: 1,
+                            message: format!("intent {:?} is already defined in {other}", i.name),
+                        });
+                    }
+                    intents.push(i);
+                }
+            }
+            Err(e) => problems.push(yaml_problem(file, &e)),
+        }
+    }
+    if service.is_none() && !problems.iter().any(|p| p.file.ends_with(SERVICE_FILE)) {
+        problems.push(CatalogProblem {
+            file: SERVICE_FILE.into(),
+            line: 0,
+            column: 0,
+            message: "the intents folder needs a service.yaml with not_understood, choose and reset wording".into(),
+        });
+    }
+    if intents.is_empty() && problems.is_empty() {
+        problems.push(CatalogProblem { file: "intents".into(), line: 0, column: 0, message: "no intents found".into() });
+    }
+    if !problems.is_empty() {
+        return Err(CatalogError(problems));
+    }
+    Ok(Catalog { intents, service: service.expect("checked above") })
+}
+
+fn yaml_problem(file: &str, e: &serde_saphyr::Error) -> CatalogProblem {
+    let (line, column) = e.location().map(|l| (l.line(), l.column())).unwrap_or((0, 0));
+    // The library's message may carry a source snippet on later lines; the
+    // first line is the sentence an editor needs.
+    let full = e.to_string();
+    let message = full.lines().find(|l| !l.trim().is_empty()).unwrap_or("invalid YAML").trim().to_string();
+    CatalogProblem { file: file.to_string(), line, column, message }
+}
+
+fn at<T>(file: &str, s: &Spanned<T>, message: String) -> CatalogProblem {
+    CatalogProblem { file: file.to_string(), line: s.referenced.line(), column: s.referenced.column(), message }
+}
+
+fn template(file: &str, s: &Spanned<String>, problems: &mut Vec<CatalogProblem>) -> Option<Template> {
+    match Template::parse(&s.value) {
+        Ok(t) => Some(t),
+        Err(e) => {
+            problems.push(CatalogProblem {
+                file: file.to_string(),
+                line: s.referenced.line(),
+                // Points into the string; the opening quote, if any, is not counted.
+                column: s.referenced.column() + e.offset as u64,
+                message: e.message,
+            });
+            None
+        }
+    }
+}
+
+fn service_wording(file: &str, s: ServiceFile, problems: &mut Vec<CatalogProblem>) -> Option<ServiceWording> {
+    let allowed: [(&Spanned<String>, &[&str]); 3] =
+        [(&s.not_understood, &["examples"]), (&s.choose, &["options", "noun"]), (&s.reset, &[])];
+    let mut out = Vec::new();
+    for (spanned, names) in allowed {
+        let Some(t) = template(file, spanned, problems) else { continue };
+        for n in t.names() {
+            if !names.contains(&n) {
+                problems.push(at(file, spanned, format!("placeholder {{{n}}} is not available here; use {}", list_or_none(names))));
+            }
+        }
+        out.push(t);
+    }
+    if out.len() != 3 {
+        return None;
+    }
+    let reset = out.pop()?;
+    let choose = out.pop()?;
+    let not_understood = out.pop()?;
+    Some(ServiceWording { not_understood, choose, reset, examples: s.examples })
+}
+
+fn list_or_none(names: &[&str]) -> String {
+    if names.is_empty() {
+        "no placeholders".into()
+    } else {
+        names.iter().map(|n| format!("{{{n}}}")).collect::<Vec<_>>().join(", ")
+    }
+}
+
+/// Placeholders in phrasings: `{name}`.
+fn phrasing_slots(p: &str) -> Result<Vec<String>, String> {
+    let mut out = Vec::new();
+    let mut rest = p;
+    while let Some(open) = rest.find('{') {
+        let Some(close) = rest[open..].find('}') else {
+            return Err("'{' is not closed with '}'".into());
+        };
+        out.push(rest[open + 1..open + close].trim().to_string());
+        rest = &rest[open + close + 1..];
+    }
+    if rest.contains('}') {
+        return Err("'}' with no matching '{'".into());
+    }
+    Ok(out)
+}
+
+fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -> Option<Intent> {
+    let before = problems.len();
+    let name = f.intent.value.trim().to_string();
+    if name.is_empty() || !name.chars().all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '_') {
+        problems.push(at(file, &f.intent, format!("intent name {name:?} must use lowercase letters, digits and '_'")));
+    }
+    let Some(op) = ops::find(&f.operation.value) else {
+        problems.push(at(
+            file,
+            &f.operation,
+            format!("unknown operation {:?}; the operations are {}", f.operation.value, ops::names().join(", ")),
+        ));
+        return None;
+    };
+
+    let mut slots = Vec::new();
+    for (slot_name, spec) in &f.slots {
+        let Some(kind) = EntityKind::from_name(&spec.value.entity.value) else {
+            let kinds: Vec<&str> = EntityKind::ALL.iter().map(|k| k.name()).collect();
+            problems.push(at(file, &spec.value.entity, format!("unknown entity kind {:?}; the kinds are {}", spec.value.entity.value, kinds.join(", "))));
+            continue;
+        };
+        let Some(param) = op.param(slot_name) else {
+            let params: Vec<&str> = op.params.iter().map(|p| p.name).collect();
+            problems.push(at(
+                file,
+                spec,
+                format!("slot {slot_name:?} is not used by operation {}; it takes {}", op.name, if params.is_empty() { "no slots".to_string() } else { params.join(", ") }),
+            ));
+            continue;
+        };
+        if param.kind != kind {
+            problems.push(at(
+                file,
+                &spec.value.entity,
+                format!("slot {slot_name:?} must hold a {} for operation {}, not a {}", param.kind.name(), op.name, kind.name()),
+            ));
+            continue;
+        }
+        let required = spec.value.required.unwrap_or(param.required);
+        if param.required && !required {
+            problems.push(at(file, spec, format!("slot {slot_name:?} is required by operation {}", op.name)));
+        }
+        let ask = match (&spec.value.ask, required) {
+            (Some(a), _) => a.clone(),
+            (None, true) => {
+                problems.push(at(file, spec, format!("required slot {slot_name:?} needs an `ask:` question for when it is missing")));
+                String::new()
+            }
+            (None, false) => String::new(),
+        };
+        slots.push(SlotDef { name: slot_name.clone(), kind, required, ask });
+    }
+    for p in op.params.iter().filter(|p| p.required) {
+        if !f.slots.contains_key(p.name) {
+            problems.push(at(file, &f.operation, format!("operation {} needs a slot {:?} of kind {}", op.name, p.name, p.kind.name())));
+        }
+    }
+
+    if f.phrasings.is_empty() {
+        problems.push(at(file, &f.intent, "an intent needs at least one phrasing".into()));
+    }
+    let declared: HashSet<&str> = f.slots.keys().map(String::as_str).collect();
+    let mut phrasings = Vec::new();
+    for p in &f.phrasings {
+        match phrasing_slots(&p.value) {
+            Err(m) => problems.push(at(file, p, m)),
+            Ok(used) => {
+                for u in used {
+                    if !declared.contains(u.as_str()) {
+                        problems.push(at(file, p, format!("placeholder {{{u}}} has no slot; declare it under `slots:`")));
+                    }
+                }
+            }
+        }
+        phrasings.push(p.value.clone());
+    }
+
+    let mut replies = HashMap::new();
+    for o in op.outcomes {
+        if !f.replies.value.contains_key(o.name) {
+            let all: Vec<&str> = op.outcomes.iter().map(|o| o.name).collect();
+            problems.push(at(file, &f.replies, format!("replies need wording for outcome {:?} of operation {} (its outcomes: {})", o.name, op.name, all.join(", "))));
+        }
+    }
+    for (outcome, text) in &f.replies.value {
+        let Some(spec) = op.outcome(outcome) else {
+            let all: Vec<&str> = op.outcomes.iter().map(|o| o.name).collect();
+            problems.push(at(file, text, format!("operation {} has no outcome {outcome:?}; its outcomes are {}", op.name, all.join(", "))));
+            continue;
+        };
+        let Some(t) = template(file, text, problems) else { continue };
+        for n in t.names() {
+            if !declared.contains(n) && !spec.facts.contains(&n) {
+                problems.push(at(
+                    file,
+                    text,
+                    format!(
+                        "placeholder {{{n}}} names no slot and no fact of outcome {outcome:?}; available: {}",
+                        list_or_none(&declared.iter().copied().chain(spec.facts.iter().copied()).collect::<Vec<_>>())
+                    ),
+                ));
+            }
+        }
+        replies.insert(outcome.clone(), t);
+    }
+    if problems.len() > before {
+        return None;
+    }
+    Some(Intent {
+        name,
+        summary: f.summary,
+        operation: op,
+        phrasings,
+        slots,
+        replies,
+        settings: f.settings,
+        suggestions: f.suggestions,
+        file: file.to_string(),
+    })
+}

@@ -1,0 +1,253 @@
+//! The command line: `serve`, `ask`, `chat`, `check` and `eval`, all reading
+//! the same `--data`, `--intents` and `--now` options.
+
+use std::io::{BufRead, Write};
+use std::net::SocketAddr;
+use std::path::PathBuf;
+use std::sync::Arc;
+use std::time::Duration;
+
+use clap::{Args, Parser, Subcommand};
+
+use crate::dialogue::MemoryStore;
+use crate::engine::{self, Clock, Engine, Settings, Sources};
+
+/// Answers readers' questions about results data.
+#[derive(Debug, Parser)]
+#[command(name = "tidings", version, about)]
+pub struct Cli {
+    #[command(subcommand)]
+    pub command: Command,
+}
+
+/// Options every command shares.
+#[derive(Debug, Args, Clone)]
+pub struct Common {
+    /// Scenario folder (default: the built-in demo games).
+    #[arg(long, env = "TIDINGS_DATA", global = true)]
+    pub data: Option<PathBuf>,
+    /// Intents folder (default: the built-in demo intents).
+    #[arg(long, env = "TIDINGS_INTENTS", global = true)]
+    pub intents: Option<PathBuf>,
+    /// Fixed current time (RFC 3339), for replays and tests.
+    #[arg(long, env = "TIDINGS_NOW", global = true)]
+    pub now: Option<String>,
+}
+
+#[derive(Debug, Subcommand)]
+pub enum Command {
+    /// Serve the HTTP API.
+    Serve {
+        #[command(flatten)]
+        common: Common,
+        /// Address to listen on.
+        #[arg(long, env = "TIDINGS_LISTEN", default_value = "127.0.0.1:8080")]
+        listen: SocketAddr,
+        /// Idle time after which a conversation is forgotten, in seconds.
+        #[arg(long, env = "TIDINGS_SESSION_TTL", default_value_t = 1800)]
+        session_ttl: u64,
+    },
+    /// Answer one question and exit.
+    Ask {
+        #[command(flatten)]
+        common: Common,
+        /// Channel to phrase the answer for.
+        #[arg(long, default_value = "chat")]
+        channel: String,
+        /// Print the whole reply as JSON.
+        #[arg(long)]
+        json: bool,
+        /// The question.
+        question: Vec<String>,
+    },
+    /// Talk to the service at a prompt; follow-ups keep their context.
+    Chat {
+        #[command(flatten)]
+        common: Common,
+        #[arg(long, default_value = "chat")]
+        channel: String,
+    },
+    /// Check the data and intents; prints every problem, exits 1 on any.
+    Check {
+        #[command(flatten)]
+        common: Common,
+    },
+    /// Measure understanding and answers against a labelled question set.
+    Eval {
+        #[command(flatten)]
+        common: Common,
+        /// The question set (YAML).
+        #[arg(long, default_value = "tests/eval/games.yaml")]
+        set: PathBuf,
+        /// Print every failing case.
+        #[arg(long)]
+        verbose: bool,
+        /// Print the figures as JSON.
+        #[arg(long)]
+        json: bool,
+    },
+}
+
+/// Parses `--now`.
+pub fn clock(now: &Option<String>) -> Result<Clock, String> {
+    match now {
+        None => Ok(Clock::System),
+        Some(s) => s
+            .parse::<jiff::Timestamp>()
+            .map(Clock::Fixed)
+            .map_err(|e| format!("--now must be an RFC 3339 time such as 2027-08-14T21:10:00+01:00: {e}")),
+    }
+}
+
+fn sources(c: &Common) -> Sources {
+    Sources { data: c.data.clone(), intents: c.intents.clone() }
+}
+
+/// A fresh per-process secret for hashing user ids when none is configured.
+pub fn id_secret() -> Vec<u8> {
+    match std::env::var("TIDINGS_ID_SECRET") {
+        Ok(s) if !s.is_empty() => s.into_bytes(),
+        _ => rand::random::<[u8; 32]>().to_vec(),
+    }
+}
+
+/// Builds an engine with in-memory sessions.
+pub fn local_engine(c: &Common, ttl: Duration) -> Result<Engine, String> {
+    let snap = engine::load(&sources(c)).map_err(|e| e.to_string())?;
+    let settings = Settings { clock: clock(&c.now)?, session_ttl: ttl, id_secret: id_secret() };
+    Ok(Engine::new(snap, Arc::new(MemoryStore::new()), settings))
+}
+
+/// Runs a command; returns the process exit code.
+pub async fn run(cli: Cli) -> i32 {
+    match cli.command {
+        Command::Serve { common, listen, session_ttl } => {
+            let engine = match local_engine(&common, Duration::from_secs(session_ttl)) {
+                Ok(e) => e,
+                Err(e) => {
+                    eprintln!("{e}");
+                    return 1;
+                }
+            };
+            let listener = match tokio::net::TcpListener::bind(listen).await {
+                Ok(l) => l,
+                Err(e) => {
+                    eprintln!("cannot listen on {listen}: {e}");
+                    return 1;
+                }
+            };
+            let snap = engine.snapshot();
+            tracing::info!(
+                addr = %listener.local_addr().map(|a| a.to_string()).unwrap_or_default(),
+                scenario = %snap.data.scenario.title,
+                intents = snap.catalog.intents.len(),
+                "serving"
+            );
+            match crate::http::run(listener, engine, shutdown_signal()).await {
+                Ok(()) => 0,
+                Err(e) => {
+                    eprintln!("server error: {e}");
+                    1
+                }
+            }
+        }
+        Command::Ask { common, channel, json, question } => {
+            let engine = match local_engine(&common, Duration::from_secs(60)) {
+                Ok(e) => e,
+                Err(e) => {
+                    eprintln!("{e}");
+                    return 1;
+                }
+            };
+            let q = question.join(" ");
+            if q.trim().is_empty() {
+                eprintln!("ask needs a question, for example: tidings ask \"who won the women's long jump?\"");
+                return 2;
+            }
+            match engine.handle("cli", &channel, &q).await {
+                Ok(a) if json => {
+                    println!("{}", serde_json::to_string_pretty(&a).unwrap_or_default());
+                    0
+                }
+                Ok(a) => {
+                    println!("{}", a.reply.text);
+                    0
+                }
+                Err(e) => {
+                    eprintln!("{e}");
+                    2
+                }
+            }
+        }
+        Command::Chat { common, channel } => {
+            let engine = match local_engine(&common, Duration::from_secs(3600)) {
+                Ok(e) => e,
+                Err(e) => {
+                    eprintln!("{e}");
+                    return 1;
+                }
+            };
+            let snap = engine.snapshot();
+            println!("{} — ask a question; an empty line or Ctrl-D ends.", snap.data.scenario.title);
+            let stdin = std::io::stdin();
+            loop {
+                print!("> ");
+                let _ = std::io::stdout().flush();
+                let mut line = String::new();
+                match stdin.lock().read_line(&mut line) {
+                    Ok(0) | Err(_) => break,
+                    Ok(_) => {}
+                }
+                let line = line.trim();
+                if line.is_empty() {
+                    break;
+                }
+                match engine.handle("cli-chat", &channel, line).await {
+                    Ok(a) => println!("{}", a.reply.text),
+                    Err(e) => eprintln!("{e}"),
+                }
+            }
+            0
+        }
+        Command::Check { common } => match engine::load(&sources(&common)) {
+            Ok(s) => {
+                println!(
+                    "ok: {} ({} competitors, {} contests), {} intents",
+                    s.data.scenario.title,
+                    s.data.competitors.len(),
+                    s.data.contests.len(),
+                    s.catalog.intents.len()
+                );
+                0
+            }
+            Err(e) => {
+                eprintln!("{e}");
+                1
+            }
+        },
+        Command::Eval { common, set, verbose, json } => crate::eval::run_cli(&common, &set, verbose, json).await,
+    }
+}
+
+/// Completes on Ctrl-C or SIGTERM.
+pub async fn shutdown_signal() {
+    let ctrl_c = async {
+        let _ = tokio::signal::ctrl_c().await;
+    };
+    #[cfg(unix)]
+    let term = async {
+        match tokio::signal::unix::signal(tokio::signal::unix::SignalKind::terminate()) {
+            Ok(mut s) => {
+                s.recv().await;
+            }
+            Err(_) => std::future::pending::<()>().await,
+        }
+    };
+    #[cfg(not(unix))]
+    let term = std::future::pending::<()>();
+    tokio::select! {
+        _ = ctrl_c => {},
+        _ = term => {},
+    }
+    tracing::info!("shutting down");
+}

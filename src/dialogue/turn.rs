@@ -1,0 +1,447 @@
+//! One turn of a conversation, as a pure function of the snapshot (data,
+//! catalog, understanding), the session and the message. Storage and HTTP
+//! stay outside, so the logic is tested without either.
+
+use std::collections::{BTreeMap, HashMap};
+
+use jiff::ZonedDateTime;
+use serde::Serialize;
+
+use super::session::{load_entity, load_slots, store_entity, store_slots, Pending, Session};
+use crate::answers::ops::{EntityKind, OpInput, OpOutput, OutcomeClass, SlotValue, Slots};
+use crate::answers::value::{Style, Value};
+use crate::catalog::{Catalog, Intent};
+use crate::dataset::{Dataset, EntityRef};
+use crate::understand::classify::Scored;
+use crate::understand::lexicon::Target;
+use crate::understand::slots::{fill, resolve_contest, sport_noun, Need};
+use crate::understand::{Analysis, Understanding};
+
+/// Below this score no intent is taken to be meant.
+pub const MIN_SCORE: f32 = 0.42;
+/// Asking for a missing detail needs more certainty than answering: a
+/// question back to an off-topic message would only confuse.
+pub const MIN_SCORE_TO_ASK: f32 = 0.55;
+
+/// What kind of reply this is.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "snake_case")]
+pub enum Outcome {
+    /// A fact from the data.
+    Answered,
+    /// A question back: a missing or ambiguous detail.
+    Clarify,
+    /// No intent fits the message.
+    NotUnderstood,
+    /// The data has nothing to give yet (not decided, no such result).
+    NoData,
+}
+
+/// A filled slot as shown in replies.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SlotOut {
+    pub kind: EntityKind,
+    /// Stable id (entity id, ISO 8601 date, number).
+    pub value: String,
+    /// How it reads.
+    pub text: String,
+}
+
+/// An option offered in a clarifying question.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct OptionOut {
+    pub kind: String,
+    pub id: String,
+    pub text: String,
+}
+
+/// The reply to one message.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Reply {
+    pub text: String,
+    pub intent: Option<String>,
+    pub slots: BTreeMap<String, SlotOut>,
+    pub outcome: Outcome,
+    /// The operation's own outcome name ("scheduled", "award"...).
+    pub detail: Option<String>,
+    /// How sure the service is of the intent and names, from 0 to 1.
+    pub confidence: f32,
+    /// Options of a clarifying question.
+    pub options: Vec<OptionOut>,
+    /// Facts behind the answer, for checking and for richer clients.
+    pub facts: HashMap<String, Value>,
+    /// The best intents and why.
+    pub candidates: Vec<Scored>,
+}
+
+/// Everything a turn reads that is not the session.
+pub struct TurnContext<'a> {
+    pub data: &'a Dataset,
+    pub catalog: &'a Catalog,
+    pub understanding: &'a Understanding,
+    pub now: &'a ZonedDateTime,
+    pub style: Style,
+}
+
+const RESET: &[&str] = &["start over", "start again", "never mind", "nevermind", "forget it", "reset", "cancel"];
+
+/// Handles one message. Returns the reply and the session to store.
+pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session) {
+    let mut s = session;
+    s.turn += 1;
+    s.updated_at = ctx.now.timestamp().as_second();
+    let a = ctx.understanding.analyse(text, ctx.now.date());
+
+    if RESET.iter().any(|r| a.normalized == *r || a.normalized.trim_end_matches(" please") == *r) {
+        let channel = s.channel.clone();
+        let mut fresh = Session::new(&channel, s.updated_at);
+        fresh.turn = s.turn;
+        fresh.created_at = s.created_at;
+        let text = ctx.catalog.service.reset.render(&HashMap::new(), ctx.style);
+        return (plain_reply(text, Outcome::Answered, None, 1.0, &a), fresh);
+    }
+
+    if let Some(p) = s.pending.take() {
+        if let Some(reply) = answer_pending(ctx, &mut s, &p, &a) {
+            return (reply, s);
+        }
+    }
+
+    let best = a.scores.first();
+    let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
+        return (not_understood(ctx, &a), s);
+    };
+    let Some(intent) = ctx.catalog.intent(&best.intent) else {
+        return (not_understood(ctx, &a), s);
+    };
+    let confidence = best.score.min(1.0);
+    let filled = fill(ctx.data, intent, &a, &Slots::new());
+    if matches!(filled.need, Some(Need::Missing { .. })) && best.score < MIN_SCORE_TO_ASK && a.mentions.is_empty() {
+        return (not_understood(ctx, &a), s);
+    }
+    let confidence = confidence * filled.certainty;
+    let reply = proceed(ctx, &mut s, intent, filled.slots, filled.need, confidence, &a);
+    (reply, s)
+}
+
+/// Runs the intent, or asks for what is still needed.
+fn proceed(
+    ctx: &TurnContext,
+    s: &mut Session,
+    intent: &Intent,
+    slots: Slots,
+    need: Option<Need>,
+    confidence: f32,
+    a: &Analysis,
+) -> Reply {
+    match need {
+        Some(Need::Missing { slot }) => {
+            let def = intent.slot(&slot).expect("fill only names the intent's slots");
+            s.pending = Some(Pending { intent: intent.name.clone(), slots: store_slots(ctx.data, &slots), slot, options: vec![] });
+            let mut r = plain_reply(def.ask.clone(), Outcome::Clarify, Some(intent), confidence, a);
+            r.slots = slots_out(ctx.data, &slots);
+            r
+        }
+        Some(Need::Choose { slot, options }) => ask_choice(ctx, s, intent, slots, &slot, options, confidence, a),
+        Some(Need::NoMatch { what, .. }) => {
+            let text = if what.is_empty() {
+                "I could not find that event in the results.".to_string()
+            } else {
+                format!("I could not find a {what} event in the results.")
+            };
+            s.last_intent = Some(intent.name.clone());
+            plain_reply(text, Outcome::NoData, Some(intent), confidence, a)
+        }
+        None => run(ctx, s, intent, slots, confidence, a),
+    }
+}
+
+#[allow(clippy::too_many_arguments)]
+fn ask_choice(
+    ctx: &TurnContext,
+    s: &mut Session,
+    intent: &Intent,
+    slots: Slots,
+    slot: &str,
+    options: Vec<EntityRef>,
+    confidence: f32,
+    a: &Analysis,
+) -> Reply {
+    let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
+    let noun = options.first().map(|e| noun_for(ctx.data, *e)).unwrap_or("one");
+    let mut values = HashMap::new();
+    values.insert("options".to_string(), Value::from(labels.clone()));
+    values.insert("noun".to_string(), Value::Text(noun.to_string()));
+    let text = ctx.catalog.service.choose.render(&values, ctx.style);
+    s.pending = Some(Pending {
+        intent: intent.name.clone(),
+        slots: store_slots(ctx.data, &slots),
+        slot: slot.to_string(),
+        options: options.iter().map(|e| store_entity(ctx.data, *e)).collect(),
+    });
+    let mut r = plain_reply(text, Outcome::Clarify, Some(intent), confidence, a);
+    r.slots = slots_out(ctx.data, &slots);
+    r.options = options
+        .iter()
+        .zip(labels)
+        .map(|(e, text)| {
+            let st = store_entity(ctx.data, *e);
+            OptionOut { kind: st.kind, id: st.id, text }
+        })
+        .collect();
+    r
+}
+
+fn run(ctx: &TurnContext, s: &mut Session, intent: &Intent, slots: Slots, confidence: f32, a: &Analysis) -> Reply {
+    let topics = ctx.catalog.topics();
+    let input = OpInput { data: ctx.data, slots: &slots, now: ctx.now, settings: &intent.settings, topics: &topics };
+    match (intent.operation.run)(&input) {
+        OpOutput::Choose { slot, options } if options.is_empty() => {
+            proceed(ctx, s, intent, slots, Some(Need::Missing { slot: slot.to_string() }), confidence, a)
+        }
+        OpOutput::Choose { slot, options } => ask_choice(ctx, s, intent, slots, slot, options, confidence, a),
+        OpOutput::Done { outcome, facts, mentioned } => {
+            let spec = intent.operation.outcome(outcome).expect("operations return declared outcomes");
+            let mut values: HashMap<String, Value> = facts.clone();
+            for (k, v) in &slots {
+                values.entry(k.clone()).or_insert_with(|| Value::Text(v.display(ctx.data)));
+            }
+            let text = intent.replies.get(outcome).map(|t| t.render(&values, ctx.style)).unwrap_or_default();
+            s.last_intent = Some(intent.name.clone());
+            s.last_slots = store_slots(ctx.data, &slots);
+            let mut remembered: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
+            remembered.extend(mentioned);
+            s.remember(ctx.data, &remembered);
+            let class = match spec.class {
+                OutcomeClass::Answered => Outcome::Answered,
+                OutcomeClass::NoData => Outcome::NoData,
+            };
+            Reply {
+                text,
+                intent: Some(intent.name.clone()),
+                slots: slots_out(ctx.data, &slots),
+                outcome: class,
+                detail: Some(outcome.to_string()),
+                confidence,
+                options: vec![],
+                facts,
+                candidates: a.scores.iter().take(3).cloned().collect(),
+            }
+        }
+    }
+}
+
+/// Tries to read the message as the answer to the pending question. `None`
+/// means it is not an answer, and the message is handled as a new question
+/// (the pending question is dropped).
+fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis) -> Option<Reply> {
+    let intent = ctx.catalog.intent(&p.intent)?;
+    let def = intent.slot(&p.slot)?;
+    let carried = load_slots(ctx.data, &p.slots);
+    // A clearly different question wins over a loose answer.
+    let new_question = a.scores.first().is_some_and(|b| b.score >= 0.75 && b.intent != p.intent);
+    let value = if p.options.is_empty() {
+        if new_question {
+            return None;
+        }
+        let filled = fill(ctx.data, intent, a, &carried);
+        if filled.slots.contains_key(&p.slot) || filled.need.as_ref().is_some_and(|n| !matches!(n, Need::Missing { slot } if *slot == p.slot)) {
+            let confidence = filled.certainty;
+            return Some(proceed(ctx, s, intent, filled.slots, filled.need, confidence, a));
+        }
+        return None;
+    } else {
+        let options: Vec<EntityRef> = p.options.iter().filter_map(|o| load_entity(ctx.data, o)).collect();
+        match pick(ctx.data, &options, a) {
+            Picked::One(e) => SlotValue::Entity { entity: e },
+            Picked::Some(narrowed) if !new_question => {
+                return Some(ask_choice(ctx, s, intent, carried, &p.slot, narrowed, 1.0, a));
+            }
+            _ => return None,
+        }
+    };
+    let _ = def;
+    let mut slots = carried;
+    slots.insert(p.slot.clone(), value);
+    // Fill anything else the intent still needs from this message.
+    let filled = fill(ctx.data, intent, a, &slots);
+    Some(proceed(ctx, s, intent, filled.slots, filled.need, 1.0, a))
+}
+
+enum Picked {
+    One(EntityRef),
+    Some(Vec<EntityRef>),
+    None,
+}
+
+const ORDINALS: [(&str, usize); 8] =
+    [("first", 0), ("second", 1), ("third", 2), ("fourth", 3), ("fifth", 4), ("sixth", 5), ("1st", 0), ("2nd", 1)];
+
+/// Which of the offered options the message picks: by position ("the second
+/// one"), by name or part of it, by sport noun ("the rower"), by group ("the
+/// one from X"), or by an event detail ("the women's").
+fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
+    let toks: Vec<&str> = a.tokens.iter().map(String::as_str).collect();
+    let short = toks.len() <= 5;
+    if short {
+        for (w, i) in ORDINALS {
+            if toks.contains(&w) && i < options.len() {
+                return Picked::One(options[i]);
+            }
+        }
+        if toks.contains(&"last") {
+            if let Some(e) = options.last() {
+                return Picked::One(*e);
+            }
+        }
+        if let [n] = toks.as_slice() {
+            if let Ok(k) = n.parse::<usize>() {
+                if (1..=options.len()).contains(&k) {
+                    return Picked::One(options[k - 1]);
+                }
+            }
+        }
+    }
+    let mut keep: Vec<EntityRef> = options.to_vec();
+    let mut narrowed = false;
+    // Each detail narrows the options, unless it would rule out all of them.
+    let mut apply = |f: &dyn Fn(&EntityRef) -> bool| {
+        let next: Vec<EntityRef> = keep.iter().copied().filter(|e| f(e)).collect();
+        if !next.is_empty() && next.len() < keep.len() {
+            keep = next;
+            narrowed = true;
+        }
+        narrowed
+    };
+    // Names mentioned in the message.
+    let named: Vec<EntityRef> = a
+        .mentions
+        .iter()
+        .flat_map(|m| m.candidates.iter())
+        .filter_map(|(t, _)| match t {
+            Target::Entity(e, _) => Some(*e),
+            _ => None,
+        })
+        .collect();
+    apply(&|e| named.contains(e));
+    if let Some(sport) = sport_noun(a) {
+        apply(&|e| sport_of(data, *e) == Some(sport));
+    }
+    for m in &a.mentions {
+        match m.candidates.first() {
+            Some((Target::Entity(EntityRef::Group(g), _), _)) => {
+                let g = *g;
+                apply(&|e| group_of(data, *e) == Some(g));
+            }
+            Some((Target::Entity(EntityRef::Sport(sp), _), _)) => {
+                let sp = *sp;
+                apply(&|e| sport_of(data, *e) == Some(sp));
+            }
+            _ => {}
+        }
+    }
+    // Event details narrow contest options.
+    if options.iter().all(|e| matches!(e, EntityRef::Contest(_))) {
+        if let Ok(Some(ci)) = resolve_contest(data, a, &Slots::new()) {
+            apply(&|e| *e == EntityRef::Contest(ci));
+        }
+        for m in &a.mentions {
+            match m.candidates.first() {
+                Some((Target::Category(c), _)) => {
+                    let c = c.clone();
+                    apply(&|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].category.as_deref() == Some(c.as_str())));
+                }
+                Some((Target::Phase(p), _)) => {
+                    let p = p.clone();
+                    apply(&|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].phase.starts_with(p.as_str())));
+                }
+                _ => {}
+            }
+        }
+    }
+    // Words of the option's own label ("the 400 m one", "Quillon").
+    if !apply(&|_| true) {
+        let label_hit = |e: &EntityRef| {
+            let label = crate::understand::normalize::normalize(&describe(data, *e));
+            toks.iter().any(|t| t.len() >= 3 && !matches!(*t, "the" | "one") && label.split(' ').any(|w| w == *t))
+        };
+        apply(&label_hit);
+    }
+    match keep.as_slice() {
+        [one] if narrowed => Picked::One(*one),
+        _ if narrowed => Picked::Some(keep),
+        _ => Picked::None,
+    }
+}
+
+fn sport_of(data: &Dataset, e: EntityRef) -> Option<usize> {
+    match e {
+        EntityRef::Competitor(i) => data.sport(&data.competitors[i].sport),
+        EntityRef::Contest(i) => data.sport(&data.contests[i].sport),
+        EntityRef::Discipline(s, _) | EntityRef::Sport(s) => Some(s),
+        EntityRef::Group(_) => None,
+    }
+}
+
+fn group_of(data: &Dataset, e: EntityRef) -> Option<usize> {
+    match e {
+        EntityRef::Competitor(i) => data.group(&data.competitors[i].group),
+        EntityRef::Group(g) => Some(g),
+        _ => None,
+    }
+}
+
+/// A label that tells options apart: "Zoë Quillon, swimmer, Quessary".
+pub fn describe(data: &Dataset, e: EntityRef) -> String {
+    match e {
+        EntityRef::Competitor(i) => {
+            let c = &data.competitors[i];
+            let noun = data.sport(&c.sport).map(|s| data.sports[s].noun.as_str()).unwrap_or("");
+            let group = data.group(&c.group).map(|g| data.groups[g].name.as_str()).unwrap_or("");
+            format!("{} ({noun}, {group})", c.name())
+        }
+        EntityRef::Contest(i) => format!("the {}", data.contest_name(i)),
+        other => data.entity_name(other),
+    }
+}
+
+fn noun_for(data: &Dataset, e: EntityRef) -> &'static str {
+    let _ = data;
+    match e {
+        EntityRef::Competitor(_) => "person",
+        EntityRef::Group(_) => "team",
+        EntityRef::Sport(_) => "sport",
+        EntityRef::Discipline(..) | EntityRef::Contest(_) => "event",
+    }
+}
+
+fn slots_out(data: &Dataset, slots: &Slots) -> BTreeMap<String, SlotOut> {
+    slots
+        .iter()
+        .map(|(k, v)| (k.clone(), SlotOut { kind: v.kind(), value: v.key(data), text: v.display(data) }))
+        .collect()
+}
+
+fn plain_reply(text: String, outcome: Outcome, intent: Option<&Intent>, confidence: f32, a: &Analysis) -> Reply {
+    Reply {
+        text,
+        intent: intent.map(|i| i.name.clone()),
+        slots: BTreeMap::new(),
+        outcome,
+        detail: None,
+        confidence,
+        options: vec![],
+        facts: HashMap::new(),
+        candidates: a.scores.iter().take(3).cloned().collect(),
+    }
+}
+
+fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
+    let mut values = HashMap::new();
+    values.insert("examples".to_string(), Value::List(ctx.catalog.service.examples.iter().map(|e| Value::Text(format!("\u{201c}{e}\u{201d}"))).collect()));
+    let text = ctx.catalog.service.not_understood.render(&values, ctx.style);
+    let confidence = a.scores.first().map(|s| s.score).unwrap_or(0.0);
+    let mut r = plain_reply(text, Outcome::NotUnderstood, None, 1.0 - confidence, a);
+    r.confidence = (1.0 - confidence).clamp(0.0, 1.0);
+    r
+}

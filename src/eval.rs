@@ -1,0 +1,268 @@
+//! Measuring quality on a labelled question set: intent accuracy, slot
+//! micro-F1, answer accuracy and the wrong-answer rate.
+//!
+//! A set is YAML: a list of cases, each either one question or a
+//! conversation of several turns. Each turn may say which intent and slots
+//! it expects, the reply's outcome, and phrases the reply must (`says`) or
+//! must not (`never`) contain. See `docs/eval.md`.
+//!
+//! Slot F1 follows the chunk-level definition used for CoNLL-2000: a
+//! predicted (slot, value) pair counts only if it matches an expected pair
+//! exactly; precision and recall are pooled over all turns (micro average).
+
+use std::collections::BTreeMap;
+use std::path::Path;
+use std::time::Duration;
+
+use serde::{Deserialize, Serialize};
+
+use crate::cli::Common;
+use crate::dialogue::Outcome;
+use crate::engine::Engine;
+
+/// One labelled turn.
+#[derive(Debug, Clone, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Turn {
+    pub ask: String,
+    /// Expected intent; `none` when the message should not be understood.
+    #[serde(default)]
+    pub intent: Option<String>,
+    /// Expected slots by name: entity ids, ISO 8601 dates, numbers.
+    #[serde(default)]
+    pub slots: Option<BTreeMap<String, String>>,
+    #[serde(default)]
+    pub outcome: Option<Outcome>,
+    /// Phrases the reply must contain (case-insensitive).
+    #[serde(default)]
+    pub says: Vec<String>,
+    /// Phrases the reply must not contain.
+    #[serde(default)]
+    pub never: Vec<String>,
+}
+
+/// A case: one question, or a conversation.
+#[derive(Debug, Clone, Deserialize)]
+#[serde(untagged)]
+pub enum Case {
+    Conversation {
+        conversation: Vec<Turn>,
+        #[serde(default)]
+        tags: Vec<String>,
+    },
+    Single {
+        #[serde(flatten)]
+        turn: Turn,
+        #[serde(default)]
+        tags: Vec<String>,
+    },
+}
+
+impl<'de> Deserialize<'de> for Outcome {
+    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> Result<Self, D::Error> {
+        let s = String::deserialize(d)?;
+        match s.as_str() {
+            "answered" => Ok(Outcome::Answered),
+            "clarify" => Ok(Outcome::Clarify),
+            "not_understood" => Ok(Outcome::NotUnderstood),
+            "no_data" => Ok(Outcome::NoData),
+            other => Err(serde::de::Error::custom(format!(
+                "unknown outcome {other:?}; use answered, clarify, not_understood or no_data"
+            ))),
+        }
+    }
+}
+
+/// A turn that did not meet its labels.
+#[derive(Debug, Clone, Serialize)]
+pub struct Failure {
+    pub case: usize,
+    pub ask: String,
+    pub problems: Vec<String>,
+    pub reply: String,
+}
+
+/// The figures.
+#[derive(Debug, Clone, Default, Serialize)]
+pub struct Report {
+    pub cases: usize,
+    pub turns: usize,
+    pub conversations: usize,
+    pub intent_total: usize,
+    pub intent_correct: usize,
+    pub intent_accuracy: f64,
+    pub slot_precision: f64,
+    pub slot_recall: f64,
+    pub slot_f1: f64,
+    pub answer_total: usize,
+    pub answer_correct: usize,
+    pub answer_accuracy: f64,
+    /// Confident answers (outcome answered) with a wrong fact, over all turns.
+    pub wrong_answers: usize,
+    pub wrong_answer_rate: f64,
+    pub failures: Vec<Failure>,
+}
+
+/// Targets for the demo set.
+pub const TARGETS: [(&str, f64); 3] = [("intent_accuracy", 0.97), ("slot_f1", 0.95), ("wrong_answer_rate_max", 0.005)];
+
+impl Report {
+    /// Whether the figures meet [`TARGETS`].
+    pub fn meets_targets(&self) -> bool {
+        self.intent_accuracy >= TARGETS[0].1 && self.slot_f1 >= TARGETS[1].1 && self.wrong_answer_rate <= TARGETS[2].1
+    }
+}
+
+/// Reads a question set.
+pub fn load_set(path: &Path) -> Result<Vec<Case>, String> {
+    let text = std::fs::read_to_string(path).map_err(|e| format!("{}: cannot read: {e}", path.display()))?;
+    serde_saphyr::from_str(&text).map_err(|e| {
+        let (l, c) = e.location().map(|l| (l.line(), l.column())).unwrap_or((0, 0));
+        format!("{}:{l}:{c}: {}", path.display(), e.to_string().lines().next().unwrap_or("invalid YAML"))
+    })
+}
+
+/// Runs every case through the engine; each case is a fresh reader.
+pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
+    let mut r = Report { cases: cases.len(), ..Report::default() };
+    let (mut tp, mut fp, mut fn_) = (0usize, 0usize, 0usize);
+    for (ci, case) in cases.iter().enumerate() {
+        let turns: Vec<&Turn> = match case {
+            Case::Single { turn, .. } => vec![turn],
+            Case::Conversation { conversation, .. } => {
+                r.conversations += 1;
+                conversation.iter().collect()
+            }
+        };
+        let user = format!("eval-{ci}");
+        for t in turns {
+            r.turns += 1;
+            let answer = match engine.handle(&user, "chat", &t.ask).await {
+                Ok(a) => a,
+                Err(e) => {
+                    r.failures.push(Failure { case: ci + 1, ask: t.ask.clone(), problems: vec![e.to_string()], reply: String::new() });
+                    continue;
+                }
+            };
+            let reply = &answer.reply;
+            let mut problems = Vec::new();
+            let mut fact_wrong = false;
+            if let Some(want) = &t.intent {
+                r.intent_total += 1;
+                let got = reply.intent.clone().unwrap_or_else(|| "none".into());
+                if &got == want {
+                    r.intent_correct += 1;
+                } else {
+                    problems.push(format!("intent: expected {want}, got {got}"));
+                    fact_wrong = true;
+                }
+            }
+            if let Some(want) = &t.slots {
+                let got: BTreeMap<String, String> = reply.slots.iter().map(|(k, v)| (k.clone(), v.value.clone())).collect();
+                for (k, v) in &got {
+                    if want.get(k) == Some(v) {
+                        tp += 1;
+                    } else {
+                        fp += 1;
+                        problems.push(format!("slot {k}: got {v}, expected {}", want.get(k).map(String::as_str).unwrap_or("nothing")));
+                        fact_wrong = true;
+                    }
+                }
+                for (k, v) in want {
+                    if got.get(k) != Some(v) {
+                        fn_ += 1;
+                        if !got.contains_key(k) {
+                            problems.push(format!("slot {k}: missing, expected {v}"));
+                        }
+                    }
+                }
+            }
+            let mut answer_ok = true;
+            if let Some(o) = t.outcome {
+                if reply.outcome != o {
+                    problems.push(format!("outcome: expected {o:?}, got {:?}", reply.outcome));
+                    answer_ok = false;
+                }
+            }
+            let lower = reply.text.to_lowercase();
+            for s in &t.says {
+                if !lower.contains(&s.to_lowercase()) {
+                    problems.push(format!("reply lacks {s:?}"));
+                    answer_ok = false;
+                    fact_wrong = true;
+                }
+            }
+            for s in &t.never {
+                if lower.contains(&s.to_lowercase()) {
+                    problems.push(format!("reply contains {s:?}"));
+                    answer_ok = false;
+                    fact_wrong = true;
+                }
+            }
+            if t.outcome.is_some() || !t.says.is_empty() || !t.never.is_empty() {
+                r.answer_total += 1;
+                if answer_ok {
+                    r.answer_correct += 1;
+                }
+            }
+            // Wrong-answer: the service answered with confidence, and the
+            // answer's intent, slots or facts were wrong.
+            if reply.outcome == Outcome::Answered && fact_wrong {
+                r.wrong_answers += 1;
+            }
+            if !problems.is_empty() {
+                r.failures.push(Failure { case: ci + 1, ask: t.ask.clone(), problems, reply: reply.text.clone() });
+            }
+        }
+    }
+    let ratio = |a: usize, b: usize| if b == 0 { 1.0 } else { a as f64 / b as f64 };
+    r.intent_accuracy = ratio(r.intent_correct, r.intent_total);
+    r.slot_precision = ratio(tp, tp + fp);
+    r.slot_recall = ratio(tp, tp + fn_);
+    r.slot_f1 = if r.slot_precision + r.slot_recall == 0.0 {
+        0.0
+    } else {
+        2.0 * r.slot_precision * r.slot_recall / (r.slot_precision + r.slot_recall)
+    };
+    r.answer_accuracy = ratio(r.answer_correct, r.answer_total);
+    r.wrong_answer_rate = if r.turns == 0 { 0.0 } else { r.wrong_answers as f64 / r.turns as f64 };
+    r
+}
+
+/// `tidings eval`.
+pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool) -> i32 {
+    let engine = match crate::cli::local_engine(common, Duration::from_secs(3600)) {
+        Ok(e) => e,
+        Err(e) => {
+            eprintln!("{e}");
+            return 1;
+        }
+    };
+    let cases = match load_set(set) {
+        Ok(c) => c,
+        Err(e) => {
+            eprintln!("{e}");
+            return 1;
+        }
+    };
+    let r = evaluate(&engine, &cases).await;
+    if json {
+        println!("{}", serde_json::to_string_pretty(&r).unwrap_or_default());
+    } else {
+        if verbose {
+            for f in &r.failures {
+                println!("case {}: {:?}\n  reply: {}\n  {}", f.case, f.ask, f.reply, f.problems.join("\n  "));
+            }
+        }
+        println!("cases {} ({} conversations), turns {}", r.cases, r.conversations, r.turns);
+        println!("intent accuracy   {:.4}  ({}/{})  target >= 0.97", r.intent_accuracy, r.intent_correct, r.intent_total);
+        println!("slot F1 (micro)   {:.4}  (precision {:.4}, recall {:.4})  target >= 0.95", r.slot_f1, r.slot_precision, r.slot_recall);
+        println!("answer accuracy   {:.4}  ({}/{})", r.answer_accuracy, r.answer_correct, r.answer_total);
+        println!("wrong-answer rate {:.4}  ({}/{})  target <= 0.005", r.wrong_answer_rate, r.wrong_answers, r.turns);
+    }
+    if r.meets_targets() {
+        0
+    } else {
+        1
+    }
+}

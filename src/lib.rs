@@ -1,0 +1,50 @@
+//! Tidings answers readers' questions about a newsroom's results data, in
+//! their own words, with follow-ups, phrased for the channel they use.
+//!
+//! # Module map
+//!
+//! - [`dataset`]: the results model (contests, competitors, groups,
+//!   results), loading and validating a scenario's files.
+//! - [`catalog`]: the intents editors write in YAML and their reply wording
+//!   ([`catalog::template`]).
+//! - [`understand`]: normalising text, finding names (exact and fuzzy),
+//!   scoring intents, filling slots.
+//! - [`answers`]: the closed set of data operations ([`answers::ops`]) and
+//!   the values and words they are phrased with.
+//! - [`dialogue`]: sessions, their stores and one turn of a conversation.
+//! - [`engine`]: the current snapshot, the store and the clock behind one
+//!   entry point, [`engine::Engine::handle`].
+//! - [`http`]: the HTTP API. [`cli`]: the command line. [`eval`]: measuring
+//!   quality on a labelled question set.
+//!
+//! # Quick example
+//!
+//! ```
+//! # tokio::runtime::Runtime::new().unwrap().block_on(async {
+//! use std::sync::Arc;
+//! use tidings::engine::{self, Clock, Engine, Settings, Sources};
+//! use tidings::dialogue::MemoryStore;
+//!
+//! let snap = engine::load(&Sources::default()).unwrap();
+//! let settings = Settings {
+//!     clock: Clock::System,
+//!     session_ttl: std::time::Duration::from_secs(60),
+//!     id_secret: b"example".to_vec(),
+//! };
+//! let engine = Engine::new(snap, Arc::new(MemoryStore::new()), settings);
+//! let answer = engine.handle("reader-1", "chat", "hello").await.unwrap();
+//! assert!(!answer.reply.text.is_empty());
+//! # });
+//! ```
+
+#![forbid(unsafe_code)]
+
+pub mod answers;
+pub mod catalog;
+pub mod cli;
+pub mod dataset;
+pub mod dialogue;
+pub mod engine;
+pub mod eval;
+pub mod http;
+pub mod understand;

@@ -1,0 +1,341 @@
+//! The lexicon: every name a reader may use for something in the dataset,
+//! built from the data itself (no hand-written lists per name), and the
+//! spotter that finds those names in a message.
+//!
+//! Exact names and aliases are found with one Aho–Corasick automaton over
+//! normalised text, kept to whole words. Words left over are looked up in a
+//! fuzzy index (trigrams and sound-alike keys, re-ranked by Jaro–Winkler), so
+//! "Zoey Quilon" still finds "Zoë Quillon" without scanning every name.
+
+use std::collections::{HashMap, HashSet};
+
+use aho_corasick::{AhoCorasick, AhoCorasickBuilder, MatchKind};
+
+use super::fuzzy::FuzzyIndex;
+use super::normalize::normalize;
+use crate::dataset::{Dataset, EntityRef};
+
+/// What a surface form points at.
+#[derive(Debug, Clone, PartialEq, Eq, Hash)]
+pub enum Target {
+    /// A dataset entity, and how it was named.
+    Entity(EntityRef, Form),
+    /// A category such as "women".
+    Category(String),
+    /// A contest phase such as "final" or "heat 1".
+    Phase(String),
+    /// One of the scenario's awards.
+    Award(String),
+    /// "the rower": a sport named by what its competitors are called.
+    SportNoun(usize),
+}
+
+/// How an entity was named: fuller names are more certain.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum Form {
+    Full,
+    Alias,
+    Family,
+    Given,
+}
+
+impl Form {
+    /// How sure a match of this form is, before any fuzziness.
+    pub fn weight(self) -> f32 {
+        match self {
+            Form::Full | Form::Alias => 1.0,
+            Form::Family => 0.9,
+            Form::Given => 0.85,
+        }
+    }
+}
+
+/// A stretch of the message that names something.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Mention {
+    /// Token range `[start, end)` in the normalised message.
+    pub start: usize,
+    pub end: usize,
+    /// What it may mean, best first, with a score in (0, 1].
+    pub candidates: Vec<(Target, f32)>,
+    /// Whether the words matched a name exactly.
+    pub exact: bool,
+}
+
+impl Mention {
+    /// The best score among the candidates.
+    pub fn best(&self) -> f32 {
+        self.candidates.first().map(|c| c.1).unwrap_or(0.0)
+    }
+}
+
+/// The lexicon built for one dataset and one catalog.
+#[derive(Debug)]
+pub struct Lexicon {
+    automaton: AhoCorasick,
+    /// Targets per automaton pattern.
+    targets: Vec<Vec<Target>>,
+    fuzzy: FuzzyIndex,
+    /// Targets per fuzzy term id.
+    fuzzy_targets: Vec<Vec<Target>>,
+    /// Word count per fuzzy term id.
+    fuzzy_words: Vec<usize>,
+    /// Words of the catalog's phrasings and other common words, which are
+    /// never taken for a misspelt name.
+    vocabulary: HashSet<String>,
+}
+
+/// Words too common to be a name on their own, whatever the data says.
+const COMMON: &[&str] = &[
+    "a", "an", "the", "and", "or", "of", "in", "on", "at", "to", "for", "by", "with", "from", "is", "was", "were", "are", "be",
+    "did", "do", "does", "has", "have", "had", "who", "what", "when", "where", "which", "how", "many", "much", "i", "me", "my",
+    "you", "your", "he", "she", "they", "him", "her", "them", "his", "their", "it", "its", "this", "that", "these", "those", "one",
+    "ones", "so", "far", "yet", "now", "about", "tell", "show", "give", "please", "thanks", "thank", "hi", "hello", "hey", "ok",
+    "okay", "yes", "no", "not", "still", "get", "got", "won", "win", "wins", "winner", "race", "event", "results", "result",
+    "medal", "medals", "team", "time", "next", "last", "first", "second", "third", "up", "over", "out", "all", "any", "can", "will",
+    "would", "could", "should", "there", "here", "then", "than", "just", "only", "also", "too", "very", "more", "most", "less",
+    "did", "done", "go", "went", "going", "compete", "competing", "start", "starts", "leading", "leads", "lead", "leader", "best",
+    "top", "table", "day", "days", "today", "tomorrow", "yesterday", "tonight", "morning", "evening", "afternoon", "place",
+];
+
+impl Lexicon {
+    /// Builds the lexicon from the data and the phrasing vocabulary.
+    pub fn build(data: &Dataset, phrasing_words: impl IntoIterator<Item = String>) -> Lexicon {
+        let mut vocabulary: HashSet<String> = COMMON.iter().map(|s| s.to_string()).collect();
+        vocabulary.extend(phrasing_words);
+
+        let mut forms: HashMap<String, Vec<Target>> = HashMap::new();
+        let mut add = |surface: &str, t: Target| {
+            let n = normalize(surface);
+            if n.is_empty() {
+                return;
+            }
+            let v = forms.entry(n).or_default();
+            if !v.contains(&t) {
+                v.push(t);
+            }
+        };
+        for (i, c) in data.competitors.iter().enumerate() {
+            let e = EntityRef::Competitor(i);
+            add(&c.name(), Target::Entity(e, Form::Full));
+            add(&format!("{} {}", c.family, c.given), Target::Entity(e, Form::Full));
+            for a in &c.aliases {
+                add(a, Target::Entity(e, Form::Alias));
+            }
+            add(&c.family, Target::Entity(e, Form::Family));
+            add(&c.given, Target::Entity(e, Form::Given));
+        }
+        for (i, g) in data.groups.iter().enumerate() {
+            let e = EntityRef::Group(i);
+            add(&g.name, Target::Entity(e, Form::Full));
+            if let Some(code) = &g.code {
+                add(code, Target::Entity(e, Form::Alias));
+            }
+            for a in &g.aliases {
+                add(a, Target::Entity(e, Form::Alias));
+            }
+        }
+        for (si, s) in data.sports.iter().enumerate() {
+            let e = EntityRef::Sport(si);
+            add(&s.name, Target::Entity(e, Form::Full));
+            for a in &s.aliases {
+                add(a, Target::Entity(e, Form::Alias));
+            }
+            add(&s.noun, Target::SportNoun(si));
+            add(&crate::answers::words::plural(&s.noun), Target::SportNoun(si));
+            for (di, d) in s.disciplines.iter().enumerate() {
+                let e = EntityRef::Discipline(si, di);
+                add(&d.name, Target::Entity(e, Form::Full));
+                for a in &d.aliases {
+                    add(a, Target::Entity(e, Form::Alias));
+                }
+            }
+        }
+        for (ci, c) in data.contests.iter().enumerate() {
+            for a in &c.aliases {
+                add(a, Target::Entity(EntityRef::Contest(ci), Form::Alias));
+            }
+            add(&c.phase, Target::Phase(c.phase.clone()));
+            if let Some(cat) = &c.category {
+                add(cat, Target::Category(cat.clone()));
+                for syn in category_synonyms(cat) {
+                    add(syn, Target::Category(cat.clone()));
+                }
+            }
+        }
+        add("heats", Target::Phase("heat".into()));
+        add("heat", Target::Phase("heat".into()));
+        add("semis", Target::Phase("semifinal".into()));
+        add("semi final", Target::Phase("semifinal".into()));
+        for a in data.awards() {
+            add(a, Target::Award(a.clone()));
+            add(&format!("{a} medal"), Target::Award(a.clone()));
+        }
+
+        // A first or family name that is also an everyday word of the
+        // catalog would turn questions into name lookups: keep only full
+        // names for those.
+        for (surface, ts) in forms.iter_mut() {
+            if vocabulary.contains(surface) {
+                ts.retain(|t| !matches!(t, Target::Entity(_, Form::Given | Form::Family)));
+            }
+        }
+        forms.retain(|_, ts| !ts.is_empty());
+
+        let mut surfaces: Vec<String> = forms.keys().cloned().collect();
+        surfaces.sort();
+        let targets: Vec<Vec<Target>> = surfaces.iter().map(|s| forms[s].clone()).collect();
+        let automaton = AhoCorasickBuilder::new()
+            .match_kind(MatchKind::Standard)
+            .build(&surfaces)
+            .expect("the lexicon's patterns are plain strings of bounded size");
+
+        // Fuzzy terms: names of people, groups, sports and disciplines. Not
+        // codes or categories: those are short and better matched exactly.
+        let mut fuzzy_terms = Vec::new();
+        let mut fuzzy_targets: Vec<Vec<Target>> = Vec::new();
+        let mut fuzzy_words = Vec::new();
+        for (surface, ts) in surfaces.iter().zip(&targets) {
+            let keep: Vec<Target> = ts
+                .iter()
+                .filter(|t| matches!(t, Target::Entity(..) | Target::SportNoun(_)))
+                .cloned()
+                .collect();
+            if keep.is_empty() || surface.len() < 4 {
+                continue;
+            }
+            fuzzy_terms.push((surface.clone(), fuzzy_targets.len() as u32));
+            fuzzy_targets.push(keep);
+            fuzzy_words.push(surface.split(' ').count());
+        }
+        let fuzzy = FuzzyIndex::new(fuzzy_terms);
+        Lexicon { automaton, targets, fuzzy, fuzzy_targets, fuzzy_words, vocabulary }
+    }
+
+    /// Whether a word is an ordinary word of the catalog's questions.
+    pub fn is_vocabulary(&self, word: &str) -> bool {
+        self.vocabulary.contains(word)
+    }
+
+    /// Finds names in normalised text split into tokens.
+    pub fn spot(&self, text: &str, tokens: &[&str]) -> Vec<Mention> {
+        // Byte offset of each token start and end, to map matches to tokens.
+        let mut starts = Vec::with_capacity(tokens.len());
+        let mut ends = Vec::with_capacity(tokens.len());
+        let mut pos = 0;
+        for t in tokens {
+            let at = text[pos..].find(t).map(|o| pos + o).unwrap_or(pos);
+            starts.push(at);
+            ends.push(at + t.len());
+            pos = at + t.len();
+        }
+        // Every whole-word match, then leftmost-longest among them: filtering
+        // before choosing keeps a longer non-word match ("100 m free" inside
+        // "100 m freestyle") from hiding a shorter whole-word one.
+        let mut found: Vec<(usize, usize, usize)> = Vec::new();
+        for m in self.automaton.find_overlapping_iter(text) {
+            let (Some(s), Some(e)) = (starts.iter().position(|&b| b == m.start()), ends.iter().position(|&b| b == m.end())) else {
+                continue;
+            };
+            found.push((s, e + 1, m.pattern().as_usize()));
+        }
+        found.sort_by(|a, b| a.0.cmp(&b.0).then((b.1 - b.0).cmp(&(a.1 - a.0))));
+        let mut mentions = Vec::new();
+        let mut covered = vec![false; tokens.len()];
+        for (s, e, p) in found {
+            if covered[s..e].iter().any(|&c| c) {
+                continue;
+            }
+            covered[s..e].iter_mut().for_each(|c| *c = true);
+            let mut candidates: Vec<(Target, f32)> = self.targets[p]
+                .iter()
+                .map(|t| {
+                    let w = match t {
+                        Target::Entity(_, f) => f.weight(),
+                        _ => 1.0,
+                    };
+                    (t.clone(), w)
+                })
+                .collect();
+            sort_candidates(&mut candidates);
+            mentions.push(Mention { start: s, end: e, candidates, exact: true });
+        }
+        self.spot_fuzzy(tokens, &mut covered, &mut mentions);
+        mentions.sort_by_key(|m| m.start);
+        mentions
+    }
+
+    /// Looks up uncovered, unfamiliar words: pairs first (a full name), then
+    /// single words.
+    fn spot_fuzzy(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
+        let unfamiliar = |covered: &[bool], i: usize| {
+            !covered[i] && tokens[i].len() >= 3 && !self.vocabulary.contains(tokens[i]) && !tokens[i].chars().all(|c| c.is_ascii_digit())
+        };
+        for width in [3usize, 2, 1] {
+            if tokens.len() < width {
+                continue;
+            }
+            let mut i = 0;
+            while i + width <= tokens.len() {
+                // A window may include one familiar word only when it is a
+                // multi-word window anchored by unfamiliar words at both ends.
+                let ok = (i..i + width).all(|k| !covered[k])
+                    && unfamiliar(covered, i)
+                    && unfamiliar(covered, i + width - 1)
+                    && (width < 3 || (i..i + width).filter(|&k| unfamiliar(covered, k)).count() >= 2);
+                if !ok {
+                    i += 1;
+                    continue;
+                }
+                let query = tokens[i..i + width].join(" ");
+                let min = if width == 1 { 0.88 } else { 0.84 };
+                let hits = self.fuzzy.lookup(&query, min, 8);
+                // A single word must look like a single-word name, and a pair
+                // like a pair; otherwise "long jupm" would match a person.
+                let hits: Vec<_> = hits
+                    .into_iter()
+                    .filter(|h| self.fuzzy_term_words(h.id) == width || (width == 1 && h.score > 0.93))
+                    .collect();
+                if hits.is_empty() {
+                    i += 1;
+                    continue;
+                }
+                let mut candidates = Vec::new();
+                for h in &hits {
+                    for t in &self.fuzzy_targets[h.id as usize] {
+                        let w = match t {
+                            Target::Entity(_, f) => f.weight(),
+                            _ => 1.0,
+                        };
+                        // A fuzzy match is never as certain as an exact one.
+                        candidates.push((t.clone(), (h.score as f32) * w * 0.97));
+                    }
+                }
+                sort_candidates(&mut candidates);
+                covered[i..i + width].iter_mut().for_each(|c| *c = true);
+                mentions.push(Mention { start: i, end: i + width, candidates, exact: false });
+                i += width;
+            }
+        }
+    }
+
+    fn fuzzy_term_words(&self, id: u32) -> usize {
+        self.fuzzy_words.get(id as usize).copied().unwrap_or(0)
+    }
+}
+
+/// Words readers use for the usual categories.
+fn category_synonyms(cat: &str) -> &'static [&'static str] {
+    match cat {
+        "women" => &["womens", "woman", "ladies", "female"],
+        "men" => &["mens", "man", "male"],
+        _ => &[],
+    }
+}
+
+/// Best first; equal scores keep a stable order; one target once.
+fn sort_candidates(c: &mut Vec<(Target, f32)>) {
+    c.sort_by(|a, b| b.1.partial_cmp(&a.1).unwrap_or(std::cmp::Ordering::Equal));
+    let mut seen = HashSet::new();
+    c.retain(|(t, _)| seen.insert(t.clone()));
+}

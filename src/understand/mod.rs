@@ -1,0 +1,179 @@
+//! Understanding: from a reader's text to what they asked.
+//!
+//! - [`normalize`]: one canonical form for text and names (Unicode NFKC,
+//!   case and diacritics folded, number words and units);
+//! - [`fuzzy`]: string similarity and the fuzzy name index;
+//! - [`lexicon`]: names from the dataset, found exactly or fuzzily;
+//! - [`when`]: days and counts;
+//! - [`classify`]: intent scoring against example phrasings.
+//!
+//! [`Understanding`] ties them together for one dataset and catalog.
+
+pub mod classify;
+pub mod fuzzy;
+pub mod lexicon;
+pub mod normalize;
+pub mod slots;
+pub mod when;
+
+use jiff::civil::Date;
+
+use crate::answers::ops::EntityKind;
+use crate::catalog::Catalog;
+use crate::dataset::{Dataset, EntityRef};
+use classify::{Classifier, Scored};
+use lexicon::{Lexicon, Mention, Target};
+
+/// Everything derived from one dataset and one catalog for reading messages.
+#[derive(Debug)]
+pub struct Understanding {
+    pub lexicon: Lexicon,
+    pub classifier: Classifier,
+}
+
+/// What was read from one message.
+#[derive(Debug, Clone)]
+pub struct Analysis {
+    pub normalized: String,
+    pub tokens: Vec<String>,
+    pub mentions: Vec<Mention>,
+    pub days: Vec<when::DayMention>,
+    pub count: Option<(usize, usize, u32)>,
+    /// Tokens with names replaced by their kind, as the scorer sees them.
+    pub abstracted: Vec<String>,
+    /// Intents, best first.
+    pub scores: Vec<Scored>,
+}
+
+/// The placeholder token for a slot kind in phrasings and messages.
+pub fn placeholder(kind: EntityKind) -> &'static str {
+    match kind {
+        EntityKind::Competitor => "<competitor>",
+        EntityKind::Group => "<group>",
+        // A reader names a contest by its discipline, category and phase;
+        // all of it reads as one event.
+        EntityKind::Contest | EntityKind::Discipline => "<event>",
+        EntityKind::Sport => "<sport>",
+        EntityKind::Category => "<category>",
+        EntityKind::Award => "<award>",
+        EntityKind::Date => "<date>",
+        EntityKind::Count => "<count>",
+    }
+}
+
+fn target_placeholder(t: &Target) -> &'static str {
+    match t {
+        Target::Entity(EntityRef::Competitor(_), _) => "<competitor>",
+        Target::Entity(EntityRef::Group(_), _) => "<group>",
+        Target::Entity(EntityRef::Sport(_), _) | Target::SportNoun(_) => "<sport>",
+        Target::Entity(EntityRef::Discipline(..) | EntityRef::Contest(_), _) => "<event>",
+        Target::Category(_) => "<category>",
+        Target::Phase(_) => "<phase>",
+        Target::Award(_) => "<award>",
+    }
+}
+
+/// Splits a phrasing into normalised words, with `{slot}` placeholders
+/// replaced by the token of the slot's kind.
+pub fn phrasing_tokens(phrasing: &str, kind_of: &dyn Fn(&str) -> Option<EntityKind>) -> Vec<String> {
+    let mut out = Vec::new();
+    let mut rest = phrasing;
+    loop {
+        let (lit, after) = match rest.find('{') {
+            Some(i) => (&rest[..i], Some(&rest[i + 1..])),
+            None => (rest, None),
+        };
+        out.extend(normalize::normalize(lit).split(' ').filter(|s| !s.is_empty()).map(String::from));
+        let Some(after) = after else { break };
+        let close = after.find('}').unwrap_or(after.len());
+        let name = after[..close].trim();
+        out.push(kind_of(name).map(placeholder).unwrap_or("<unknown>").to_string());
+        rest = after.get(close + 1..).unwrap_or("");
+    }
+    merge_events(out)
+}
+
+/// Folds runs such as `<category> <event> <phase>` into one `<event>`.
+fn merge_events(tokens: Vec<String>) -> Vec<String> {
+    let part = |t: &str| matches!(t, "<event>" | "<category>" | "<phase>" | "<sport>");
+    let mut out: Vec<String> = Vec::with_capacity(tokens.len());
+    let mut i = 0;
+    while i < tokens.len() {
+        if part(&tokens[i]) {
+            let mut j = i;
+            while j < tokens.len() && part(&tokens[j]) {
+                j += 1;
+            }
+            let run = &tokens[i..j];
+            if run.len() > 1 && run.iter().any(|t| t == "<event>" || t == "<sport>") {
+                out.push("<event>".into());
+            } else {
+                out.extend(run.iter().cloned());
+            }
+            i = j;
+        } else {
+            out.push(tokens[i].clone());
+            i += 1;
+        }
+    }
+    out
+}
+
+impl Understanding {
+    /// Builds the lexicon and scorer for a dataset and catalog.
+    pub fn build(data: &Dataset, catalog: &Catalog) -> Understanding {
+        let mut names = Vec::new();
+        let mut examples = Vec::new();
+        let mut words = Vec::new();
+        for (i, intent) in catalog.intents.iter().enumerate() {
+            names.push(intent.name.clone());
+            let kind_of = |s: &str| intent.slot(s).map(|d| d.kind);
+            for p in &intent.phrasings {
+                let toks = phrasing_tokens(p, &kind_of);
+                words.extend(toks.iter().filter(|t| !t.starts_with('<')).cloned());
+                examples.push((i, p.clone(), toks));
+            }
+        }
+        let lexicon = Lexicon::build(data, words);
+        let classifier = Classifier::new(&names, &examples);
+        Understanding { lexicon, classifier }
+    }
+
+    /// Reads one message.
+    pub fn analyse(&self, text: &str, today: Date) -> Analysis {
+        let normalized = normalize::normalize(text);
+        let toks: Vec<&str> = normalize::tokens(&normalized);
+        let mentions = self.lexicon.spot(&normalized, &toks);
+        let days = when::find_days(&toks, today);
+        let count = when::find_count(&toks);
+        let mut abstracted: Vec<String> = Vec::with_capacity(toks.len());
+        let mut i = 0;
+        while i < toks.len() {
+            if let Some(m) = mentions.iter().find(|m| m.start == i) {
+                abstracted.push(m.candidates.first().map(|c| target_placeholder(&c.0)).unwrap_or("<unknown>").to_string());
+                i = m.end;
+            } else if let Some(d) = days.iter().find(|d| d.start == i) {
+                abstracted.push("<date>".into());
+                i = d.end;
+            } else if let Some((s, e, _)) = count.filter(|c| c.0 == i) {
+                let _ = s;
+                abstracted.push("<count>".into());
+                i = e;
+            } else {
+                abstracted.push(toks[i].to_string());
+                i += 1;
+            }
+        }
+        let abstracted = merge_events(abstracted);
+        let scores = self.classifier.score(&abstracted);
+        Analysis {
+            tokens: toks.iter().map(|s| s.to_string()).collect(),
+            normalized: normalized.clone(),
+            mentions,
+            days,
+            count,
+            abstracted,
+            scores,
+        }
+    }
+}

@@ -1,0 +1,296 @@
+//! Slot filling: from the names found in a message to an intent's slots.
+//!
+//! The rule is never to guess. A name that fits several things becomes a
+//! question listing them; a missing required detail becomes the intent's
+//! own question. Context narrows before asking: "Kovendal in the single
+//! sculls" only fits the rower.
+
+use super::lexicon::{Mention, Target};
+use super::Analysis;
+use crate::answers::ops::{EntityKind, SlotValue, Slots};
+use crate::catalog::Intent;
+use crate::dataset::{Dataset, EntityRef, Status};
+
+/// Candidates closer than this to the best are equally plausible.
+pub const CLOSE: f32 = 0.05;
+/// Most options listed in one clarifying question.
+pub const MAX_OPTIONS: usize = 6;
+
+/// What filling needs from the reader.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Need {
+    /// A required slot has no value.
+    Missing { slot: String },
+    /// A slot fits several entities.
+    Choose { slot: String, options: Vec<EntityRef> },
+    /// The reader named an event the data does not have.
+    NoMatch { slot: String, what: String },
+}
+
+/// The result of filling.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Filled {
+    pub slots: Slots,
+    /// The first thing to ask, if any.
+    pub need: Option<Need>,
+    /// The lowest certainty among names used (1.0 when all were exact).
+    pub certainty: f32,
+}
+
+fn entity_candidates(m: &Mention, want: impl Fn(&EntityRef) -> bool) -> Vec<(EntityRef, f32)> {
+    m.candidates
+        .iter()
+        .filter_map(|(t, s)| match t {
+            Target::Entity(e, _) if want(e) => Some((*e, *s)),
+            _ => None,
+        })
+        .collect()
+}
+
+/// Keeps the candidates within [`CLOSE`] of the best.
+fn top_group(mut c: Vec<(EntityRef, f32)>) -> Vec<(EntityRef, f32)> {
+    c.sort_by(|a, b| b.1.partial_cmp(&a.1).unwrap_or(std::cmp::Ordering::Equal));
+    // One entity once, at its best score (a name and an alias may both match).
+    let mut seen = std::collections::HashSet::new();
+    c.retain(|x| seen.insert(x.0));
+    let best = c.first().map(|x| x.1).unwrap_or(0.0);
+    c.retain(|x| x.1 >= best - CLOSE);
+    c
+}
+
+/// Fills the intent's slots from the analysis; `carried` are slot values
+/// already known (from a clarification answered earlier).
+pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> Filled {
+    let mut slots = carried.clone();
+    let mut need = None;
+    let mut certainty: f32 = 1.0;
+    let mut used: Vec<usize> = Vec::new();
+
+    // Contest context first: it narrows people ("Varga in the single sculls").
+    let categories: Vec<String> = a
+        .mentions
+        .iter()
+        .flat_map(|m| m.candidates.first())
+        .filter_map(|(t, _)| match t {
+            Target::Category(c) => Some(c.clone()),
+            _ => None,
+        })
+        .collect();
+
+    for def in &intent.slots {
+        if slots.contains_key(&def.name) {
+            continue;
+        }
+        let value = match def.kind {
+            EntityKind::Competitor => {
+                let pick = a.mentions.iter().enumerate().find(|(i, m)| {
+                    !used.contains(i) && m.candidates.iter().any(|(t, _)| matches!(t, Target::Entity(EntityRef::Competitor(_), _)))
+                });
+                match pick {
+                    None => None,
+                    Some((i, m)) => {
+                        used.push(i);
+                        let mut c = entity_candidates(m, |e| matches!(e, EntityRef::Competitor(_)));
+                        narrow_people(data, &mut c, &slots, a, &categories);
+                        let g = top_group(c);
+                        certainty = certainty.min(g.first().map(|x| x.1).unwrap_or(1.0));
+                        match g.as_slice() {
+                            [] => None,
+                            [(e, _)] => Some(SlotValue::Entity { entity: *e }),
+                            many => {
+                                need.get_or_insert(Need::Choose {
+                                    slot: def.name.clone(),
+                                    options: many.iter().take(MAX_OPTIONS).map(|x| x.0).collect(),
+                                });
+                                None
+                            }
+                        }
+                    }
+                }
+            }
+            EntityKind::Group | EntityKind::Sport | EntityKind::Discipline => {
+                let want = |e: &EntityRef| match def.kind {
+                    EntityKind::Group => matches!(e, EntityRef::Group(_)),
+                    EntityKind::Sport => matches!(e, EntityRef::Sport(_)),
+                    _ => matches!(e, EntityRef::Discipline(..)),
+                };
+                let pick = a.mentions.iter().enumerate().find(|(i, m)| !used.contains(i) && !entity_candidates(m, want).is_empty());
+                match pick {
+                    None if def.kind == EntityKind::Sport => sport_noun(a).map(|s| SlotValue::Entity { entity: EntityRef::Sport(s) }),
+                    None => None,
+                    Some((i, m)) => {
+                        used.push(i);
+                        let g = top_group(entity_candidates(m, want));
+                        certainty = certainty.min(g.first().map(|x| x.1).unwrap_or(1.0));
+                        match g.as_slice() {
+                            [] => None,
+                            [(e, _)] => Some(SlotValue::Entity { entity: *e }),
+                            many => {
+                                need.get_or_insert(Need::Choose {
+                                    slot: def.name.clone(),
+                                    options: many.iter().take(MAX_OPTIONS).map(|x| x.0).collect(),
+                                });
+                                None
+                            }
+                        }
+                    }
+                }
+            }
+            EntityKind::Category => categories.first().map(|c| SlotValue::Category { value: c.clone() }),
+            EntityKind::Award => a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
+                Target::Award(x) => Some(SlotValue::Award { value: x.clone() }),
+                _ => None,
+            }),
+            EntityKind::Date => a.days.first().map(|d| SlotValue::Date { value: d.date }),
+            EntityKind::Count => a.count.map(|c| SlotValue::Count { value: c.2 }),
+            EntityKind::Contest => match resolve_contest(data, a, &slots) {
+                Ok(None) => None,
+                Ok(Some(ci)) => Some(SlotValue::Entity { entity: EntityRef::Contest(ci) }),
+                Err(Some(options)) => {
+                    need.get_or_insert(Need::Choose { slot: def.name.clone(), options });
+                    None
+                }
+                Err(None) => {
+                    need.get_or_insert(Need::NoMatch { slot: def.name.clone(), what: event_words(a) });
+                    None
+                }
+            },
+        };
+        match value {
+            Some(v) => {
+                slots.insert(def.name.clone(), v);
+            }
+            None if def.required => {
+                need.get_or_insert(Need::Missing { slot: def.name.clone() });
+            }
+            None => {}
+        }
+    }
+    // A competitor's contest can only be checked once both are known: if
+    // the contest was found first, the person was narrowed by it above.
+    Filled { slots, need, certainty }
+}
+
+/// Narrows people by the rest of the message: a contest they are in, a
+/// category, a sport noun ("the rower"), or a group ("from Sordavia").
+fn narrow_people(data: &Dataset, c: &mut Vec<(EntityRef, f32)>, slots: &Slots, a: &Analysis, categories: &[String]) {
+    let keep_if = |c: &mut Vec<(EntityRef, f32)>, f: &dyn Fn(usize) -> bool| {
+        let narrowed: Vec<(EntityRef, f32)> =
+            c.iter().copied().filter(|(e, _)| matches!(e, EntityRef::Competitor(i) if f(*i))).collect();
+        if !narrowed.is_empty() {
+            *c = narrowed;
+        }
+    };
+    if let Some(SlotValue::Entity { entity: EntityRef::Contest(ci) }) = slots.get("contest") {
+        let ci = *ci;
+        keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| *x == ci));
+    } else if let Ok(Some(ci)) = resolve_contest(data, a, slots) {
+        keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| *x == ci));
+    }
+    if let Some(cat) = categories.first() {
+        keep_if(c, &|p| data.competitors[p].category.as_deref() == Some(cat.as_str()));
+    }
+    if let Some(s) = sport_noun(a).or_else(|| mentioned_sport(a)) {
+        keep_if(c, &|p| data.sport(&data.competitors[p].sport) == Some(s));
+    }
+    for m in &a.mentions {
+        if let Some((Target::Entity(EntityRef::Group(g), _), _)) = m.candidates.first() {
+            let g = *g;
+            keep_if(c, &|p| data.group(&data.competitors[p].group) == Some(g));
+        }
+    }
+}
+
+/// A sport named by its competitors' noun ("the rower").
+pub fn sport_noun(a: &Analysis) -> Option<usize> {
+    a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
+        Target::SportNoun(s) => Some(*s),
+        _ => None,
+    })
+}
+
+fn mentioned_sport(a: &Analysis) -> Option<usize> {
+    a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
+        Target::Entity(EntityRef::Sport(s), _) => Some(*s),
+        _ => None,
+    })
+}
+
+fn event_words(a: &Analysis) -> String {
+    let mut words = Vec::new();
+    for m in &a.mentions {
+        if let Some((t, _)) = m.candidates.first() {
+            if matches!(t, Target::Category(_) | Target::Phase(_) | Target::Entity(EntityRef::Discipline(..) | EntityRef::Sport(_), _)) {
+                words.extend(a.tokens[m.start..m.end].iter().cloned());
+            }
+        }
+    }
+    words.join(" ")
+}
+
+/// Finds the contest a message names. `Ok(None)`: no event named;
+/// `Err(Some(options))`: several fit; `Err(None)`: none fits.
+pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Option<usize>, Option<Vec<EntityRef>>> {
+    let mut disciplines: Vec<(usize, usize)> = Vec::new();
+    let mut sport = None;
+    let mut category = None;
+    let mut phase: Option<String> = None;
+    for m in &a.mentions {
+        let Some((top, _)) = m.candidates.first() else { continue };
+        match top {
+            Target::Entity(EntityRef::Contest(ci), _) => return Ok(Some(*ci)),
+            Target::Entity(EntityRef::Discipline(..), _) => {
+                let best = m.best();
+                disciplines.extend(m.candidates.iter().filter(|(_, s)| *s >= best - CLOSE).filter_map(|(t, _)| match t {
+                    Target::Entity(EntityRef::Discipline(s, d), _) => Some((*s, *d)),
+                    _ => None,
+                }));
+            }
+            Target::Entity(EntityRef::Sport(s), _) => sport = Some(*s),
+            Target::Category(c) => category = Some(c.clone()),
+            Target::Phase(p) => phase = Some(p.clone()),
+            _ => {}
+        }
+    }
+    if disciplines.is_empty() && sport.is_none() {
+        return Ok(None);
+    }
+    let person = match slots.get("competitor") {
+        Some(SlotValue::Entity { entity: EntityRef::Competitor(p) }) => Some(*p),
+        _ => None,
+    };
+    let mut fits: Vec<usize> = (0..data.contests.len())
+        .filter(|&ci| {
+            let c = &data.contests[ci];
+            let (s, d) = data.discipline_ref(ci);
+            (disciplines.is_empty() || disciplines.contains(&(s, d)))
+                && sport.is_none_or(|x| x == s)
+                && category.as_ref().is_none_or(|cat| c.category.as_ref() == Some(cat))
+                && phase.as_ref().is_none_or(|p| c.phase == *p || c.phase.starts_with(&format!("{p} ")))
+        })
+        .collect();
+    if let Some(p) = person {
+        let theirs: Vec<usize> = fits.iter().copied().filter(|&ci| data.contests_of(p).iter().any(|(x, _)| *x == ci)).collect();
+        if !theirs.is_empty() {
+            fits = theirs;
+        }
+    }
+    if phase.is_none() && fits.len() > 1 {
+        // Unqualified, an event means its final (common practice: "the men's
+        // 100 m" is the race that gives the medals).
+        let finals: Vec<usize> = fits.iter().copied().filter(|&ci| data.contests[ci].phase == "final").collect();
+        if !finals.is_empty() {
+            fits = finals;
+        }
+    }
+    match fits.as_slice() {
+        [] => Err(None),
+        [one] => Ok(Some(*one)),
+        many => {
+            let mut v: Vec<usize> = many.to_vec();
+            // Sooner and more current contests first.
+            v.sort_by_key(|&ci| (data.contests[ci].status == Status::Final, data.facts[ci].start.timestamp()));
+            Err(Some(v.into_iter().take(MAX_OPTIONS).map(EntityRef::Contest).collect()))
+        }
+    }
+}

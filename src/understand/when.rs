@@ -1,0 +1,120 @@
+//! Days and small numbers in reader text: "today", "tomorrow", "on
+//! Saturday", "15 August", "2027-08-15"; "top five", "top 3".
+
+use jiff::civil::{Date, Weekday};
+
+/// A day named in the text, with the tokens it covers.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct DayMention {
+    pub start: usize,
+    pub end: usize,
+    pub date: Date,
+}
+
+const WEEKDAYS: [(&str, Weekday); 7] = [
+    ("monday", Weekday::Monday),
+    ("tuesday", Weekday::Tuesday),
+    ("wednesday", Weekday::Wednesday),
+    ("thursday", Weekday::Thursday),
+    ("friday", Weekday::Friday),
+    ("saturday", Weekday::Saturday),
+    ("sunday", Weekday::Sunday),
+];
+
+const MONTHS: [&str; 12] = [
+    "january", "february", "march", "april", "may", "june", "july", "august", "september", "october", "november", "december",
+];
+
+fn day_of_month(tok: &str) -> Option<i8> {
+    let digits = tok.trim_end_matches("st").trim_end_matches("nd").trim_end_matches("rd").trim_end_matches("th");
+    let n: i8 = digits.parse().ok()?;
+    (1..=31).contains(&n).then_some(n)
+}
+
+fn month(tok: &str) -> Option<i8> {
+    MONTHS.iter().position(|m| *m == tok || (tok.len() >= 3 && m.starts_with(tok) && tok != "mar" && tok != "may")).map(|i| i as i8 + 1)
+}
+
+/// Finds days in normalised tokens, relative to `today`. A bare weekday
+/// means the next such day, today included.
+pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
+    let mut out = Vec::new();
+    let mut i = 0;
+    while i < tokens.len() {
+        let t = tokens[i];
+        let found = match t {
+            "today" | "tonight" => Some((i + 1, today)),
+            "tomorrow" => today.tomorrow().ok().map(|d| (i + 1, d)),
+            "yesterday" => today.yesterday().ok().map(|d| (i + 1, d)),
+            _ => {
+                if let Some((_, wd)) = WEEKDAYS.iter().find(|(n, _)| *n == t) {
+                    let ahead = (wd.to_monday_zero_offset() - today.weekday().to_monday_zero_offset()).rem_euclid(7);
+                    today.checked_add(jiff::Span::new().days(ahead as i64)).ok().map(|d| (i + 1, d))
+                } else if let Ok(d) = t.parse::<Date>() {
+                    Some((i + 1, d))
+                } else if let (Some(d), Some(m)) = (day_of_month(t), tokens.get(i + 1).and_then(|n| month(n))) {
+                    Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
+                } else if let (Some(m), Some(d)) = (month(t), tokens.get(i + 1).and_then(|n| day_of_month(n))) {
+                    Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
+                } else {
+                    None
+                }
+            }
+        };
+        match found {
+            Some((end, date)) => {
+                out.push(DayMention { start: i, end, date });
+                i = end;
+            }
+            None => i += 1,
+        }
+    }
+    out
+}
+
+const SMALL: [&str; 21] = [
+    "zero", "one", "two", "three", "four", "five", "six", "seven", "eight", "nine", "ten", "eleven", "twelve", "thirteen",
+    "fourteen", "fifteen", "sixteen", "seventeen", "eighteen", "nineteen", "twenty",
+];
+
+/// A count such as "top five" or "top 3": (start, end, value).
+pub fn find_count(tokens: &[&str]) -> Option<(usize, usize, u32)> {
+    for i in 0..tokens.len().saturating_sub(1) {
+        if matches!(tokens[i], "top" | "first" | "best" | "leading") {
+            let next = tokens[i + 1];
+            let n = next.parse::<u32>().ok().or_else(|| SMALL.iter().position(|w| *w == next).map(|p| p as u32));
+            if let Some(n) = n.filter(|&n| n > 0) {
+                return Some((i, i + 2, n));
+            }
+        }
+    }
+    None
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use jiff::civil::date;
+
+    #[test]
+    fn relative_days() {
+        // 2027-08-14 is a Saturday.
+        let today = date(2027, 8, 14);
+        let f = |s: &str| find_days(&s.split(' ').collect::<Vec<_>>(), today).first().map(|m| m.date);
+        assert_eq!(f("whats on today"), Some(today));
+        assert_eq!(f("whats on tomorrow"), Some(date(2027, 8, 15)));
+        assert_eq!(f("on saturday"), Some(today));
+        assert_eq!(f("on monday"), Some(date(2027, 8, 16)));
+        assert_eq!(f("on 16 august"), Some(date(2027, 8, 16)));
+        assert_eq!(f("on august 16th"), Some(date(2027, 8, 16)));
+        assert_eq!(f("on 2027-08-12"), Some(date(2027, 8, 12)));
+        assert_eq!(f("who won"), None);
+    }
+
+    #[test]
+    fn counts() {
+        assert_eq!(find_count(&["top", "five"]), Some((0, 2, 5)));
+        assert_eq!(find_count(&["show", "the", "top", "3"]), Some((2, 4, 3)));
+        assert_eq!(find_count(&["top", "delegation"]), None);
+    }
+}
