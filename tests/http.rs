@@ -1,0 +1,143 @@
+//! The HTTP API against a real server on a loopback port.
+
+mod common;
+
+use common::{demo_engine, Server};
+use serde_json::json;
+
+#[tokio::test]
+async fn a_question_gets_an_answer_with_its_facts_and_version() {
+    let s = Server::start(demo_engine()).await;
+    let (status, body) = s.ask("reader-1", "Who won the men's 100m?").await;
+    assert_eq!(status, 200);
+    assert_eq!(body["outcome"], "answered");
+    assert_eq!(body["intent"], "podium");
+    assert_eq!(body["slots"]["contest"]["value"], "ath-m-100m-final");
+    let text = body["text"].as_str().unwrap();
+    assert!(text.starts_with("Wonorin Galkace (Quessary) won the men's 100 m final"), "{text}");
+    assert_eq!(body["dataset_version"], 1);
+    assert_eq!(body["as_of"], "2027-08-14T21:04:00+01:00");
+    assert!(body["confidence"].as_f64().unwrap() > 0.5);
+    assert_eq!(body["candidates"][0]["intent"], "podium");
+    assert!(body["candidates"][0]["shared"].as_array().unwrap().iter().any(|w| w == "won"));
+}
+
+#[tokio::test]
+async fn healthz_reports_the_loaded_scenario() {
+    let s = Server::start(demo_engine()).await;
+    let r = s.client.get(s.url("/healthz")).send().await.unwrap();
+    assert_eq!(r.status(), 200);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["status"], "ok");
+    assert!(body["intents"].as_u64().unwrap() >= 14);
+}
+
+#[tokio::test]
+async fn an_ambiguous_name_is_asked_about_and_the_answer_is_used() {
+    let s = Server::start(demo_engine()).await;
+    let (_, first) = s.ask("reader-2", "how did Zoe do?").await;
+    assert_eq!(first["outcome"], "clarify");
+    let text = first["text"].as_str().unwrap();
+    for name in ["Zoë Quillon", "Zoë Marrant", "Zoë Tassevar"] {
+        assert!(text.contains(name), "{text}");
+    }
+    assert_eq!(first["options"].as_array().unwrap().len(), 3);
+    let (_, second) = s.ask("reader-2", "the rower").await;
+    assert_eq!(second["slots"]["competitor"]["value"], "p199", "{second}");
+    assert!(second["text"].as_str().unwrap().contains("Zoë Marrant"));
+    // Another reader's conversation is separate.
+    let (_, other) = s.ask("reader-3", "the rower").await;
+    assert_ne!(other["slots"]["competitor"]["value"], "p199");
+}
+
+#[tokio::test]
+async fn a_missing_detail_is_asked_for_then_filled() {
+    let s = Server::start(demo_engine()).await;
+    let (_, first) = s.ask("reader-4", "who won?").await;
+    assert_eq!(first["outcome"], "clarify");
+    assert_eq!(first["text"], "Which event do you mean?");
+    let (_, second) = s.ask("reader-4", "the women's long jump").await;
+    assert_eq!(second["outcome"], "answered", "{second}");
+    assert_eq!(second["intent"], "podium");
+    assert_eq!(second["slots"]["contest"]["value"], "ath-w-long-jump-final");
+}
+
+#[tokio::test]
+async fn malformed_json_is_a_400_in_the_service_format() {
+    let s = Server::start(demo_engine()).await;
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .header("content-type", "application/json")
+        .body("{\"user\": \"a\", \"text\": ")
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 400);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["error"]["code"], "malformed_json");
+    assert!(!body["error"]["message"].as_str().unwrap().is_empty());
+}
+
+#[tokio::test]
+async fn an_oversize_body_is_a_413() {
+    let s = Server::start(demo_engine()).await;
+    let big = "x".repeat(17 * 1024);
+    let r = s.client.post(s.url("/v1/messages")).json(&json!({"user": "a", "text": big})).send().await.unwrap();
+    assert_eq!(r.status(), 413);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["error"]["code"], "body_too_large");
+}
+
+#[tokio::test]
+async fn empty_or_over_long_text_is_a_422() {
+    let s = Server::start(demo_engine()).await;
+    for (text, code) in [("   ", "empty_text"), (&"a".repeat(501)[..], "text_too_long")] {
+        let r = s.client.post(s.url("/v1/messages")).json(&json!({"user": "a", "text": text})).send().await.unwrap();
+        assert_eq!(r.status(), 422);
+        let body: serde_json::Value = r.json().await.unwrap();
+        assert_eq!(body["error"]["code"], code);
+    }
+}
+
+#[tokio::test]
+async fn wrong_shapes_and_channels_are_422_never_500() {
+    let s = Server::start(demo_engine()).await;
+    let cases = [
+        json!({"user": "a"}),
+        json!({"user": "a", "text": 5}),
+        json!({"user": "", "text": "hello"}),
+        json!({"user": "a", "text": "hello", "channel": "pigeon"}),
+        json!({"user": "a", "text": "hello", "extra": true}),
+    ];
+    for c in cases {
+        let r = s.client.post(s.url("/v1/messages")).json(&c).send().await.unwrap();
+        assert_eq!(r.status(), 422, "{c}");
+        let body: serde_json::Value = r.json().await.unwrap();
+        assert!(body["error"]["message"].is_string(), "{c}");
+    }
+    let r = s.client.post(s.url("/v1/messages")).body("user=a").send().await.unwrap();
+    assert_eq!(r.status(), 415);
+    let r = s.client.get(s.url("/v2/nothing")).send().await.unwrap();
+    assert_eq!(r.status(), 404);
+}
+
+#[tokio::test]
+async fn odd_reader_text_never_breaks_the_service() {
+    let s = Server::start(demo_engine()).await;
+    let odd = [
+        "?",
+        "🙂🙂🙂",
+        "<break time=\"9s\"/> & Co",
+        "\u{0}\u{1}\u{2}",
+        "who won the the the the",
+        "ＷＨＯ　ＷＯＮ　ＴＨＥ　ＭＥＮ'Ｓ　１００Ｍ",
+        "1:59.32 10.12 9,999,999,999,999,999,999",
+        "ł ø đ ß æ",
+    ];
+    for text in odd {
+        let (status, body) = s.ask("odd", text).await;
+        assert_eq!(status, 200, "{text}");
+        assert!(!body["text"].as_str().unwrap().is_empty(), "{text}");
+    }
+}

@@ -1,0 +1,40 @@
+#!/usr/bin/env bash
+# Runs every test the project has, on a fresh machine as on a developer's:
+# installs what the tests need when it is missing (Debian packages), starts a
+# private redis-server on a free port for the tests and stops it afterwards.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+
+need_pkgs=()
+command -v redis-server >/dev/null 2>&1 || need_pkgs+=(redis-server)
+# Unicode's NormalizationTest.txt, an external reference for the normaliser.
+[ -e /usr/share/unicode/NormalizationTest.txt ] || [ -e /usr/share/unicode/NormalizationTest.txt.bz2 ] || need_pkgs+=(unicode-data)
+command -v bzcat >/dev/null 2>&1 || need_pkgs+=(bzip2)
+if [ ${#need_pkgs[@]} -gt 0 ]; then
+  echo "tests/run.sh: installing ${need_pkgs[*]}"
+  if [ "$(id -u)" = 0 ]; then SUDO=""; else SUDO="sudo"; fi
+  $SUDO apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive $SUDO apt-get install -y -qq "${need_pkgs[@]}" >/dev/null
+fi
+
+# A free port: ask the kernel for one, then hand it to redis-server.
+port=$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1]); s.close()')
+redis_dir=$(mktemp -d)
+redis-server --port "$port" --bind 127.0.0.1 --save "" --appendonly no --dir "$redis_dir" --daemonize yes \
+  --pidfile "$redis_dir/redis.pid" --logfile "$redis_dir/redis.log"
+cleanup() {
+  if [ -f "$redis_dir/redis.pid" ]; then kill "$(cat "$redis_dir/redis.pid")" 2>/dev/null || true; fi
+  rm -rf "$redis_dir"
+}
+trap cleanup EXIT
+# Wait for readiness rather than a fixed sleep.
+for _ in $(seq 1 100); do
+  if redis-cli -p "$port" ping 2>/dev/null | grep -q PONG; then break; fi
+  sleep 0.05
+done
+redis-cli -p "$port" ping | grep -q PONG || { echo "tests/run.sh: private redis-server did not start"; cat "$redis_dir/redis.log"; exit 1; }
+
+export TIDINGS_TEST_REDIS_URL="redis://127.0.0.1:$port/"
+export TIDINGS_REDIS_SERVER_BIN="$(command -v redis-server)"
+cargo test --all-targets --locked "$@"
+cargo test --doc --locked
