@@ -166,11 +166,11 @@ pub async fn run(cli: Cli) -> i32 {
             }
             match engine.handle("cli", &channel, &q).await {
                 Ok(a) if json => {
-                    println!("{}", serde_json::to_string_pretty(&a).unwrap_or_default());
+                    say(&serde_json::to_string_pretty(&a).unwrap_or_default());
                     0
                 }
                 Ok(a) => {
-                    println!("{}", a.reply.text);
+                    say(&a.reply.text);
                     0
                 }
                 Err(e) => {
@@ -227,6 +227,12 @@ pub async fn run(cli: Cli) -> i32 {
         },
         Command::Eval { common, set, verbose, json } => crate::eval::run_cli(&common, &set, verbose, json).await,
     }
+}
+
+/// Prints a line; a closed pipe (`tidings ask … | head`) is not an error.
+fn say(text: &str) {
+    let mut out = std::io::stdout().lock();
+    let _ = writeln!(out, "{text}");
 }
 
 /// Completes on Ctrl-C or SIGTERM.

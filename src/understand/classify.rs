@@ -48,7 +48,7 @@ pub struct Scored {
 
 /// Weight of a word the catalog never uses: it still counts against the
 /// match, so a long unrelated message scores low.
-const UNKNOWN_WEIGHT: f32 = 1.5;
+const UNKNOWN_WEIGHT: f32 = 2.0;
 /// Bigrams carry word order at a lower weight than the words themselves.
 const BIGRAM_FACTOR: f32 = 0.5;
 

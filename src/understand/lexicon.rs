@@ -83,6 +83,9 @@ pub struct Lexicon {
     /// Words of the catalog's phrasings and other common words, which are
     /// never taken for a misspelt name.
     vocabulary: HashSet<String>,
+    /// The same words, for correcting misspelt question words.
+    vocab_index: FuzzyIndex,
+    vocab_words: Vec<String>,
 }
 
 /// Words too common to be a name on their own, whatever the data says.
@@ -149,6 +152,9 @@ impl Lexicon {
                 for a in &d.aliases {
                     add(a, Target::Entity(e, Form::Alias));
                 }
+                for v in short_forms(&normalize(&d.name)) {
+                    add(&v, Target::Entity(e, Form::Alias));
+                }
             }
         }
         for (ci, c) in data.contests.iter().enumerate() {
@@ -198,10 +204,10 @@ impl Lexicon {
         for (surface, ts) in surfaces.iter().zip(&targets) {
             let keep: Vec<Target> = ts
                 .iter()
-                .filter(|t| matches!(t, Target::Entity(..) | Target::SportNoun(_)))
+                .filter(|t| matches!(t, Target::Entity(..) | Target::SportNoun(_) | Target::Award(_)))
                 .cloned()
                 .collect();
-            if keep.is_empty() || surface.len() < 4 {
+            if keep.is_empty() || surface.len() < 3 {
                 continue;
             }
             fuzzy_terms.push((surface.clone(), fuzzy_targets.len() as u32));
@@ -209,12 +215,25 @@ impl Lexicon {
             fuzzy_words.push(surface.split(' ').count());
         }
         let fuzzy = FuzzyIndex::new(fuzzy_terms);
-        Lexicon { automaton, targets, fuzzy, fuzzy_targets, fuzzy_words, vocabulary }
+        let mut vocab_words: Vec<String> = vocabulary.iter().filter(|w| w.len() >= 4).cloned().collect();
+        vocab_words.sort();
+        let vocab_index = FuzzyIndex::new(vocab_words.iter().enumerate().map(|(i, w)| (w.clone(), i as u32)));
+        Lexicon { automaton, targets, fuzzy, fuzzy_targets, fuzzy_words, vocabulary, vocab_index, vocab_words }
     }
 
     /// Whether a word is an ordinary word of the catalog's questions.
     pub fn is_vocabulary(&self, word: &str) -> bool {
         self.vocabulary.contains(word)
+    }
+
+    /// The question word a misspelt word most likely is ("tomorow" →
+    /// "tomorrow"), if one is close enough.
+    pub fn correct(&self, word: &str) -> Option<&str> {
+        if word.len() < 4 || self.vocabulary.contains(word) {
+            return None;
+        }
+        let hit = self.vocab_index.lookup(word, 0.88, 1).into_iter().next()?;
+        self.vocab_words.get(hit.id as usize).map(String::as_str)
     }
 
     /// Finds names in normalised text split into tokens.
@@ -260,9 +279,66 @@ impl Lexicon {
             sort_candidates(&mut candidates);
             mentions.push(Mention { start: s, end: e, candidates, exact: true });
         }
+        self.extend_events(tokens, &mut covered, &mut mentions);
         self.spot_fuzzy(tokens, &mut covered, &mut mentions);
+        self.spot_familiar_events(tokens, &mut covered, &mut mentions);
         mentions.sort_by_key(|m| m.start);
         mentions
+    }
+
+    /// Event names are often half right: "200 m frestyle" matches "200 m"
+    /// exactly and leaves a misspelt word; "women's hi jump" has a category
+    /// and then words that are everyday words on their own. Both are tried
+    /// against discipline names as a whole before anything else.
+    fn extend_events(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
+        let mut events = Vec::new();
+        let is_discipline = |t: &Target| matches!(t, Target::Entity(EntityRef::Discipline(..), _));
+        for m in mentions.iter_mut() {
+            let Some((top, _)) = m.candidates.first() else { continue };
+            let after_category = matches!(top, Target::Category(_));
+            let extend_discipline = is_discipline(top);
+            if !after_category && !extend_discipline {
+                continue;
+            }
+            // The width whose best discipline scores highest wins, so
+            // "individual time trail" is not cut short at "individual time".
+            let mut best: Option<(usize, Vec<(Target, f32)>)> = None;
+            for width in [3usize, 2, 1] {
+                let end = m.end + width;
+                if end > tokens.len() || covered[m.end..end].iter().any(|&c| c) {
+                    continue;
+                }
+                if extend_discipline && self.vocabulary.contains(tokens[end - 1]) {
+                    continue;
+                }
+                let from = if extend_discipline { m.start } else { m.end };
+                let query = tokens[from..end].join(" ");
+                let hits = self.fuzzy.lookup(&query, 0.86, 4);
+                let mut found: Vec<(Target, f32)> = hits
+                    .iter()
+                    .flat_map(|h| self.fuzzy_targets[h.id as usize].iter().map(move |t| (t.clone(), h.score as f32 * 0.97)))
+                    .filter(|(t, _)| is_discipline(t))
+                    .collect();
+                if found.is_empty() {
+                    continue;
+                }
+                sort_candidates(&mut found);
+                if best.as_ref().is_none_or(|(_, b)| found[0].1 > b[0].1) {
+                    best = Some((end, found));
+                }
+            }
+            let Some((end, found)) = best else { continue };
+            covered[m.end..end].iter_mut().for_each(|c| *c = true);
+            if extend_discipline {
+                m.end = end;
+                m.candidates = found;
+                m.exact = false;
+            } else {
+                // Keep the category; the words after it become the event.
+                events.push(Mention { start: m.end, end, candidates: found, exact: false });
+            }
+        }
+        mentions.extend(events);
     }
 
     /// Looks up uncovered, unfamiliar words: pairs first (a full name), then
@@ -292,10 +368,7 @@ impl Lexicon {
                 let hits = self.fuzzy.lookup(&query, min, 8);
                 // A single word must look like a single-word name, and a pair
                 // like a pair; otherwise "long jupm" would match a person.
-                let hits: Vec<_> = hits
-                    .into_iter()
-                    .filter(|h| self.fuzzy_term_words(h.id) == width || (width == 1 && h.score > 0.93))
-                    .collect();
+                let hits: Vec<_> = hits.into_iter().filter(|h| self.fuzzy_term_words(h.id) == width).collect();
                 if hits.is_empty() {
                     i += 1;
                     continue;
@@ -303,12 +376,9 @@ impl Lexicon {
                 let mut candidates = Vec::new();
                 for h in &hits {
                     for t in &self.fuzzy_targets[h.id as usize] {
-                        let w = match t {
-                            Target::Entity(_, f) => f.weight(),
-                            _ => 1.0,
-                        };
-                        // A fuzzy match is never as certain as an exact one.
-                        candidates.push((t.clone(), (h.score as f32) * w * 0.97));
+                        // A fuzzy match is never as certain as an exact one;
+                        // how close the spelling is decides between kinds.
+                        candidates.push((t.clone(), (h.score as f32) * 0.97));
                     }
                 }
                 sort_candidates(&mut candidates);
@@ -319,16 +389,67 @@ impl Lexicon {
         }
     }
 
+    /// A last pass for event names made of everyday words ("hi jump",
+    /// "time trail"): pairs of uncovered words, tried against discipline
+    /// names only, with a high bar.
+    fn spot_familiar_events(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
+        let mut i = 0;
+        while i + 2 <= tokens.len() {
+            if covered[i] || covered[i + 1] {
+                i += 1;
+                continue;
+            }
+            let query = format!("{} {}", tokens[i], tokens[i + 1]);
+            let mut found: Vec<(Target, f32)> = self
+                .fuzzy
+                .lookup(&query, 0.9, 4)
+                .iter()
+                .filter(|h| self.fuzzy_term_words(h.id) == 2)
+                .flat_map(|h| self.fuzzy_targets[h.id as usize].iter().map(move |t| (t.clone(), h.score as f32 * 0.97)))
+                .filter(|(t, _)| matches!(t, Target::Entity(EntityRef::Discipline(..), _)))
+                .collect();
+            if found.is_empty() {
+                i += 1;
+                continue;
+            }
+            sort_candidates(&mut found);
+            covered[i] = true;
+            covered[i + 1] = true;
+            mentions.push(Mention { start: i, end: i + 2, candidates: found, exact: false });
+            i += 2;
+        }
+    }
+
     fn fuzzy_term_words(&self, id: u32) -> usize {
         self.fuzzy_words.get(id as usize).copied().unwrap_or(0)
     }
 }
 
+/// Shorter ways readers name a distance event: "100 m freestyle" is also
+/// "100 freestyle" and "freestyle"; "1500 m" is also "1500". Forms shared by
+/// several disciplines stay ambiguous and are asked about.
+fn short_forms(name: &str) -> Vec<String> {
+    let words: Vec<&str> = name.split(' ').collect();
+    let mut out = Vec::new();
+    if words.len() >= 2 && words[0].chars().all(|c| c.is_ascii_digit()) && (words[1] == "m" || words[1] == "km") {
+        let rest = words[2..].join(" ");
+        if rest.is_empty() {
+            out.push(words[0].to_string());
+        } else {
+            out.push(format!("{} {rest}", words[0]));
+            if rest.len() >= 5 {
+                out.push(rest);
+            }
+        }
+    }
+    out
+}
+
 /// Words readers use for the usual categories.
 fn category_synonyms(cat: &str) -> &'static [&'static str] {
     match cat {
-        "women" => &["womens", "woman", "ladies", "female"],
-        "men" => &["mens", "man", "male"],
+        "women" => &["womens", "woman", "womans", "ladies", "female"],
+        "men" => &["mens", "man", "mans", "male"],
         _ => &[],
     }
 }

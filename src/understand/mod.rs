@@ -29,7 +29,13 @@ use lexicon::{Lexicon, Mention, Target};
 pub struct Understanding {
     pub lexicon: Lexicon,
     pub classifier: Classifier,
+    /// Placeholders each intent's slots accept, by intent name.
+    accepts: std::collections::HashMap<String, Vec<&'static str>>,
 }
+
+/// How much an intent loses for each kind of name in the message that none
+/// of its slots can take ("can you tell me who won the 400 m" is not help).
+const MISFIT_PENALTY: f32 = 0.2;
 
 /// What was read from one message.
 #[derive(Debug, Clone)]
@@ -136,7 +142,22 @@ impl Understanding {
         }
         let lexicon = Lexicon::build(data, words);
         let classifier = Classifier::new(&names, &examples);
-        Understanding { lexicon, classifier }
+        let accepts = catalog
+            .intents
+            .iter()
+            .map(|i| {
+                let mut v: Vec<&'static str> = i.slots.iter().map(|s| placeholder(s.kind)).collect();
+                // An event may be named through its sport, category or phase.
+                if v.contains(&"<event>") {
+                    v.extend(["<sport>", "<category>", "<phase>"]);
+                }
+                if v.contains(&"<sport>") {
+                    v.push("<event>");
+                }
+                (i.name.clone(), v)
+            })
+            .collect();
+        Understanding { lexicon, classifier, accepts }
     }
 
     /// Reads one message.
@@ -144,6 +165,17 @@ impl Understanding {
         let normalized = normalize::normalize(text);
         let toks: Vec<&str> = normalize::tokens(&normalized);
         let mentions = self.lexicon.spot(&normalized, &toks);
+        // Misspelt question words ("tomorow", "tabel") are corrected once
+        // names have had their chance: a name is never "corrected".
+        let mut covered = vec![false; toks.len()];
+        for m in &mentions {
+            covered[m.start..m.end].iter_mut().for_each(|c| *c = true);
+        }
+        let toks: Vec<&str> = toks
+            .iter()
+            .enumerate()
+            .map(|(i, t)| if covered[i] { *t } else { self.lexicon.correct(t).unwrap_or(t) })
+            .collect();
         let days = when::find_days(&toks, today);
         let count = when::find_count(&toks);
         let mut abstracted: Vec<String> = Vec::with_capacity(toks.len());
@@ -165,7 +197,16 @@ impl Understanding {
             }
         }
         let abstracted = merge_events(abstracted);
-        let scores = self.classifier.score(&abstracted);
+        let mut scores = self.classifier.score(&abstracted);
+        for sc in &mut scores {
+            let accepts = self.accepts.get(&sc.intent).map(Vec::as_slice).unwrap_or(&[]);
+            let misfits = ["<competitor>", "<group>", "<event>", "<sport>"]
+                .iter()
+                .filter(|p| abstracted.iter().any(|t| t == *p) && !accepts.contains(p))
+                .count();
+            sc.score = (sc.score - MISFIT_PENALTY * misfits as f32).max(0.0);
+        }
+        scores.sort_by(|a, b| b.score.partial_cmp(&a.score).unwrap_or(std::cmp::Ordering::Equal).then(a.intent.cmp(&b.intent)));
         Analysis {
             tokens: toks.iter().map(|s| s.to_string()).collect(),
             normalized: normalized.clone(),

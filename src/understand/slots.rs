@@ -91,6 +91,19 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                     Some((i, m)) => {
                         used.push(i);
                         let mut c = entity_candidates(m, |e| matches!(e, EntityRef::Competitor(_)));
+                        // "Zoe Marant": a first name and a (misspelt) family
+                        // name side by side name one person together.
+                        if let Some(next) = a.mentions.get(i + 1).filter(|n| n.start == m.end) {
+                            let other = entity_candidates(next, |e| matches!(e, EntityRef::Competitor(_)));
+                            let both: Vec<(EntityRef, f32)> = c
+                                .iter()
+                                .filter_map(|(e, s)| other.iter().find(|(o, _)| o == e).map(|(_, t)| (*e, (s + t) / 2.0 + 0.05)))
+                                .collect();
+                            if !both.is_empty() {
+                                used.push(i + 1);
+                                c = both;
+                            }
+                        }
                         narrow_people(data, &mut c, &slots, a, &categories);
                         let g = top_group(c);
                         certainty = certainty.min(g.first().map(|x| x.1).unwrap_or(1.0));
@@ -184,8 +197,16 @@ fn narrow_people(data: &Dataset, c: &mut Vec<(EntityRef, f32)>, slots: &Slots, a
     if let Some(SlotValue::Entity { entity: EntityRef::Contest(ci) }) = slots.get("contest") {
         let ci = *ci;
         keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| *x == ci));
-    } else if let Ok(Some(ci)) = resolve_contest(data, a, slots) {
-        keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| *x == ci));
+    } else {
+        // Any contest the message may mean narrows the people in it.
+        let fits = match resolve_contest(data, a, slots) {
+            Ok(Some(ci)) => vec![ci],
+            Err(Some(options)) => options.iter().filter_map(|e| if let EntityRef::Contest(ci) = e { Some(*ci) } else { None }).collect(),
+            _ => vec![],
+        };
+        if !fits.is_empty() {
+            keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| fits.contains(x)));
+        }
     }
     if let Some(cat) = categories.first() {
         keep_if(c, &|p| data.competitors[p].category.as_deref() == Some(cat.as_str()));

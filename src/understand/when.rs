@@ -56,6 +56,9 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
                     Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
                 } else if let (Some(m), Some(d)) = (month(t), tokens.get(i + 1).and_then(|n| day_of_month(n))) {
                     Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
+                } else if let (true, Some(d)) = (i > 0 && tokens[i - 1] == "the" && t.ends_with(['h', 't', 'd']), day_of_month(t)) {
+                    // "on the 18th": this month.
+                    Date::new(today.year(), today.month(), d).ok().map(|date| (i + 1, date))
                 } else {
                     None
                 }
@@ -80,10 +83,11 @@ const SMALL: [&str; 21] = [
 /// A count such as "top five" or "top 3": (start, end, value).
 pub fn find_count(tokens: &[&str]) -> Option<(usize, usize, u32)> {
     for i in 0..tokens.len().saturating_sub(1) {
-        if matches!(tokens[i], "top" | "first" | "best" | "leading") {
+        if matches!(tokens[i], "top" | "first" | "leading") {
             let next = tokens[i + 1];
             let n = next.parse::<u32>().ok().or_else(|| SMALL.iter().position(|w| *w == next).map(|p| p as u32));
-            if let Some(n) = n.filter(|&n| n > 0) {
+            // A table is never longer than 20 rows; "top 400" is an event.
+            if let Some(n) = n.filter(|&n| (1..=20).contains(&n)) {
                 return Some((i, i + 2, n));
             }
         }
@@ -108,6 +112,7 @@ mod tests {
         assert_eq!(f("on 16 august"), Some(date(2027, 8, 16)));
         assert_eq!(f("on august 16th"), Some(date(2027, 8, 16)));
         assert_eq!(f("on 2027-08-12"), Some(date(2027, 8, 12)));
+        assert_eq!(f("whats on on the 18th"), Some(date(2027, 8, 18)));
         assert_eq!(f("who won"), None);
     }
 

@@ -31,6 +31,8 @@ fn run(input: &OpInput) -> OpOutput {
     }
     let f = Facts::new().set("discipline_name", name);
     let mut best: Option<(usize, usize)> = None;
+    // Everyone who shares the best mark: a tie is reported, not broken.
+    let mut tied: Vec<(usize, usize)> = Vec::new();
     for (ci, c) in data.contests.iter().enumerate() {
         if data.discipline_ref(ci) != (s, d) || c.status == Status::Scheduled {
             continue;
@@ -44,27 +46,34 @@ fn run(input: &OpInput) -> OpOutput {
                 continue;
             }
             let Some(m) = &data.facts[ci].marks[ei] else { continue };
-            let better = match best {
-                None => true,
+            let ord = match best {
+                None => std::cmp::Ordering::Less,
                 Some((bc, be)) => {
                     let cur = data.facts[bc].marks[be].as_ref().expect("best has a mark");
-                    mark::compare(data.facts[ci].better == Better::Lower, m, cur) == std::cmp::Ordering::Less
+                    mark::compare(data.facts[ci].better == Better::Lower, m, cur)
                 }
             };
-            if better {
-                best = Some((ci, ei));
+            match ord {
+                std::cmp::Ordering::Less => {
+                    best = Some((ci, ei));
+                    tied = vec![(ci, ei)];
+                }
+                std::cmp::Ordering::Equal => tied.push((ci, ei)),
+                std::cmp::Ordering::Greater => {}
             }
         }
     }
     let Some((ci, ei)) = best else {
         return OpOutput::done("none_yet", f, vec![EntityRef::Discipline(s, d)]);
     };
-    let c = &data.contests[ci];
-    let mut f = f.set("holder", entry_label(data, &c.entries[ei])).set("contest_name", data.contest_name(ci));
+    let holders: Vec<Value> = tied.iter().map(|&(c, e)| Value::Text(entry_label(data, &data.contests[c].entries[e]))).collect();
+    let mut contests: Vec<String> = tied.iter().map(|&(c, _)| data.contest_name(c)).collect();
+    contests.dedup();
+    let mut f = f.set("holder", Value::List(holders)).set("contest_name", Value::from(contests));
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);
     }
     let mut mentioned = vec![EntityRef::Discipline(s, d), EntityRef::Contest(ci)];
-    mentioned.extend(super::support::entry_entity(data, &c.entries[ei]));
+    mentioned.extend(tied.iter().filter_map(|&(c, e)| super::support::entry_entity(data, &data.contests[c].entries[e])));
     OpOutput::done("answered", f, mentioned)
 }

@@ -55,7 +55,9 @@ fn run(input: &OpInput) -> OpOutput {
     let mut f = Facts::new().set("contest_name", data.contest_name(ci));
     let mut mentioned = mentioned;
     mentioned.push(EntityRef::Contest(ci));
-    if c.status == Status::Scheduled {
+    // Standings in a contest still under way are not a result: "did A beat
+    // B" is only answered once it is final.
+    if c.status != Status::Final {
         return OpOutput::done("undecided", f, mentioned);
     }
     let (xa, xb) = (&c.entries[ea], &c.entries[eb]);

@@ -11,7 +11,7 @@ pub static SPEC: OpSpec = OpSpec {
     summary: "the medal table leader and the top of the table",
     params: &[Param { name: "count", kind: EntityKind::Count, required: false }],
     outcomes: &[
-        answered("answered", &["leader", "leader_breakdown", "leaders_count", "top", "shown"]),
+        answered("answered", &["leader", "leader_breakdown", "leader_total", "leaders_count", "top", "shown"]),
         no_data("empty", &[]),
     ],
     run,
@@ -39,7 +39,15 @@ fn breakdown(data: &Dataset, row: &MedalRow) -> Value {
 
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
-    let table = medal_table(data);
+    let mut table = medal_table(data);
+    // `order: total` ranks by the number of medals of any colour, for "who
+    // has the most medals?"; ties then fall back to the usual order.
+    if input.settings.get("order").map(String::as_str) == Some("total") {
+        table.sort_by(|a, b| b.total().cmp(&a.total()).then(b.counts.cmp(&a.counts)).then_with(|| data.groups[a.group].name.cmp(&data.groups[b.group].name)));
+        for i in 0..table.len() {
+            table[i].rank = if i > 0 && table[i].total() == table[i - 1].total() { table[i - 1].rank } else { i as u32 + 1 };
+        }
+    }
     if table.is_empty() {
         return OpOutput::done("empty", Facts::new(), vec![]);
     }
@@ -52,6 +60,7 @@ fn run(input: &OpInput) -> OpOutput {
     f.put("leader", Value::List(leaders.iter().map(|r| Value::Text(data.groups[r.group].name.clone())).collect()));
     f.put("leaders_count", Value::Int(leaders.len() as i64));
     f.put("leader_breakdown", breakdown(data, leaders[0]));
+    f.put("leader_total", Value::Int(leaders[0].total() as i64));
     // Include every row tied with the last one shown, so a cut never splits
     // a shared rank.
     let cutoff_rank = table.get(n.min(table.len()) - 1).map(|r| r.rank).unwrap_or(1);
