@@ -20,9 +20,13 @@ fn main() {
     let mut out = String::from("pub const INTENTS: &[(&str, &str)] = &[\n");
     for n in &names {
         println!("cargo:rerun-if-changed=intents/games/{n}");
-        out.push_str(&format!("    ({n:?}, include_str!({:?})),\n", format!("{manifest}/intents/games/{n}")));
+        out.push_str(&format!(
+            "    ({n:?}, include_str!({:?})),\n",
+            format!("{manifest}/intents/games/{n}")
+        ));
     }
     out.push_str("];\n");
-    let dest = Path::new(&std::env::var("OUT_DIR").expect("cargo sets OUT_DIR")).join("demo_intents.rs");
+    let dest =
+        Path::new(&std::env::var("OUT_DIR").expect("cargo sets OUT_DIR")).join("demo_intents.rs");
     fs::write(dest, out).expect("OUT_DIR is writable");
 }

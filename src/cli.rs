@@ -92,15 +92,17 @@ pub enum Command {
 pub fn clock(now: &Option<String>) -> Result<Clock, String> {
     match now {
         None => Ok(Clock::System),
-        Some(s) => s
-            .parse::<jiff::Timestamp>()
-            .map(Clock::Fixed)
-            .map_err(|e| format!("--now must be an RFC 3339 time such as 2027-08-14T21:10:00+01:00: {e}")),
+        Some(s) => s.parse::<jiff::Timestamp>().map(Clock::Fixed).map_err(|e| {
+            format!("--now must be an RFC 3339 time such as 2027-08-14T21:10:00+01:00: {e}")
+        }),
     }
 }
 
 fn sources(c: &Common) -> Sources {
-    Sources { data: c.data.clone(), intents: c.intents.clone() }
+    Sources {
+        data: c.data.clone(),
+        intents: c.intents.clone(),
+    }
 }
 
 /// A fresh per-process secret for hashing user ids when none is configured.
@@ -114,14 +116,22 @@ pub fn id_secret() -> Vec<u8> {
 /// Builds an engine with in-memory sessions.
 pub fn local_engine(c: &Common, ttl: Duration) -> Result<Engine, String> {
     let snap = engine::load(&sources(c)).map_err(|e| e.to_string())?;
-    let settings = Settings { clock: clock(&c.now)?, session_ttl: ttl, id_secret: id_secret() };
+    let settings = Settings {
+        clock: clock(&c.now)?,
+        session_ttl: ttl,
+        id_secret: id_secret(),
+    };
     Ok(Engine::new(snap, Arc::new(MemoryStore::new()), settings))
 }
 
 /// Runs a command; returns the process exit code.
 pub async fn run(cli: Cli) -> i32 {
     match cli.command {
-        Command::Serve { common, listen, session_ttl } => {
+        Command::Serve {
+            common,
+            listen,
+            session_ttl,
+        } => {
             let engine = match local_engine(&common, Duration::from_secs(session_ttl)) {
                 Ok(e) => e,
                 Err(e) => {
@@ -151,7 +161,12 @@ pub async fn run(cli: Cli) -> i32 {
                 }
             }
         }
-        Command::Ask { common, channel, json, question } => {
+        Command::Ask {
+            common,
+            channel,
+            json,
+            question,
+        } => {
             let engine = match local_engine(&common, Duration::from_secs(60)) {
                 Ok(e) => e,
                 Err(e) => {
@@ -188,7 +203,10 @@ pub async fn run(cli: Cli) -> i32 {
                 }
             };
             let snap = engine.snapshot();
-            println!("{} — ask a question; an empty line or Ctrl-D ends.", snap.data.scenario.title);
+            println!(
+                "{} — ask a question; an empty line or Ctrl-D ends.",
+                snap.data.scenario.title
+            );
             let stdin = std::io::stdin();
             loop {
                 print!("> ");
@@ -225,7 +243,12 @@ pub async fn run(cli: Cli) -> i32 {
                 1
             }
         },
-        Command::Eval { common, set, verbose, json } => crate::eval::run_cli(&common, &set, verbose, json).await,
+        Command::Eval {
+            common,
+            set,
+            verbose,
+            json,
+        } => crate::eval::run_cli(&common, &set, verbose, json).await,
     }
 }
 

@@ -33,7 +33,11 @@ impl Snapshot {
     /// Builds the derived indexes for a dataset and catalog.
     pub fn new(data: Dataset, catalog: Catalog) -> Snapshot {
         let understanding = Understanding::build(&data, &catalog);
-        Snapshot { data, catalog, understanding }
+        Snapshot {
+            data,
+            catalog,
+            understanding,
+        }
     }
 }
 
@@ -59,11 +63,26 @@ pub enum SetupError {
 /// anywhere with no arguments.
 mod demo {
     pub const DATA: [(&str, &str); 5] = [
-        ("scenario.json", include_str!("../dataset-demo/games/scenario.json")),
-        ("sports.json", include_str!("../dataset-demo/games/sports.json")),
-        ("groups.json", include_str!("../dataset-demo/games/groups.json")),
-        ("competitors.json", include_str!("../dataset-demo/games/competitors.json")),
-        ("contests.json", include_str!("../dataset-demo/games/contests.json")),
+        (
+            "scenario.json",
+            include_str!("../dataset-demo/games/scenario.json"),
+        ),
+        (
+            "sports.json",
+            include_str!("../dataset-demo/games/sports.json"),
+        ),
+        (
+            "groups.json",
+            include_str!("../dataset-demo/games/groups.json"),
+        ),
+        (
+            "competitors.json",
+            include_str!("../dataset-demo/games/competitors.json"),
+        ),
+        (
+            "contests.json",
+            include_str!("../dataset-demo/games/contests.json"),
+        ),
     ];
     include!(concat!(env!("OUT_DIR"), "/demo_intents.rs"));
 }
@@ -77,14 +96,18 @@ pub fn load(sources: &Sources) -> Result<Snapshot, SetupError> {
                 .iter()
                 .find(|(n, _)| *n == name)
                 .map(|(n, t)| (format!("dataset-demo/games/{n}"), t.to_string()))
-                .ok_or_else(|| dataset::LoadError::File(format!("{name}: not in the built-in demo")))
+                .ok_or_else(|| {
+                    dataset::LoadError::File(format!("{name}: not in the built-in demo"))
+                })
         })?,
     };
     let catalog = match &sources.intents {
         Some(dir) => catalog::load_dir(dir)?,
         None => {
-            let files: Vec<(String, String)> =
-                demo::INTENTS.iter().map(|(n, t)| (format!("intents/games/{n}"), t.to_string())).collect();
+            let files: Vec<(String, String)> = demo::INTENTS
+                .iter()
+                .map(|(n, t)| (format!("intents/games/{n}"), t.to_string()))
+                .collect();
             catalog::load_texts(&files)?
         }
     };
@@ -175,14 +198,20 @@ pub struct Engine {
 
 impl std::fmt::Debug for Engine {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
-        f.debug_struct("Engine").field("store", &self.store.name()).finish_non_exhaustive()
+        f.debug_struct("Engine")
+            .field("store", &self.store.name())
+            .finish_non_exhaustive()
     }
 }
 
 impl Engine {
     /// An engine over a loaded snapshot.
     pub fn new(snapshot: Snapshot, store: Arc<dyn SessionStore>, settings: Settings) -> Engine {
-        Engine { snapshot: Arc::new(ArcSwap::from_pointee(snapshot)), store, settings: Arc::new(settings) }
+        Engine {
+            snapshot: Arc::new(ArcSwap::from_pointee(snapshot)),
+            store,
+            settings: Arc::new(settings),
+        }
     }
 
     /// The current snapshot.
@@ -208,7 +237,8 @@ impl Engine {
     /// The opaque session key for a reader on a channel: a keyed hash, so
     /// the store and logs never see the raw id (a phone number on SMS).
     pub fn user_key(&self, channel: &str, user: &str) -> String {
-        let mut mac = Hmac::<Sha256>::new_from_slice(&self.settings.id_secret).expect("HMAC takes keys of any length");
+        let mut mac = Hmac::<Sha256>::new_from_slice(&self.settings.id_secret)
+            .expect("HMAC takes keys of any length");
         mac.update(channel.as_bytes());
         mac.update(b"\0");
         mac.update(user.as_bytes());
@@ -217,8 +247,14 @@ impl Engine {
     }
 
     /// Handles one message from a reader.
-    pub async fn handle(&self, user: &str, channel: &str, text: &str) -> Result<Answer, EngineError> {
-        let ch = Channel::parse(channel).ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
+    pub async fn handle(
+        &self,
+        user: &str,
+        channel: &str,
+        text: &str,
+    ) -> Result<Answer, EngineError> {
+        let ch = Channel::parse(channel)
+            .ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
         let snap = self.snapshot();
         let now = self.now(&snap.data);
         let key = self.user_key(ch.name(), user);
@@ -242,7 +278,11 @@ impl Engine {
         let (reply, session) = turn(&ctx, session, text);
         tracing::debug!(user = %key, intent = ?reply.intent, outcome = ?reply.outcome, "turn");
         if !degraded {
-            if let Err(e) = self.store.save(&key, &session, self.settings.session_ttl).await {
+            if let Err(e) = self
+                .store
+                .save(&key, &session, self.settings.session_ttl)
+                .await
+            {
                 tracing::warn!(error = %e, "session not saved");
                 degraded = true;
             }
@@ -251,7 +291,12 @@ impl Engine {
             reply,
             channel: ch,
             dataset_version: snap.data.version,
-            as_of: snap.data.as_of.to_zoned_datetime(snap.data.tz.clone()).strftime("%Y-%m-%dT%H:%M:%S%:z").to_string(),
+            as_of: snap
+                .data
+                .as_of
+                .to_zoned_datetime(snap.data.tz.clone())
+                .strftime("%Y-%m-%dT%H:%M:%S%:z")
+                .to_string(),
             degraded,
         })
     }

@@ -50,12 +50,41 @@ pub enum Case {
         #[serde(default)]
         tags: Vec<String>,
     },
-    Single {
-        #[serde(flatten)]
-        turn: Turn,
-        #[serde(default)]
-        tags: Vec<String>,
-    },
+    Single(SingleCase),
+}
+
+/// One question with its labels; unknown keys are an error, so a typo such
+/// as `say:` cannot silently turn a check off.
+#[derive(Debug, Clone, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct SingleCase {
+    pub ask: String,
+    #[serde(default)]
+    pub intent: Option<String>,
+    #[serde(default)]
+    pub slots: Option<BTreeMap<String, String>>,
+    #[serde(default)]
+    pub outcome: Option<Outcome>,
+    #[serde(default)]
+    pub says: Vec<String>,
+    #[serde(default)]
+    pub never: Vec<String>,
+    #[serde(default)]
+    pub tags: Vec<String>,
+}
+
+impl SingleCase {
+    /// The labelled turn.
+    pub fn turn(&self) -> Turn {
+        Turn {
+            ask: self.ask.clone(),
+            intent: self.intent.clone(),
+            slots: self.slots.clone(),
+            outcome: self.outcome,
+            says: self.says.clone(),
+            never: self.never.clone(),
+        }
+    }
 }
 
 impl<'de> Deserialize<'de> for Outcome {
@@ -104,43 +133,65 @@ pub struct Report {
 }
 
 /// Targets for the demo set.
-pub const TARGETS: [(&str, f64); 3] = [("intent_accuracy", 0.97), ("slot_f1", 0.95), ("wrong_answer_rate_max", 0.005)];
+pub const TARGETS: [(&str, f64); 3] = [
+    ("intent_accuracy", 0.97),
+    ("slot_f1", 0.95),
+    ("wrong_answer_rate_max", 0.005),
+];
 
 impl Report {
     /// Whether the figures meet [`TARGETS`].
     pub fn meets_targets(&self) -> bool {
-        self.intent_accuracy >= TARGETS[0].1 && self.slot_f1 >= TARGETS[1].1 && self.wrong_answer_rate <= TARGETS[2].1
+        self.intent_accuracy >= TARGETS[0].1
+            && self.slot_f1 >= TARGETS[1].1
+            && self.wrong_answer_rate <= TARGETS[2].1
     }
 }
 
 /// Reads a question set.
 pub fn load_set(path: &Path) -> Result<Vec<Case>, String> {
-    let text = std::fs::read_to_string(path).map_err(|e| format!("{}: cannot read: {e}", path.display()))?;
+    let text = std::fs::read_to_string(path)
+        .map_err(|e| format!("{}: cannot read: {e}", path.display()))?;
     serde_saphyr::from_str(&text).map_err(|e| {
-        let (l, c) = e.location().map(|l| (l.line(), l.column())).unwrap_or((0, 0));
-        format!("{}:{l}:{c}: {}", path.display(), e.to_string().lines().next().unwrap_or("invalid YAML"))
+        let (l, c) = e
+            .location()
+            .map(|l| (l.line(), l.column()))
+            .unwrap_or((0, 0));
+        format!(
+            "{}:{l}:{c}: {}",
+            path.display(),
+            e.to_string().lines().next().unwrap_or("invalid YAML")
+        )
     })
 }
 
 /// Runs every case through the engine; each case is a fresh reader.
 pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
-    let mut r = Report { cases: cases.len(), ..Report::default() };
+    let mut r = Report {
+        cases: cases.len(),
+        ..Report::default()
+    };
     let (mut tp, mut fp, mut fn_) = (0usize, 0usize, 0usize);
     for (ci, case) in cases.iter().enumerate() {
-        let turns: Vec<&Turn> = match case {
-            Case::Single { turn, .. } => vec![turn],
+        let turns: Vec<Turn> = match case {
+            Case::Single(single) => vec![single.turn()],
             Case::Conversation { conversation, .. } => {
                 r.conversations += 1;
-                conversation.iter().collect()
+                conversation.clone()
             }
         };
         let user = format!("eval-{ci}");
-        for t in turns {
+        for t in &turns {
             r.turns += 1;
             let answer = match engine.handle(&user, "chat", &t.ask).await {
                 Ok(a) => a,
                 Err(e) => {
-                    r.failures.push(Failure { case: ci + 1, ask: t.ask.clone(), problems: vec![e.to_string()], reply: String::new() });
+                    r.failures.push(Failure {
+                        case: ci + 1,
+                        ask: t.ask.clone(),
+                        problems: vec![e.to_string()],
+                        reply: String::new(),
+                    });
                     continue;
                 }
             };
@@ -158,13 +209,20 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                 }
             }
             if let Some(want) = &t.slots {
-                let got: BTreeMap<String, String> = reply.slots.iter().map(|(k, v)| (k.clone(), v.value.clone())).collect();
+                let got: BTreeMap<String, String> = reply
+                    .slots
+                    .iter()
+                    .map(|(k, v)| (k.clone(), v.value.clone()))
+                    .collect();
                 for (k, v) in &got {
                     if want.get(k) == Some(v) {
                         tp += 1;
                     } else {
                         fp += 1;
-                        problems.push(format!("slot {k}: got {v}, expected {}", want.get(k).map(String::as_str).unwrap_or("nothing")));
+                        problems.push(format!(
+                            "slot {k}: got {v}, expected {}",
+                            want.get(k).map(String::as_str).unwrap_or("nothing")
+                        ));
                         fact_wrong = true;
                     }
                 }
@@ -211,7 +269,12 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                 r.wrong_answers += 1;
             }
             if !problems.is_empty() {
-                r.failures.push(Failure { case: ci + 1, ask: t.ask.clone(), problems, reply: reply.text.clone() });
+                r.failures.push(Failure {
+                    case: ci + 1,
+                    ask: t.ask.clone(),
+                    problems,
+                    reply: reply.text.clone(),
+                });
             }
         }
     }
@@ -225,7 +288,11 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
         2.0 * r.slot_precision * r.slot_recall / (r.slot_precision + r.slot_recall)
     };
     r.answer_accuracy = ratio(r.answer_correct, r.answer_total);
-    r.wrong_answer_rate = if r.turns == 0 { 0.0 } else { r.wrong_answers as f64 / r.turns as f64 };
+    r.wrong_answer_rate = if r.turns == 0 {
+        0.0
+    } else {
+        r.wrong_answers as f64 / r.turns as f64
+    };
     r
 }
 
@@ -251,14 +318,35 @@ pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool) -> 
     } else {
         if verbose {
             for f in &r.failures {
-                println!("case {}: {:?}\n  reply: {}\n  {}", f.case, f.ask, f.reply, f.problems.join("\n  "));
+                println!(
+                    "case {}: {:?}\n  reply: {}\n  {}",
+                    f.case,
+                    f.ask,
+                    f.reply,
+                    f.problems.join("\n  ")
+                );
             }
         }
-        println!("cases {} ({} conversations), turns {}", r.cases, r.conversations, r.turns);
-        println!("intent accuracy   {:.4}  ({}/{})  target >= 0.97", r.intent_accuracy, r.intent_correct, r.intent_total);
-        println!("slot F1 (micro)   {:.4}  (precision {:.4}, recall {:.4})  target >= 0.95", r.slot_f1, r.slot_precision, r.slot_recall);
-        println!("answer accuracy   {:.4}  ({}/{})", r.answer_accuracy, r.answer_correct, r.answer_total);
-        println!("wrong-answer rate {:.4}  ({}/{})  target <= 0.005", r.wrong_answer_rate, r.wrong_answers, r.turns);
+        println!(
+            "cases {} ({} conversations), turns {}",
+            r.cases, r.conversations, r.turns
+        );
+        println!(
+            "intent accuracy   {:.4}  ({}/{})  target >= 0.97",
+            r.intent_accuracy, r.intent_correct, r.intent_total
+        );
+        println!(
+            "slot F1 (micro)   {:.4}  (precision {:.4}, recall {:.4})  target >= 0.95",
+            r.slot_f1, r.slot_precision, r.slot_recall
+        );
+        println!(
+            "answer accuracy   {:.4}  ({}/{})",
+            r.answer_accuracy, r.answer_correct, r.answer_total
+        );
+        println!(
+            "wrong-answer rate {:.4}  ({}/{})  target <= 0.005",
+            r.wrong_answer_rate, r.wrong_answers, r.turns
+        );
     }
     if r.meets_targets() {
         0

@@ -7,7 +7,8 @@ use clap::Parser;
 async fn main() {
     tracing_subscriber::fmt()
         .with_env_filter(
-            tracing_subscriber::EnvFilter::try_from_env("TIDINGS_LOG").unwrap_or_else(|_| "tidings=info,tower_http=warn".into()),
+            tracing_subscriber::EnvFilter::try_from_env("TIDINGS_LOG")
+                .unwrap_or_else(|_| "tidings=info,tower_http=warn".into()),
         )
         .with_writer(std::io::stderr)
         .init();

@@ -44,7 +44,11 @@ mod tempdir {
     pub struct Dir(PathBuf);
     impl Dir {
         pub fn new() -> Dir {
-            let p = std::env::temp_dir().join(format!("tidings-check-{}-{}", std::process::id(), N.fetch_add(1, Ordering::SeqCst)));
+            let p = std::env::temp_dir().join(format!(
+                "tidings-check-{}-{}",
+                std::process::id(),
+                N.fetch_add(1, Ordering::SeqCst)
+            ));
             std::fs::create_dir_all(&p).unwrap();
             Dir(p)
         }
@@ -60,8 +64,13 @@ mod tempdir {
 }
 
 fn check(args: &[&str]) -> (i32, String) {
-    let out = Command::new(env!("CARGO_BIN_EXE_tidings")).arg("check").args(args).output().unwrap();
-    let text = String::from_utf8_lossy(&out.stdout).to_string() + &String::from_utf8_lossy(&out.stderr);
+    let out = Command::new(env!("CARGO_BIN_EXE_tidings"))
+        .arg("check")
+        .args(args)
+        .output()
+        .unwrap();
+    let text =
+        String::from_utf8_lossy(&out.stdout).to_string() + &String::from_utf8_lossy(&out.stderr);
     (out.status.code().unwrap_or(-1), text)
 }
 
@@ -95,13 +104,23 @@ fn expect_error(file_text: &str, needle: &str, line: u32) {
     let (code, out) = check(&["--intents", dir.path().to_str().unwrap()]);
     assert_eq!(code, 1, "{out}");
     let want = format!("extra.yaml:{line}:");
-    let hit = out.lines().find(|l| l.contains(&want) && l.contains(needle));
+    let hit = out
+        .lines()
+        .find(|l| l.contains(&want) && l.contains(needle));
     assert!(hit.is_some(), "expected {want}…{needle} in:\n{out}");
 }
 
 #[test]
 fn a_valid_new_intent_is_accepted() {
-    let dir = intents_with("extra.yaml", &GOOD.replace("award: \"{holders|and} won {award}.\"", "award: \"{holders|and} won.\"").replace("No {award}.", "None."));
+    let dir = intents_with(
+        "extra.yaml",
+        &GOOD
+            .replace(
+                "award: \"{holders|and} won {award}.\"",
+                "award: \"{holders|and} won.\"",
+            )
+            .replace("No {award}.", "None."),
+    );
     // {award} is not a slot of this intent: that is an error, so declare it.
     let (code, out) = check(&["--intents", dir.path().to_str().unwrap()]);
     assert_eq!(code, 0, "{out}");
@@ -109,12 +128,20 @@ fn a_valid_new_intent_is_accepted() {
 
 #[test]
 fn an_unknown_operation_is_named_with_its_place() {
-    expect_error(&GOOD.replace("operation: podium", "operation: podiumm"), "unknown operation \"podiumm\"", 2);
+    expect_error(
+        &GOOD.replace("operation: podium", "operation: podiumm"),
+        "unknown operation \"podiumm\"",
+        2,
+    );
 }
 
 #[test]
 fn a_placeholder_with_no_slot_is_an_error() {
-    expect_error(&GOOD.replace("who won the {contest}", "who won the {race}"), "placeholder {race} has no slot", 4);
+    expect_error(
+        &GOOD.replace("who won the {contest}", "who won the {race}"),
+        "placeholder {race} has no slot",
+        4,
+    );
 }
 
 #[test]
@@ -125,17 +152,29 @@ fn a_slot_the_operation_does_not_take_is_an_error() {
 
 #[test]
 fn a_slot_of_the_wrong_kind_is_an_error() {
-    expect_error(&GOOD.replace("entity: contest", "entity: competitor"), "must hold a contest", 7);
+    expect_error(
+        &GOOD.replace("entity: contest", "entity: competitor"),
+        "must hold a contest",
+        7,
+    );
 }
 
 #[test]
 fn a_reply_placeholder_unknown_to_the_outcome_is_an_error() {
-    expect_error(&GOOD.replace("\"{winner|and} won.\"", "\"{champion} won.\""), "placeholder {champion}", 11);
+    expect_error(
+        &GOOD.replace("\"{winner|and} won.\"", "\"{champion} won.\""),
+        "placeholder {champion}",
+        11,
+    );
 }
 
 #[test]
 fn missing_wording_for_an_outcome_is_an_error() {
-    expect_error(&GOOD.replace("  live: \"Under way.\"\n", ""), "outcome \"live\"", 11);
+    expect_error(
+        &GOOD.replace("  live: \"Under way.\"\n", ""),
+        "outcome \"live\"",
+        11,
+    );
 }
 
 #[test]
@@ -143,12 +182,22 @@ fn broken_yaml_reports_line_and_column() {
     let dir = intents_with("extra.yaml", "intent: x\nphrasings: [unclosed\n");
     let (code, out) = check(&["--intents", dir.path().to_str().unwrap()]);
     assert_eq!(code, 1, "{out}");
-    assert!(out.lines().any(|l| l.contains("extra.yaml:") && l.split(':').nth(1).is_some_and(|n| n.trim().parse::<u32>().is_ok())), "{out}");
+    assert!(
+        out.lines().any(|l| l.contains("extra.yaml:")
+            && l.split(':')
+                .nth(1)
+                .is_some_and(|n| n.trim().parse::<u32>().is_ok())),
+        "{out}"
+    );
 }
 
 #[test]
 fn an_unknown_filter_points_into_the_wording() {
-    expect_error(&GOOD.replace("{winner|and}", "{winner|shout}"), "unknown filter", 11);
+    expect_error(
+        &GOOD.replace("{winner|and}", "{winner|shout}"),
+        "unknown filter",
+        11,
+    );
 }
 
 #[test]
@@ -160,7 +209,10 @@ fn data_problems_name_file_record_and_field() {
     });
     let (code, out) = check(&["--data", dir.path().to_str().unwrap()]);
     assert_eq!(code, 1);
-    assert!(out.contains("competitors.json: record p001: field group: no group with id \"nowhere\""), "{out}");
+    assert!(
+        out.contains("competitors.json: record p001: field group: no group with id \"nowhere\""),
+        "{out}"
+    );
 
     // A duplicate id and a mark that does not parse for its measure.
     let dir = data_with("contests.json", |mut v| {
@@ -178,13 +230,21 @@ fn data_problems_name_file_record_and_field() {
 #[test]
 fn an_award_that_contradicts_the_places_is_reported() {
     let dir = data_with("contests.json", |mut v| {
-        let ix = v.as_array().unwrap().iter().position(|c| c["id"] == "ath-m-100m-final").unwrap();
+        let ix = v
+            .as_array()
+            .unwrap()
+            .iter()
+            .position(|c| c["id"] == "ath-m-100m-final")
+            .unwrap();
         v[ix]["entries"][1]["award"] = "gold".into();
         v
     });
     let (code, out) = check(&["--data", dir.path().to_str().unwrap()]);
     assert_eq!(code, 1);
-    assert!(out.contains("ath-m-100m-final entry 2: field award: award \"gold\" contradicts place 2"), "{out}");
+    assert!(
+        out.contains("ath-m-100m-final entry 2: field award: award \"gold\" contradicts place 2"),
+        "{out}"
+    );
 }
 
 #[test]

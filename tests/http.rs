@@ -14,12 +14,19 @@ async fn a_question_gets_an_answer_with_its_facts_and_version() {
     assert_eq!(body["intent"], "podium");
     assert_eq!(body["slots"]["contest"]["value"], "ath-m-100m-final");
     let text = body["text"].as_str().unwrap();
-    assert!(text.starts_with("Wonorin Galkace (Quessary) won the men's 100 m final"), "{text}");
+    assert!(
+        text.starts_with("Wonorin Galkace (Quessary) won the men's 100 m final"),
+        "{text}"
+    );
     assert_eq!(body["dataset_version"], 1);
     assert_eq!(body["as_of"], "2027-08-14T21:04:00+01:00");
     assert!(body["confidence"].as_f64().unwrap() > 0.5);
     assert_eq!(body["candidates"][0]["intent"], "podium");
-    assert!(body["candidates"][0]["shared"].as_array().unwrap().iter().any(|w| w == "won"));
+    assert!(body["candidates"][0]["shared"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .any(|w| w == "won"));
 }
 
 #[tokio::test]
@@ -83,7 +90,13 @@ async fn malformed_json_is_a_400_in_the_service_format() {
 async fn an_oversize_body_is_a_413() {
     let s = Server::start(demo_engine()).await;
     let big = "x".repeat(17 * 1024);
-    let r = s.client.post(s.url("/v1/messages")).json(&json!({"user": "a", "text": big})).send().await.unwrap();
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&json!({"user": "a", "text": big}))
+        .send()
+        .await
+        .unwrap();
     assert_eq!(r.status(), 413);
     let body: serde_json::Value = r.json().await.unwrap();
     assert_eq!(body["error"]["code"], "body_too_large");
@@ -92,8 +105,17 @@ async fn an_oversize_body_is_a_413() {
 #[tokio::test]
 async fn empty_or_over_long_text_is_a_422() {
     let s = Server::start(demo_engine()).await;
-    for (text, code) in [("   ", "empty_text"), (&"a".repeat(501)[..], "text_too_long")] {
-        let r = s.client.post(s.url("/v1/messages")).json(&json!({"user": "a", "text": text})).send().await.unwrap();
+    for (text, code) in [
+        ("   ", "empty_text"),
+        (&"a".repeat(501)[..], "text_too_long"),
+    ] {
+        let r = s
+            .client
+            .post(s.url("/v1/messages"))
+            .json(&json!({"user": "a", "text": text}))
+            .send()
+            .await
+            .unwrap();
         assert_eq!(r.status(), 422);
         let body: serde_json::Value = r.json().await.unwrap();
         assert_eq!(body["error"]["code"], code);
@@ -111,12 +133,24 @@ async fn wrong_shapes_and_channels_are_422_never_500() {
         json!({"user": "a", "text": "hello", "extra": true}),
     ];
     for c in cases {
-        let r = s.client.post(s.url("/v1/messages")).json(&c).send().await.unwrap();
+        let r = s
+            .client
+            .post(s.url("/v1/messages"))
+            .json(&c)
+            .send()
+            .await
+            .unwrap();
         assert_eq!(r.status(), 422, "{c}");
         let body: serde_json::Value = r.json().await.unwrap();
         assert!(body["error"]["message"].is_string(), "{c}");
     }
-    let r = s.client.post(s.url("/v1/messages")).body("user=a").send().await.unwrap();
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .body("user=a")
+        .send()
+        .await
+        .unwrap();
     assert_eq!(r.status(), 415);
     let r = s.client.get(s.url("/v2/nothing")).send().await.unwrap();
     assert_eq!(r.status(), 404);

@@ -82,15 +82,7 @@ pub fn int_words(n: i64, style: Style, figures: bool) -> String {
 
 /// 1234567 → "1,234,567".
 pub fn group_thousands(n: u64) -> String {
-    let digits = n.to_string();
-    let mut out = String::with_capacity(digits.len() + digits.len() / 3);
-    for (i, ch) in digits.chars().enumerate() {
-        if i > 0 && (digits.len() - i) % 3 == 0 {
-            out.push(',');
-        }
-        out.push(ch);
-    }
-    out
+    words::figures(n)
 }
 
 impl From<&str> for Value {

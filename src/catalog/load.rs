@@ -21,7 +21,11 @@ pub struct CatalogProblem {
 
 impl fmt::Display for CatalogProblem {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        write!(f, "{}:{}:{}: {}", self.file, self.line, self.column, self.message)
+        write!(
+            f,
+            "{}:{}:{}: {}",
+            self.file, self.line, self.column, self.message
+        )
     }
 }
 
@@ -73,7 +77,12 @@ pub const SERVICE_FILE: &str = "service.yaml";
 /// Loads every `*.yaml` file of an intents folder.
 pub fn load_dir(dir: &Path) -> Result<Catalog, CatalogError> {
     let entries = std::fs::read_dir(dir).map_err(|e| {
-        CatalogError(vec![CatalogProblem { file: dir.display().to_string(), line: 0, column: 0, message: format!("cannot read the folder: {e}") }])
+        CatalogError(vec![CatalogProblem {
+            file: dir.display().to_string(),
+            line: 0,
+            column: 0,
+            message: format!("cannot read the folder: {e}"),
+        }])
     })?;
     let mut files = Vec::new();
     for entry in entries.flatten() {
@@ -137,28 +146,58 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
         });
     }
     if intents.is_empty() && problems.is_empty() {
-        problems.push(CatalogProblem { file: "intents".into(), line: 0, column: 0, message: "no intents found".into() });
+        problems.push(CatalogProblem {
+            file: "intents".into(),
+            line: 0,
+            column: 0,
+            message: "no intents found".into(),
+        });
     }
     if !problems.is_empty() {
         return Err(CatalogError(problems));
     }
-    Ok(Catalog { intents, service: service.expect("checked above") })
+    Ok(Catalog {
+        intents,
+        service: service.expect("checked above"),
+    })
 }
 
 fn yaml_problem(file: &str, e: &serde_saphyr::Error) -> CatalogProblem {
-    let (line, column) = e.location().map(|l| (l.line(), l.column())).unwrap_or((0, 0));
+    let (line, column) = e
+        .location()
+        .map(|l| (l.line(), l.column()))
+        .unwrap_or((0, 0));
     // The library's message may carry a source snippet on later lines; the
     // first line is the sentence an editor needs.
     let full = e.to_string();
-    let message = full.lines().find(|l| !l.trim().is_empty()).unwrap_or("invalid YAML").trim().to_string();
-    CatalogProblem { file: file.to_string(), line, column, message }
+    let message = full
+        .lines()
+        .find(|l| !l.trim().is_empty())
+        .unwrap_or("invalid YAML")
+        .trim()
+        .to_string();
+    CatalogProblem {
+        file: file.to_string(),
+        line,
+        column,
+        message,
+    }
 }
 
 fn at<T>(file: &str, s: &Spanned<T>, message: String) -> CatalogProblem {
-    CatalogProblem { file: file.to_string(), line: s.referenced.line(), column: s.referenced.column(), message }
+    CatalogProblem {
+        file: file.to_string(),
+        line: s.referenced.line(),
+        column: s.referenced.column(),
+        message,
+    }
 }
 
-fn template(file: &str, s: &Spanned<String>, problems: &mut Vec<CatalogProblem>) -> Option<Template> {
+fn template(
+    file: &str,
+    s: &Spanned<String>,
+    problems: &mut Vec<CatalogProblem>,
+) -> Option<Template> {
     match Template::parse(&s.value) {
         Ok(t) => Some(t),
         Err(e) => {
@@ -174,15 +213,31 @@ fn template(file: &str, s: &Spanned<String>, problems: &mut Vec<CatalogProblem>)
     }
 }
 
-fn service_wording(file: &str, s: ServiceFile, problems: &mut Vec<CatalogProblem>) -> Option<ServiceWording> {
-    let allowed: [(&Spanned<String>, &[&str]); 3] =
-        [(&s.not_understood, &["examples"]), (&s.choose, &["options", "noun"]), (&s.reset, &[])];
+fn service_wording(
+    file: &str,
+    s: ServiceFile,
+    problems: &mut Vec<CatalogProblem>,
+) -> Option<ServiceWording> {
+    let allowed: [(&Spanned<String>, &[&str]); 3] = [
+        (&s.not_understood, &["examples"]),
+        (&s.choose, &["options", "noun"]),
+        (&s.reset, &[]),
+    ];
     let mut out = Vec::new();
     for (spanned, names) in allowed {
-        let Some(t) = template(file, spanned, problems) else { continue };
+        let Some(t) = template(file, spanned, problems) else {
+            continue;
+        };
         for n in t.names() {
             if !names.contains(&n) {
-                problems.push(at(file, spanned, format!("placeholder {{{n}}} is not available here; use {}", list_or_none(names))));
+                problems.push(at(
+                    file,
+                    spanned,
+                    format!(
+                        "placeholder {{{n}}} is not available here; use {}",
+                        list_or_none(names)
+                    ),
+                ));
             }
         }
         out.push(t);
@@ -193,14 +248,23 @@ fn service_wording(file: &str, s: ServiceFile, problems: &mut Vec<CatalogProblem
     let reset = out.pop()?;
     let choose = out.pop()?;
     let not_understood = out.pop()?;
-    Some(ServiceWording { not_understood, choose, reset, examples: s.examples })
+    Some(ServiceWording {
+        not_understood,
+        choose,
+        reset,
+        examples: s.examples,
+    })
 }
 
 fn list_or_none(names: &[&str]) -> String {
     if names.is_empty() {
         "no placeholders".into()
     } else {
-        names.iter().map(|n| format!("{{{n}}}")).collect::<Vec<_>>().join(", ")
+        names
+            .iter()
+            .map(|n| format!("{{{n}}}"))
+            .collect::<Vec<_>>()
+            .join(", ")
     }
 }
 
@@ -224,14 +288,26 @@ fn phrasing_slots(p: &str) -> Result<Vec<String>, String> {
 fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -> Option<Intent> {
     let before = problems.len();
     let name = f.intent.value.trim().to_string();
-    if name.is_empty() || !name.chars().all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '_') {
-        problems.push(at(file, &f.intent, format!("intent name {name:?} must use lowercase letters, digits and '_'")));
+    if name.is_empty()
+        || !name
+            .chars()
+            .all(|c| c.is_ascii_lowercase() || c.is_ascii_digit() || c == '_')
+    {
+        problems.push(at(
+            file,
+            &f.intent,
+            format!("intent name {name:?} must use lowercase letters, digits and '_'"),
+        ));
     }
     let Some(op) = ops::find(&f.operation.value) else {
         problems.push(at(
             file,
             &f.operation,
-            format!("unknown operation {:?}; the operations are {}", f.operation.value, ops::names().join(", ")),
+            format!(
+                "unknown operation {:?}; the operations are {}",
+                f.operation.value,
+                ops::names().join(", ")
+            ),
         ));
         return None;
     };
@@ -240,7 +316,15 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
     for (slot_name, spec) in &f.slots {
         let Some(kind) = EntityKind::from_name(&spec.value.entity.value) else {
             let kinds: Vec<&str> = EntityKind::ALL.iter().map(|k| k.name()).collect();
-            problems.push(at(file, &spec.value.entity, format!("unknown entity kind {:?}; the kinds are {}", spec.value.entity.value, kinds.join(", "))));
+            problems.push(at(
+                file,
+                &spec.value.entity,
+                format!(
+                    "unknown entity kind {:?}; the kinds are {}",
+                    spec.value.entity.value,
+                    kinds.join(", ")
+                ),
+            ));
             continue;
         };
         let Some(param) = op.param(slot_name) else {
@@ -248,7 +332,15 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
             problems.push(at(
                 file,
                 spec,
-                format!("slot {slot_name:?} is not used by operation {}; it takes {}", op.name, if params.is_empty() { "no slots".to_string() } else { params.join(", ") }),
+                format!(
+                    "slot {slot_name:?} is not used by operation {}; it takes {}",
+                    op.name,
+                    if params.is_empty() {
+                        "no slots".to_string()
+                    } else {
+                        params.join(", ")
+                    }
+                ),
             ));
             continue;
         };
@@ -256,13 +348,22 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
             problems.push(at(
                 file,
                 &spec.value.entity,
-                format!("slot {slot_name:?} must hold a {} for operation {}, not a {}", param.kind.name(), op.name, kind.name()),
+                format!(
+                    "slot {slot_name:?} must hold a {} for operation {}, not a {}",
+                    param.kind.name(),
+                    op.name,
+                    kind.name()
+                ),
             ));
             continue;
         }
         let required = spec.value.required.unwrap_or(param.required);
         if param.required && !required {
-            problems.push(at(file, spec, format!("slot {slot_name:?} is required by operation {}", op.name)));
+            problems.push(at(
+                file,
+                spec,
+                format!("slot {slot_name:?} is required by operation {}", op.name),
+            ));
         }
         let ask = match (&spec.value.ask, required) {
             (Some(a), _) => a.clone(),
@@ -272,16 +373,34 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
             }
             (None, false) => String::new(),
         };
-        slots.push(SlotDef { name: slot_name.clone(), kind, required, ask });
+        slots.push(SlotDef {
+            name: slot_name.clone(),
+            kind,
+            required,
+            ask,
+        });
     }
     for p in op.params.iter().filter(|p| p.required) {
         if !f.slots.contains_key(p.name) {
-            problems.push(at(file, &f.operation, format!("operation {} needs a slot {:?} of kind {}", op.name, p.name, p.kind.name())));
+            problems.push(at(
+                file,
+                &f.operation,
+                format!(
+                    "operation {} needs a slot {:?} of kind {}",
+                    op.name,
+                    p.name,
+                    p.kind.name()
+                ),
+            ));
         }
     }
 
     if f.phrasings.is_empty() {
-        problems.push(at(file, &f.intent, "an intent needs at least one phrasing".into()));
+        problems.push(at(
+            file,
+            &f.intent,
+            "an intent needs at least one phrasing".into(),
+        ));
     }
     let declared: HashSet<&str> = f.slots.keys().map(String::as_str).collect();
     let mut phrasings = Vec::new();
@@ -291,7 +410,11 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
             Ok(used) => {
                 for u in used {
                     if !declared.contains(u.as_str()) {
-                        problems.push(at(file, p, format!("placeholder {{{u}}} has no slot; declare it under `slots:`")));
+                        problems.push(at(
+                            file,
+                            p,
+                            format!("placeholder {{{u}}} has no slot; declare it under `slots:`"),
+                        ));
                     }
                 }
             }
@@ -303,16 +426,35 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
     for o in op.outcomes {
         if !f.replies.value.contains_key(o.name) {
             let all: Vec<&str> = op.outcomes.iter().map(|o| o.name).collect();
-            problems.push(at(file, &f.replies, format!("replies need wording for outcome {:?} of operation {} (its outcomes: {})", o.name, op.name, all.join(", "))));
+            problems.push(at(
+                file,
+                &f.replies,
+                format!(
+                    "replies need wording for outcome {:?} of operation {} (its outcomes: {})",
+                    o.name,
+                    op.name,
+                    all.join(", ")
+                ),
+            ));
         }
     }
     for (outcome, text) in &f.replies.value {
         let Some(spec) = op.outcome(outcome) else {
             let all: Vec<&str> = op.outcomes.iter().map(|o| o.name).collect();
-            problems.push(at(file, text, format!("operation {} has no outcome {outcome:?}; its outcomes are {}", op.name, all.join(", "))));
+            problems.push(at(
+                file,
+                text,
+                format!(
+                    "operation {} has no outcome {outcome:?}; its outcomes are {}",
+                    op.name,
+                    all.join(", ")
+                ),
+            ));
             continue;
         };
-        let Some(t) = template(file, text, problems) else { continue };
+        let Some(t) = template(file, text, problems) else {
+            continue;
+        };
         for n in t.names() {
             if !declared.contains(n) && !spec.facts.contains(&n) {
                 problems.push(at(

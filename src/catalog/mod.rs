@@ -30,7 +30,10 @@ impl Catalog {
 
     /// One line per intent that has a summary, for help replies.
     pub fn topics(&self) -> Vec<String> {
-        self.intents.iter().filter_map(|i| i.summary.clone()).collect()
+        self.intents
+            .iter()
+            .filter_map(|i| i.summary.clone())
+            .collect()
     }
 }
 

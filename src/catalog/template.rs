@@ -31,11 +31,17 @@ enum Piece {
 #[derive(Debug, Clone, PartialEq)]
 enum Filter {
     Join(&'static str),
-    Count { singular: String, plural: Option<String> },
+    Count {
+        singular: String,
+        plural: Option<String>,
+    },
     Ordinal,
     Nth,
     Figure,
-    Verb { one: String, many: String },
+    Verb {
+        one: String,
+        many: String,
+    },
     Upper,
     Lower,
 }
@@ -61,9 +67,15 @@ impl Template {
         let mut pos = 0;
         let pieces = parse_seq(&chars, &mut pos, false)?;
         if pos < chars.len() {
-            return Err(TemplateError { offset: pos, message: "unexpected ']' with no matching '['".into() });
+            return Err(TemplateError {
+                offset: pos,
+                message: "unexpected ']' with no matching '['".into(),
+            });
         }
-        Ok(Template { pieces, source: source.to_string() })
+        Ok(Template {
+            pieces,
+            source: source.to_string(),
+        })
     }
 
     /// The wording as the editor wrote it.
@@ -109,15 +121,26 @@ fn parse_seq(chars: &[char], pos: &mut usize, nested: bool) -> Result<Vec<Piece>
                     pieces.push(Piece::Literal(std::mem::take(&mut lit)));
                 }
                 let start = *pos;
-                let close = chars[start..].iter().position(|&c| c == '}').map(|i| start + i);
+                let close = chars[start..]
+                    .iter()
+                    .position(|&c| c == '}')
+                    .map(|i| start + i);
                 let Some(close) = close else {
-                    return Err(TemplateError { offset: start, message: "'{' is not closed with '}'".into() });
+                    return Err(TemplateError {
+                        offset: start,
+                        message: "'{' is not closed with '}'".into(),
+                    });
                 };
                 let inner: String = chars[start + 1..close].iter().collect();
                 pieces.push(parse_field(&inner, start)?);
                 *pos = close + 1;
             }
-            '}' => return Err(TemplateError { offset: *pos, message: "'}' with no matching '{'".into() }),
+            '}' => {
+                return Err(TemplateError {
+                    offset: *pos,
+                    message: "'}' with no matching '{'".into(),
+                })
+            }
             '[' => {
                 if !lit.is_empty() {
                     pieces.push(Piece::Literal(std::mem::take(&mut lit)));
@@ -126,13 +149,21 @@ fn parse_seq(chars: &[char], pos: &mut usize, nested: bool) -> Result<Vec<Piece>
                 *pos += 1;
                 let inner = parse_seq(chars, pos, true)?;
                 if *pos >= chars.len() || chars[*pos] != ']' {
-                    return Err(TemplateError { offset: start, message: "'[' is not closed with ']'".into() });
+                    return Err(TemplateError {
+                        offset: start,
+                        message: "'[' is not closed with ']'".into(),
+                    });
                 }
                 *pos += 1;
                 pieces.push(Piece::Optional(inner));
             }
             ']' if nested => break,
-            ']' => return Err(TemplateError { offset: *pos, message: "']' with no matching '['".into() }),
+            ']' => {
+                return Err(TemplateError {
+                    offset: *pos,
+                    message: "']' with no matching '['".into(),
+                })
+            }
             _ => {
                 lit.push(c);
                 *pos += 1;
@@ -151,7 +182,9 @@ fn parse_field(inner: &str, offset: usize) -> Result<Piece, TemplateError> {
     if name.is_empty() || !name.chars().all(|c| c.is_ascii_alphanumeric() || c == '_') {
         return Err(TemplateError {
             offset,
-            message: format!("{{{inner}}} is not a placeholder: use a name made of letters, digits and '_'"),
+            message: format!(
+                "{{{inner}}} is not a placeholder: use a name made of letters, digits and '_'"
+            ),
         });
     }
     let mut filters = Vec::new();
@@ -245,8 +278,14 @@ fn apply(v: &Value, filters: &[Filter], style: Style) -> String {
                     many.clone()
                 }
             }
-            Filter::Upper => text.clone().unwrap_or_else(|| v.render(style)).to_uppercase(),
-            Filter::Lower => text.clone().unwrap_or_else(|| v.render(style)).to_lowercase(),
+            Filter::Upper => text
+                .clone()
+                .unwrap_or_else(|| v.render(style))
+                .to_uppercase(),
+            Filter::Lower => text
+                .clone()
+                .unwrap_or_else(|| v.render(style))
+                .to_lowercase(),
         };
         text = Some(t);
     }
@@ -274,15 +313,24 @@ mod tests {
     use super::*;
 
     fn vals(pairs: &[(&str, Value)]) -> HashMap<String, Value> {
-        pairs.iter().map(|(k, v)| (k.to_string(), v.clone())).collect()
+        pairs
+            .iter()
+            .map(|(k, v)| (k.to_string(), v.clone()))
+            .collect()
     }
 
     #[test]
     fn optional_parts_drop_when_a_value_is_missing() {
         let t = Template::parse("{gold} won[, ahead of {silver}].").unwrap();
-        assert_eq!(t.render(&vals(&[("gold", "A".into())]), Style::Text), "A won.");
         assert_eq!(
-            t.render(&vals(&[("gold", "A".into()), ("silver", "B".into())]), Style::Text),
+            t.render(&vals(&[("gold", "A".into())]), Style::Text),
+            "A won."
+        );
+        assert_eq!(
+            t.render(
+                &vals(&[("gold", "A".into()), ("silver", "B".into())]),
+                Style::Text
+            ),
             "A won, ahead of B."
         );
     }
@@ -290,9 +338,18 @@ mod tests {
     #[test]
     fn counts_agree_with_their_noun() {
         let t = Template::parse("{n|count:medal} {n|verb:was:were} won").unwrap();
-        assert_eq!(t.render(&vals(&[("n", Value::Int(1))]), Style::Text), "One medal was won");
-        assert_eq!(t.render(&vals(&[("n", Value::Int(3))]), Style::Text), "Three medals were won");
-        assert_eq!(t.render(&vals(&[("n", Value::Int(14))]), Style::Text), "14 medals were won");
+        assert_eq!(
+            t.render(&vals(&[("n", Value::Int(1))]), Style::Text),
+            "One medal was won"
+        );
+        assert_eq!(
+            t.render(&vals(&[("n", Value::Int(3))]), Style::Text),
+            "Three medals were won"
+        );
+        assert_eq!(
+            t.render(&vals(&[("n", Value::Int(14))]), Style::Text),
+            "14 medals were won"
+        );
     }
 
     #[test]
@@ -305,15 +362,24 @@ mod tests {
     #[test]
     fn ordinals_in_words_and_figures() {
         let t = Template::parse("{p|ordinal} / {p|nth}").unwrap();
-        assert_eq!(t.render(&vals(&[("p", Value::Int(22))]), Style::Text), "Twenty-second / 22nd");
-        assert_eq!(t.render(&vals(&[("p", Value::Int(22))]), Style::Spoken), "Twenty-second / twenty-second");
+        assert_eq!(
+            t.render(&vals(&[("p", Value::Int(22))]), Style::Text),
+            "Twenty-second / 22nd"
+        );
+        assert_eq!(
+            t.render(&vals(&[("p", Value::Int(22))]), Style::Spoken),
+            "Twenty-second / twenty-second"
+        );
     }
 
     #[test]
     fn errors_point_at_the_problem() {
         assert_eq!(Template::parse("hello {name").unwrap_err().offset, 6);
         assert_eq!(Template::parse("a [b {c}").unwrap_err().offset, 2);
-        assert!(Template::parse("{x|shout}").unwrap_err().message.contains("unknown filter"));
+        assert!(Template::parse("{x|shout}")
+            .unwrap_err()
+            .message
+            .contains("unknown filter"));
         assert!(Template::parse("{two words}").is_err());
         assert!(Template::parse("a ] b").is_err());
     }

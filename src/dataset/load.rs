@@ -54,11 +54,20 @@ pub enum LoadError {
 }
 
 fn list(p: &[DataProblem]) -> String {
-    p.iter().map(|p| format!("  {p}")).collect::<Vec<_>>().join("\n")
+    p.iter()
+        .map(|p| format!("  {p}"))
+        .collect::<Vec<_>>()
+        .join("\n")
 }
 
 /// The files a scenario is made of.
-pub const FILES: [&str; 5] = ["scenario.json", "sports.json", "groups.json", "competitors.json", "contests.json"];
+pub const FILES: [&str; 5] = [
+    "scenario.json",
+    "sports.json",
+    "groups.json",
+    "competitors.json",
+    "contests.json",
+];
 
 /// Reads and validates the scenario in `dir`.
 pub fn load_dir(dir: &Path) -> Result<Dataset, LoadError> {
@@ -70,9 +79,12 @@ pub fn load_dir(dir: &Path) -> Result<Dataset, LoadError> {
     })
 }
 
+/// Gives the reported name and the text of one scenario file.
+pub type FileSource<'a> = dyn Fn(&str) -> Result<(String, String), LoadError> + 'a;
+
 /// Reads and validates a scenario from any source of file texts; `read`
 /// returns the name to report and the text of one of [`FILES`].
-pub fn load_files(read: &dyn Fn(&str) -> Result<(String, String), LoadError>) -> Result<Dataset, LoadError> {
+pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
     let scenario: Scenario = parse(read("scenario.json")?)?;
     let sports: Vec<Sport> = parse(read("sports.json")?)?;
     let groups: Vec<Group> = parse(read("groups.json")?)?;
@@ -82,7 +94,8 @@ pub fn load_files(read: &dyn Fn(&str) -> Result<(String, String), LoadError>) ->
 }
 
 fn parse<T: DeserializeOwned>((name, text): (String, String)) -> Result<T, LoadError> {
-    serde_json::from_str(&text).map_err(|e| LoadError::File(format!("{name}:{}:{}: {e}", e.line(), e.column())))
+    serde_json::from_str(&text)
+        .map_err(|e| LoadError::File(format!("{name}:{}:{}: {e}", e.line(), e.column())))
 }
 
 struct Problems(Vec<DataProblem>);
@@ -130,14 +143,24 @@ pub fn build(
     let tz = match TimeZone::get(&scenario.time_zone) {
         Ok(tz) => tz,
         Err(_) => {
-            p.add(sf, &scenario.id, "time_zone", format!("unknown time zone {:?}", scenario.time_zone));
+            p.add(
+                sf,
+                &scenario.id,
+                "time_zone",
+                format!("unknown time zone {:?}", scenario.time_zone),
+            );
             TimeZone::UTC
         }
     };
     let as_of = match scenario.as_of.parse::<Timestamp>() {
         Ok(t) => t,
         Err(_) => {
-            p.add(sf, &scenario.id, "as_of", "expected an RFC 3339 time with offset");
+            p.add(
+                sf,
+                &scenario.id,
+                "as_of",
+                "expected an RFC 3339 time with offset",
+            );
             Timestamp::UNIX_EPOCH
         }
     };
@@ -145,14 +168,24 @@ pub fn build(
         None => None,
         Some(Ok(t)) => Some(t),
         Some(Err(_)) => {
-            p.add(sf, &scenario.id, "clock", "expected an RFC 3339 time with offset");
+            p.add(
+                sf,
+                &scenario.id,
+                "clock",
+                "expected an RFC 3339 time with offset",
+            );
             None
         }
     };
     let mut seen = HashSet::new();
     for a in &scenario.awards {
         if !seen.insert(a) {
-            p.add(sf, &scenario.id, "awards", format!("award {a:?} listed twice"));
+            p.add(
+                sf,
+                &scenario.id,
+                "awards",
+                format!("award {a:?} listed twice"),
+            );
         }
     }
 
@@ -161,7 +194,12 @@ pub fn build(
         let mut ds = HashSet::new();
         for d in &s.disciplines {
             if !ds.insert(&d.id) {
-                p.add("sports.json", &s.id, "disciplines", format!("duplicate discipline id {:?}", d.id));
+                p.add(
+                    "sports.json",
+                    &s.id,
+                    "disciplines",
+                    format!("duplicate discipline id {:?}", d.id),
+                );
             }
         }
     }
@@ -184,7 +222,17 @@ pub fn build(
 
     let mut facts = Vec::with_capacity(contests.len());
     for c in &contests {
-        facts.push(check_contest(c, &scenario, &tz, &sports, &sport_ix, &group_ix, &competitor_ix, &competitors, &mut p));
+        facts.push(check_contest(
+            c,
+            &scenario,
+            &tz,
+            &sports,
+            &sport_ix,
+            &group_ix,
+            &competitor_ix,
+            &competitors,
+            &mut p,
+        ));
     }
 
     if !p.0.is_empty() {
@@ -225,14 +273,31 @@ fn check_contest(
         None => p.add(f, &c.id, "sport", format!("no sport with id {:?}", c.sport)),
         Some(&s) => {
             if !sports[s].disciplines.iter().any(|d| d.id == c.discipline) {
-                p.add(f, &c.id, "discipline", format!("sport {:?} has no discipline {:?}", c.sport, c.discipline));
+                p.add(
+                    f,
+                    &c.id,
+                    "discipline",
+                    format!("sport {:?} has no discipline {:?}", c.sport, c.discipline),
+                );
             }
         }
     }
-    let start = match c.start.parse::<DateTime>().map(|dt| dt.to_zoned_datetime(tz.clone())) {
+    let start = match c
+        .start
+        .parse::<DateTime>()
+        .map(|dt| dt.to_zoned_datetime(tz.clone()))
+    {
         Ok(Ok(z)) => z,
         _ => {
-            p.add(f, &c.id, "start", format!("expected a local time such as 2027-08-14T19:40, got {:?}", c.start));
+            p.add(
+                f,
+                &c.id,
+                "start",
+                format!(
+                    "expected a local time such as 2027-08-14T19:40, got {:?}",
+                    c.start
+                ),
+            );
             Timestamp::UNIX_EPOCH.to_zoned_datetime(tz.clone())
         }
     };
@@ -255,21 +320,46 @@ fn check_contest(
     for (i, e) in c.entries.iter().enumerate() {
         let rec = format!("{} entry {}", c.id, i + 1);
         match (&e.competitor, &e.group) {
-            (Some(_), Some(_)) => p.add(f, &rec, "competitor", "an entry names a competitor or a group, not both"),
-            (None, None) => p.add(f, &rec, "competitor", "an entry needs a competitor or a group"),
+            (Some(_), Some(_)) => p.add(
+                f,
+                &rec,
+                "competitor",
+                "an entry names a competitor or a group, not both",
+            ),
+            (None, None) => p.add(
+                f,
+                &rec,
+                "competitor",
+                "an entry needs a competitor or a group",
+            ),
             _ => {}
         }
         if let Some(id) = &e.competitor {
             match competitor_ix.get(id) {
-                None => p.add(f, &rec, "competitor", format!("no competitor with id {id:?}")),
+                None => p.add(
+                    f,
+                    &rec,
+                    "competitor",
+                    format!("no competitor with id {id:?}"),
+                ),
                 Some(&ci) => {
                     let who = &competitors[ci];
                     if who.sport != c.sport {
-                        p.add(f, &rec, "competitor", format!("{id} competes in {}, not {}", who.sport, c.sport));
+                        p.add(
+                            f,
+                            &rec,
+                            "competitor",
+                            format!("{id} competes in {}, not {}", who.sport, c.sport),
+                        );
                     }
                     if let (Some(a), Some(b)) = (&who.category, &c.category) {
                         if a != b && b != "mixed" {
-                            p.add(f, &rec, "competitor", format!("{id} is in category {a}, the contest is {b}"));
+                            p.add(
+                                f,
+                                &rec,
+                                "competitor",
+                                format!("{id} is in category {a}, the contest is {b}"),
+                            );
                         }
                     }
                 }
@@ -303,7 +393,12 @@ fn check_contest(
         };
         marks.push(mark);
         if e.status != EntryStatus::Ok && e.place.is_some() {
-            p.add(f, &rec, "place", format!("an entry with status {:?} has no place", e.status));
+            p.add(
+                f,
+                &rec,
+                "place",
+                format!("an entry with status {:?} has no place", e.status),
+            );
         }
         if let Some(a) = &e.award {
             if !scenario.awards.contains(a) {
@@ -312,12 +407,23 @@ fn check_contest(
         }
     }
     check_places(c, &marks, better, scenario, p);
-    ContestFacts { start, better, marks, updated }
+    ContestFacts {
+        start,
+        better,
+        marks,
+        updated,
+    }
 }
 
 /// Places must follow standard competition ranking (1, 2, 2, 4), agree with
 /// the marks, and awards must follow places in a final contest.
-fn check_places(c: &Contest, marks: &[Option<mark::Mark>], better: Better, scenario: &Scenario, p: &mut Problems) {
+fn check_places(
+    c: &Contest,
+    marks: &[Option<mark::Mark>],
+    better: Better,
+    scenario: &Scenario,
+    p: &mut Problems,
+) {
     let f = "contests.json";
     let mut placed: Vec<(u32, usize)> = c
         .entries
@@ -332,24 +438,47 @@ fn check_places(c: &Contest, marks: &[Option<mark::Mark>], better: Better, scena
         // entries placed strictly ahead of it.
         let ahead = placed.iter().filter(|(q, _)| *q < place).count() as u32;
         if place != ahead + 1 {
-            p.add(f, &rec, "place", format!("place {place} does not follow the places before it (expected {})", ahead + 1));
+            p.add(
+                f,
+                &rec,
+                "place",
+                format!(
+                    "place {place} does not follow the places before it (expected {})",
+                    ahead + 1
+                ),
+            );
         }
         if k > 0 {
             let (prev_place, j) = placed[k - 1];
             if let (Some(a), Some(b)) = (&marks[j], &marks[i]) {
                 let ord = mark::compare(better == Better::Lower, a, b);
                 if prev_place == place && ord != std::cmp::Ordering::Equal {
-                    p.add(f, &rec, "mark", format!("shares place {place} but its mark differs"));
+                    p.add(
+                        f,
+                        &rec,
+                        "mark",
+                        format!("shares place {place} but its mark differs"),
+                    );
                 }
                 if prev_place < place && ord != std::cmp::Ordering::Less {
-                    p.add(f, &rec, "mark", format!("place {place} has a mark as good as or better than place {prev_place}"));
+                    p.add(
+                        f,
+                        &rec,
+                        "mark",
+                        format!(
+                            "place {place} has a mark as good as or better than place {prev_place}"
+                        ),
+                    );
                 }
             }
         }
         let e = &c.entries[i];
         // Awards are given only when a final is over; heats place without them.
         let expected = if c.status == Status::Final && c.phase == "final" {
-            scenario.awards.get(place as usize - 1).filter(|_| place >= 1)
+            scenario
+                .awards
+                .get(place as usize - 1)
+                .filter(|_| place >= 1)
         } else {
             None
         };
@@ -359,10 +488,16 @@ fn check_places(c: &Contest, marks: &[Option<mark::Mark>], better: Better, scena
         }
         if e.award.as_ref() != expected {
             let msg = match (expected, &e.award) {
-                (Some(x), None) => format!("place {place} in a final contest should carry the award {x:?}"),
-                (None, Some(a)) if c.status != Status::Final => format!("award {a:?} given before the contest is final"),
+                (Some(x), None) => {
+                    format!("place {place} in a final contest should carry the award {x:?}")
+                }
+                (None, Some(a)) if c.status != Status::Final => {
+                    format!("award {a:?} given before the contest is final")
+                }
                 (None, Some(a)) => format!("award {a:?} contradicts place {place}"),
-                (Some(x), Some(a)) => format!("award {a:?} contradicts place {place} (expected {x:?})"),
+                (Some(x), Some(a)) => {
+                    format!("award {a:?} contradicts place {place} (expected {x:?})")
+                }
                 (None, None) => unreachable!("equal"),
             };
             p.add(f, &rec, "award", msg);
@@ -370,7 +505,12 @@ fn check_places(c: &Contest, marks: &[Option<mark::Mark>], better: Better, scena
     }
     for (i, e) in c.entries.iter().enumerate() {
         if e.place.is_none() && e.award.is_some() {
-            p.add(f, &format!("{} entry {}", c.id, i + 1), "award", "an award needs a place");
+            p.add(
+                f,
+                &format!("{} entry {}", c.id, i + 1),
+                "award",
+                "an award needs a place",
+            );
         }
     }
 }

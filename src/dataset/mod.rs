@@ -117,9 +117,12 @@ impl Dataset {
             None => {}
         }
         out.push_str(&d.name);
-        if c.phase != "final" || self.contests.iter().any(|o| {
-            o.id != c.id && o.discipline == c.discipline && o.category == c.category
-        }) {
+        if c.phase != "final"
+            || self
+                .contests
+                .iter()
+                .any(|o| o.id != c.id && o.discipline == c.discipline && o.category == c.category)
+        {
             out.push(' ');
             out.push_str(&c.phase);
         }

@@ -86,9 +86,13 @@ impl Session {
 
     /// Adds entities to the front of the recent list.
     pub fn remember(&mut self, data: &Dataset, entities: &[EntityRef]) {
-        let mut fresh: Vec<StoredEntity> = entities.iter().map(|e| store_entity(data, *e)).collect();
+        let mut fresh: Vec<StoredEntity> =
+            entities.iter().map(|e| store_entity(data, *e)).collect();
         fresh.dedup();
-        let mut rest: Vec<StoredEntity> = std::mem::take(&mut self.recent).into_iter().filter(|e| !fresh.contains(e)).collect();
+        let mut rest: Vec<StoredEntity> = std::mem::take(&mut self.recent)
+            .into_iter()
+            .filter(|e| !fresh.contains(e))
+            .collect();
         fresh.append(&mut rest);
         fresh.truncate(RECENT);
         self.recent = fresh;
@@ -107,7 +111,10 @@ fn kind_name(e: EntityRef) -> &'static str {
 
 /// An entity in its stored form.
 pub fn store_entity(data: &Dataset, e: EntityRef) -> StoredEntity {
-    StoredEntity { kind: kind_name(e).to_string(), id: data.entity_id(e) }
+    StoredEntity {
+        kind: kind_name(e).to_string(),
+        id: data.entity_id(e),
+    }
 }
 
 /// Back from the stored form; `None` if the data no longer has it.
@@ -121,10 +128,18 @@ pub fn store_slots(data: &Dataset, slots: &Slots) -> BTreeMap<String, StoredSlot
         .iter()
         .map(|(k, v)| {
             let s = match v {
-                SlotValue::Entity { entity } => StoredSlot::Entity { entity: store_entity(data, *entity) },
-                SlotValue::Category { value } => StoredSlot::Category { value: value.clone() },
-                SlotValue::Award { value } => StoredSlot::Award { value: value.clone() },
-                SlotValue::Date { value } => StoredSlot::Date { value: value.to_string() },
+                SlotValue::Entity { entity } => StoredSlot::Entity {
+                    entity: store_entity(data, *entity),
+                },
+                SlotValue::Category { value } => StoredSlot::Category {
+                    value: value.clone(),
+                },
+                SlotValue::Award { value } => StoredSlot::Award {
+                    value: value.clone(),
+                },
+                SlotValue::Date { value } => StoredSlot::Date {
+                    value: value.to_string(),
+                },
                 SlotValue::Count { value } => StoredSlot::Count { value: *value },
             };
             (k.clone(), s)
@@ -138,10 +153,18 @@ pub fn load_slots(data: &Dataset, stored: &BTreeMap<String, StoredSlot>) -> Slot
         .iter()
         .filter_map(|(k, v)| {
             let s = match v {
-                StoredSlot::Entity { entity } => SlotValue::Entity { entity: load_entity(data, entity)? },
-                StoredSlot::Category { value } => SlotValue::Category { value: value.clone() },
-                StoredSlot::Award { value } => SlotValue::Award { value: value.clone() },
-                StoredSlot::Date { value } => SlotValue::Date { value: value.parse().ok()? },
+                StoredSlot::Entity { entity } => SlotValue::Entity {
+                    entity: load_entity(data, entity)?,
+                },
+                StoredSlot::Category { value } => SlotValue::Category {
+                    value: value.clone(),
+                },
+                StoredSlot::Award { value } => SlotValue::Award {
+                    value: value.clone(),
+                },
+                StoredSlot::Date { value } => SlotValue::Date {
+                    value: value.parse().ok()?,
+                },
                 StoredSlot::Count { value } => SlotValue::Count { value: *value },
             };
             Some((k.clone(), s))

@@ -28,7 +28,12 @@ pub trait SessionStore: Send + Sync + 'static {
     /// The session under `key`, if present and not expired.
     fn load<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<Option<Session>, StoreError>>;
     /// Stores `session` under `key`, expiring after `ttl` without use.
-    fn save<'a>(&'a self, key: &'a str, session: &'a Session, ttl: Duration) -> BoxFuture<'a, Result<(), StoreError>>;
+    fn save<'a>(
+        &'a self,
+        key: &'a str,
+        session: &'a Session,
+        ttl: Duration,
+    ) -> BoxFuture<'a, Result<(), StoreError>>;
     /// Removes the session under `key`.
     fn delete<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<(), StoreError>>;
     /// A short name for logs and status.
@@ -72,7 +77,12 @@ impl SessionStore for MemoryStore {
         })
     }
 
-    fn save<'a>(&'a self, key: &'a str, session: &'a Session, ttl: Duration) -> BoxFuture<'a, Result<(), StoreError>> {
+    fn save<'a>(
+        &'a self,
+        key: &'a str,
+        session: &'a Session,
+        ttl: Duration,
+    ) -> BoxFuture<'a, Result<(), StoreError>> {
         Box::pin(async move {
             let now = Instant::now();
             let mut map = self.lock();

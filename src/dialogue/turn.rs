@@ -83,7 +83,15 @@ pub struct TurnContext<'a> {
     pub style: Style,
 }
 
-const RESET: &[&str] = &["start over", "start again", "never mind", "nevermind", "forget it", "reset", "cancel"];
+const RESET: &[&str] = &[
+    "start over",
+    "start again",
+    "never mind",
+    "nevermind",
+    "forget it",
+    "reset",
+    "cancel",
+];
 
 /// Handles one message. Returns the reply and the session to store.
 pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session) {
@@ -92,7 +100,10 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     s.updated_at = ctx.now.timestamp().as_second();
     let a = ctx.understanding.analyse(text, ctx.now.date());
 
-    if RESET.iter().any(|r| a.normalized == *r || a.normalized.trim_end_matches(" please") == *r) {
+    if RESET
+        .iter()
+        .any(|r| a.normalized == *r || a.normalized.trim_end_matches(" please") == *r)
+    {
         let channel = s.channel.clone();
         let mut fresh = Session::new(&channel, s.updated_at);
         fresh.turn = s.turn;
@@ -116,11 +127,22 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     };
     let confidence = best.score.min(1.0);
     let filled = fill(ctx.data, intent, &a, &Slots::new());
-    if matches!(filled.need, Some(Need::Missing { .. })) && best.score < MIN_SCORE_TO_ASK && a.mentions.is_empty() {
+    if matches!(filled.need, Some(Need::Missing { .. }))
+        && best.score < MIN_SCORE_TO_ASK
+        && a.mentions.is_empty()
+    {
         return (not_understood(ctx, &a), s);
     }
     let confidence = confidence * filled.certainty;
-    let reply = proceed(ctx, &mut s, intent, filled.slots, filled.need, confidence, &a);
+    let reply = proceed(
+        ctx,
+        &mut s,
+        intent,
+        filled.slots,
+        filled.need,
+        confidence,
+        &a,
+    );
     (reply, s)
 }
 
@@ -136,13 +158,28 @@ fn proceed(
 ) -> Reply {
     match need {
         Some(Need::Missing { slot }) => {
-            let def = intent.slot(&slot).expect("fill only names the intent's slots");
-            s.pending = Some(Pending { intent: intent.name.clone(), slots: store_slots(ctx.data, &slots), slot, options: vec![] });
-            let mut r = plain_reply(def.ask.clone(), Outcome::Clarify, Some(intent), confidence, a);
+            let def = intent
+                .slot(&slot)
+                .expect("fill only names the intent's slots");
+            s.pending = Some(Pending {
+                intent: intent.name.clone(),
+                slots: store_slots(ctx.data, &slots),
+                slot,
+                options: vec![],
+            });
+            let mut r = plain_reply(
+                def.ask.clone(),
+                Outcome::Clarify,
+                Some(intent),
+                confidence,
+                a,
+            );
             r.slots = slots_out(ctx.data, &slots);
             r
         }
-        Some(Need::Choose { slot, options }) => ask_choice(ctx, s, intent, slots, &slot, options, confidence, a),
+        Some(Need::Choose { slot, options }) => {
+            ask_choice(ctx, s, intent, slots, &slot, options, confidence, a)
+        }
         Some(Need::NoMatch { what, .. }) => {
             let text = if what.is_empty() {
                 "I could not find that event in the results.".to_string()
@@ -168,7 +205,10 @@ fn ask_choice(
     a: &Analysis,
 ) -> Reply {
     let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
-    let noun = options.first().map(|e| noun_for(ctx.data, *e)).unwrap_or("one");
+    let noun = options
+        .first()
+        .map(|e| noun_for(ctx.data, *e))
+        .unwrap_or("one");
     let mut values = HashMap::new();
     values.insert("options".to_string(), Value::from(labels.clone()));
     values.insert("noun".to_string(), Value::Text(noun.to_string()));
@@ -186,30 +226,71 @@ fn ask_choice(
         .zip(labels)
         .map(|(e, text)| {
             let st = store_entity(ctx.data, *e);
-            OptionOut { kind: st.kind, id: st.id, text }
+            OptionOut {
+                kind: st.kind,
+                id: st.id,
+                text,
+            }
         })
         .collect();
     r
 }
 
-fn run(ctx: &TurnContext, s: &mut Session, intent: &Intent, slots: Slots, confidence: f32, a: &Analysis) -> Reply {
+fn run(
+    ctx: &TurnContext,
+    s: &mut Session,
+    intent: &Intent,
+    slots: Slots,
+    confidence: f32,
+    a: &Analysis,
+) -> Reply {
     let topics = ctx.catalog.topics();
-    let input = OpInput { data: ctx.data, slots: &slots, now: ctx.now, settings: &intent.settings, topics: &topics };
+    let input = OpInput {
+        data: ctx.data,
+        slots: &slots,
+        now: ctx.now,
+        settings: &intent.settings,
+        topics: &topics,
+    };
     match (intent.operation.run)(&input) {
-        OpOutput::Choose { slot, options } if options.is_empty() => {
-            proceed(ctx, s, intent, slots, Some(Need::Missing { slot: slot.to_string() }), confidence, a)
+        OpOutput::Choose { slot, options } if options.is_empty() => proceed(
+            ctx,
+            s,
+            intent,
+            slots,
+            Some(Need::Missing {
+                slot: slot.to_string(),
+            }),
+            confidence,
+            a,
+        ),
+        OpOutput::Choose { slot, options } => {
+            ask_choice(ctx, s, intent, slots, slot, options, confidence, a)
         }
-        OpOutput::Choose { slot, options } => ask_choice(ctx, s, intent, slots, slot, options, confidence, a),
-        OpOutput::Done { outcome, facts, mentioned } => {
-            let spec = intent.operation.outcome(outcome).expect("operations return declared outcomes");
+        OpOutput::Done {
+            outcome,
+            facts,
+            mentioned,
+        } => {
+            let spec = intent
+                .operation
+                .outcome(outcome)
+                .expect("operations return declared outcomes");
             let mut values: HashMap<String, Value> = facts.clone();
             for (k, v) in &slots {
-                values.entry(k.clone()).or_insert_with(|| Value::Text(v.display(ctx.data)));
+                values
+                    .entry(k.clone())
+                    .or_insert_with(|| Value::Text(v.display(ctx.data)));
             }
-            let text = intent.replies.get(outcome).map(|t| t.render(&values, ctx.style)).unwrap_or_default();
+            let text = intent
+                .replies
+                .get(outcome)
+                .map(|t| t.render(&values, ctx.style))
+                .unwrap_or_default();
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);
-            let mut remembered: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
+            let mut remembered: Vec<EntityRef> =
+                slots.values().filter_map(SlotValue::entity).collect();
             remembered.extend(mentioned);
             s.remember(ctx.data, &remembered);
             let class = match spec.class {
@@ -239,23 +320,45 @@ fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis)
     let def = intent.slot(&p.slot)?;
     let carried = load_slots(ctx.data, &p.slots);
     // A clearly different question wins over a loose answer.
-    let new_question = a.scores.first().is_some_and(|b| b.score >= 0.75 && b.intent != p.intent);
+    let new_question = a
+        .scores
+        .first()
+        .is_some_and(|b| b.score >= 0.75 && b.intent != p.intent);
     let value = if p.options.is_empty() {
         if new_question {
             return None;
         }
         let filled = fill(ctx.data, intent, a, &carried);
-        if filled.slots.contains_key(&p.slot) || filled.need.as_ref().is_some_and(|n| !matches!(n, Need::Missing { slot } if *slot == p.slot)) {
+        if filled.slots.contains_key(&p.slot)
+            || filled
+                .need
+                .as_ref()
+                .is_some_and(|n| !matches!(n, Need::Missing { slot } if *slot == p.slot))
+        {
             let confidence = filled.certainty;
-            return Some(proceed(ctx, s, intent, filled.slots, filled.need, confidence, a));
+            return Some(proceed(
+                ctx,
+                s,
+                intent,
+                filled.slots,
+                filled.need,
+                confidence,
+                a,
+            ));
         }
         return None;
     } else {
-        let options: Vec<EntityRef> = p.options.iter().filter_map(|o| load_entity(ctx.data, o)).collect();
+        let options: Vec<EntityRef> = p
+            .options
+            .iter()
+            .filter_map(|o| load_entity(ctx.data, o))
+            .collect();
         match pick(ctx.data, &options, a) {
             Picked::One(e) => SlotValue::Entity { entity: e },
             Picked::Some(narrowed) if !new_question => {
-                return Some(ask_choice(ctx, s, intent, carried, &p.slot, narrowed, 1.0, a));
+                return Some(ask_choice(
+                    ctx, s, intent, carried, &p.slot, narrowed, 1.0, a,
+                ));
             }
             _ => return None,
         }
@@ -274,8 +377,16 @@ enum Picked {
     None,
 }
 
-const ORDINALS: [(&str, usize); 8] =
-    [("first", 0), ("second", 1), ("third", 2), ("fourth", 3), ("fifth", 4), ("sixth", 5), ("1st", 0), ("2nd", 1)];
+const ORDINALS: [(&str, usize); 8] = [
+    ("first", 0),
+    ("second", 1),
+    ("third", 2),
+    ("fourth", 3),
+    ("fifth", 4),
+    ("sixth", 5),
+    ("1st", 0),
+    ("2nd", 1),
+];
 
 /// Which of the offered options the message picks: by position ("the second
 /// one"), by name or part of it, by sport noun ("the rower"), by group ("the
@@ -349,11 +460,15 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
             match m.candidates.first() {
                 Some((Target::Category(c), _)) => {
                     let c = c.clone();
-                    apply(&|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].category.as_deref() == Some(c.as_str())));
+                    apply(
+                        &|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].category.as_deref() == Some(c.as_str())),
+                    );
                 }
                 Some((Target::Phase(p), _)) => {
                     let p = p.clone();
-                    apply(&|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].phase.starts_with(p.as_str())));
+                    apply(
+                        &|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].phase.starts_with(p.as_str())),
+                    );
                 }
                 _ => {}
             }
@@ -363,7 +478,9 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
     if !apply(&|_| true) {
         let label_hit = |e: &EntityRef| {
             let label = crate::understand::normalize::normalize(&describe(data, *e));
-            toks.iter().any(|t| t.len() >= 3 && !matches!(*t, "the" | "one") && label.split(' ').any(|w| w == *t))
+            toks.iter().any(|t| {
+                t.len() >= 3 && !matches!(*t, "the" | "one") && label.split(' ').any(|w| w == *t)
+            })
         };
         apply(&label_hit);
     }
@@ -396,8 +513,14 @@ pub fn describe(data: &Dataset, e: EntityRef) -> String {
     match e {
         EntityRef::Competitor(i) => {
             let c = &data.competitors[i];
-            let noun = data.sport(&c.sport).map(|s| data.sports[s].noun.as_str()).unwrap_or("");
-            let group = data.group(&c.group).map(|g| data.groups[g].name.as_str()).unwrap_or("");
+            let noun = data
+                .sport(&c.sport)
+                .map(|s| data.sports[s].noun.as_str())
+                .unwrap_or("");
+            let group = data
+                .group(&c.group)
+                .map(|g| data.groups[g].name.as_str())
+                .unwrap_or("");
             format!("{} ({noun}, {group})", c.name())
         }
         EntityRef::Contest(i) => format!("the {}", data.contest_name(i)),
@@ -418,11 +541,26 @@ fn noun_for(data: &Dataset, e: EntityRef) -> &'static str {
 fn slots_out(data: &Dataset, slots: &Slots) -> BTreeMap<String, SlotOut> {
     slots
         .iter()
-        .map(|(k, v)| (k.clone(), SlotOut { kind: v.kind(), value: v.key(data), text: v.display(data) }))
+        .map(|(k, v)| {
+            (
+                k.clone(),
+                SlotOut {
+                    kind: v.kind(),
+                    value: v.key(data),
+                    text: v.display(data),
+                },
+            )
+        })
         .collect()
 }
 
-fn plain_reply(text: String, outcome: Outcome, intent: Option<&Intent>, confidence: f32, a: &Analysis) -> Reply {
+fn plain_reply(
+    text: String,
+    outcome: Outcome,
+    intent: Option<&Intent>,
+    confidence: f32,
+    a: &Analysis,
+) -> Reply {
     Reply {
         text,
         intent: intent.map(|i| i.name.clone()),
@@ -438,8 +576,22 @@ fn plain_reply(text: String, outcome: Outcome, intent: Option<&Intent>, confiden
 
 fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
     let mut values = HashMap::new();
-    values.insert("examples".to_string(), Value::List(ctx.catalog.service.examples.iter().map(|e| Value::Text(format!("\u{201c}{e}\u{201d}"))).collect()));
-    let text = ctx.catalog.service.not_understood.render(&values, ctx.style);
+    values.insert(
+        "examples".to_string(),
+        Value::List(
+            ctx.catalog
+                .service
+                .examples
+                .iter()
+                .map(|e| Value::Text(format!("\u{201c}{e}\u{201d}")))
+                .collect(),
+        ),
+    );
+    let text = ctx
+        .catalog
+        .service
+        .not_understood
+        .render(&values, ctx.style);
     let confidence = a.scores.first().map(|s| s.score).unwrap_or(0.0);
     let mut r = plain_reply(text, Outcome::NotUnderstood, None, 1.0 - confidence, a);
     r.confidence = (1.0 - confidence).clamp(0.0, 1.0);

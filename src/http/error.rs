@@ -18,7 +18,11 @@ pub struct ApiError {
 impl ApiError {
     /// A 422 for a request that parsed but cannot be used.
     pub fn invalid(code: &'static str, message: impl Into<String>) -> ApiError {
-        ApiError { status: StatusCode::UNPROCESSABLE_ENTITY, code, message: message.into() }
+        ApiError {
+            status: StatusCode::UNPROCESSABLE_ENTITY,
+            code,
+            message: message.into(),
+        }
     }
 }
 
@@ -27,7 +31,11 @@ impl IntoResponse for ApiError {
         if self.status.is_server_error() {
             tracing::error!(code = self.code, message = %self.message, "request failed");
         }
-        (self.status, Json(json!({ "error": { "code": self.code, "message": self.message } }))).into_response()
+        (
+            self.status,
+            Json(json!({ "error": { "code": self.code, "message": self.message } })),
+        )
+            .into_response()
     }
 }
 
@@ -35,21 +43,31 @@ impl From<JsonRejection> for ApiError {
     fn from(r: JsonRejection) -> ApiError {
         let status = r.status();
         let (code, message) = match status {
-            StatusCode::PAYLOAD_TOO_LARGE => ("body_too_large", "the request body is larger than 16 KiB".to_string()),
-            StatusCode::UNSUPPORTED_MEDIA_TYPE => {
-                ("unsupported_media_type", "send the body as JSON with content-type: application/json".to_string())
-            }
+            StatusCode::PAYLOAD_TOO_LARGE => (
+                "body_too_large",
+                "the request body is larger than 16 KiB".to_string(),
+            ),
+            StatusCode::UNSUPPORTED_MEDIA_TYPE => (
+                "unsupported_media_type",
+                "send the body as JSON with content-type: application/json".to_string(),
+            ),
             StatusCode::UNPROCESSABLE_ENTITY => ("invalid_body", lowercase_first(&r.body_text())),
             _ => ("malformed_json", lowercase_first(&r.body_text())),
         };
-        ApiError { status, code, message }
+        ApiError {
+            status,
+            code,
+            message,
+        }
     }
 }
 
 impl From<crate::engine::EngineError> for ApiError {
     fn from(e: crate::engine::EngineError) -> ApiError {
         match e {
-            crate::engine::EngineError::UnknownChannel(_) => ApiError::invalid("unknown_channel", e.to_string()),
+            crate::engine::EngineError::UnknownChannel(_) => {
+                ApiError::invalid("unknown_channel", e.to_string())
+            }
         }
     }
 }
@@ -57,7 +75,12 @@ impl From<crate::engine::EngineError> for ApiError {
 fn lowercase_first(s: &str) -> String {
     let mut c = s.chars();
     match c.next() {
-        Some(f) => f.to_lowercase().chain(c).collect::<String>().trim_end_matches('.').to_string(),
+        Some(f) => f
+            .to_lowercase()
+            .chain(c)
+            .collect::<String>()
+            .trim_end_matches('.')
+            .to_string(),
         None => String::new(),
     }
 }

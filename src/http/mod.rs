@@ -47,19 +47,28 @@ pub struct MessageIn {
     pub message_id: Option<String>,
 }
 
-async fn messages(State(engine): State<Engine>, AppJson(m): AppJson<MessageIn>) -> Result<impl IntoResponse, ApiError> {
+async fn messages(
+    State(engine): State<Engine>,
+    AppJson(m): AppJson<MessageIn>,
+) -> Result<impl IntoResponse, ApiError> {
     if m.user.trim().is_empty() {
         return Err(ApiError::invalid("empty_user", "user must not be empty"));
     }
     if m.user.chars().count() > 200 {
-        return Err(ApiError::invalid("user_too_long", "user must be at most 200 characters"));
+        return Err(ApiError::invalid(
+            "user_too_long",
+            "user must be at most 200 characters",
+        ));
     }
     let text = m.text.trim();
     if text.is_empty() {
         return Err(ApiError::invalid("empty_text", "text must not be empty"));
     }
     if text.chars().count() > MAX_TEXT {
-        return Err(ApiError::invalid("text_too_long", format!("text must be at most {MAX_TEXT} characters")));
+        return Err(ApiError::invalid(
+            "text_too_long",
+            format!("text must be at most {MAX_TEXT} characters"),
+        ));
     }
     let channel = m.channel.as_deref().unwrap_or("chat");
     let answer = engine.handle(&m.user, channel, text).await?;
@@ -68,11 +77,17 @@ async fn messages(State(engine): State<Engine>, AppJson(m): AppJson<MessageIn>) 
 
 async fn healthz(State(engine): State<Engine>) -> impl IntoResponse {
     let snap = engine.snapshot();
-    Json(json!({ "status": "ok", "dataset_version": snap.data.version, "intents": snap.catalog.intents.len() }))
+    Json(
+        json!({ "status": "ok", "dataset_version": snap.data.version, "intents": snap.catalog.intents.len() }),
+    )
 }
 
 async fn not_found() -> ApiError {
-    ApiError { status: StatusCode::NOT_FOUND, code: "not_found", message: "no such endpoint".into() }
+    ApiError {
+        status: StatusCode::NOT_FOUND,
+        code: "not_found",
+        message: "no such endpoint".into(),
+    }
 }
 
 /// The application's routes and layers.
@@ -86,14 +101,27 @@ pub fn app(engine: Engine) -> Router {
         // timeout (so a stuck request cannot hold shutdown forever), then the
         // body limit that the JSON extractor reports as 413.
         .layer(DefaultBodyLimit::max(MAX_BODY))
-        .layer(TimeoutLayer::with_status_code(StatusCode::SERVICE_UNAVAILABLE, Duration::from_secs(10)))
+        .layer(TimeoutLayer::with_status_code(
+            StatusCode::SERVICE_UNAVAILABLE,
+            Duration::from_secs(10),
+        ))
         .layer(TraceLayer::new_for_http().make_span_with(|req: &Request| {
-            let route = req.extensions().get::<MatchedPath>().map(|p| p.as_str().to_string()).unwrap_or_default();
+            let route = req
+                .extensions()
+                .get::<MatchedPath>()
+                .map(|p| p.as_str().to_string())
+                .unwrap_or_default();
             tracing::info_span!("request", method = %req.method(), route = %route)
         }))
 }
 
 /// Serves the API on `listener` until `shutdown` completes.
-pub async fn run(listener: TcpListener, engine: Engine, shutdown: impl Future<Output = ()> + Send + 'static) -> std::io::Result<()> {
-    axum::serve(listener, app(engine)).with_graceful_shutdown(shutdown).await
+pub async fn run(
+    listener: TcpListener,
+    engine: Engine,
+    shutdown: impl Future<Output = ()> + Send + 'static,
+) -> std::io::Result<()> {
+    axum::serve(listener, app(engine))
+        .with_graceful_shutdown(shutdown)
+        .await
 }

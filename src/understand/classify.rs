@@ -93,12 +93,24 @@ impl Classifier {
             .iter()
             .zip(ex_feats)
             .map(|((intent, text, _), feats)| {
-                let features: Vec<(Tok, f32)> = feats.iter().map(|&t| (t, idf[t as usize])).collect();
+                let features: Vec<(Tok, f32)> =
+                    feats.iter().map(|&t| (t, idf[t as usize])).collect();
                 let norm = features.iter().map(|(_, w)| w * w).sum::<f32>().sqrt();
-                Example { intent: *intent, text: text.clone(), features, norm }
+                Example {
+                    intent: *intent,
+                    text: text.clone(),
+                    features,
+                    norm,
+                }
             })
             .collect();
-        Classifier { vocab, words, idf, examples, intents: intents.to_vec() }
+        Classifier {
+            vocab,
+            words,
+            idf,
+            examples,
+            intents: intents.to_vec(),
+        }
     }
 
     /// Scores every intent for the abstracted message tokens, best first.
@@ -121,7 +133,11 @@ impl Classifier {
         if msg_norm > 0.0 {
             for (ei, ex) in self.examples.iter().enumerate() {
                 let dot = dot(&known, &ex.features);
-                let s = if ex.norm > 0.0 { dot / (msg_norm * ex.norm) } else { 0.0 };
+                let s = if ex.norm > 0.0 {
+                    dot / (msg_norm * ex.norm)
+                } else {
+                    0.0
+                };
                 if s > best[ex.intent].0 || best[ex.intent].1 == usize::MAX {
                     best[ex.intent] = (s, ei);
                 }
@@ -140,10 +156,20 @@ impl Classifier {
                     .map(|(t, _)| self.words[*t as usize].clone())
                     .filter(|w| !w.contains(' '))
                     .collect();
-                Scored { intent: self.intents[i].clone(), score, example: ex.text.clone(), shared }
+                Scored {
+                    intent: self.intents[i].clone(),
+                    score,
+                    example: ex.text.clone(),
+                    shared,
+                }
             })
             .collect();
-        out.sort_by(|a, b| b.score.partial_cmp(&a.score).unwrap_or(std::cmp::Ordering::Equal).then(a.intent.cmp(&b.intent)));
+        out.sort_by(|a, b| {
+            b.score
+                .partial_cmp(&a.score)
+                .unwrap_or(std::cmp::Ordering::Equal)
+                .then(a.intent.cmp(&b.intent))
+        });
         out
     }
 }
@@ -184,8 +210,16 @@ mod tests {
     fn the_closest_phrasing_wins_and_explains_itself() {
         let intents = vec!["podium".to_string(), "schedule".to_string()];
         let ex = vec![
-            (0, "who won the {contest}".to_string(), toks("who won the <event>")),
-            (1, "when is the {contest}".to_string(), toks("when is the <event>")),
+            (
+                0,
+                "who won the {contest}".to_string(),
+                toks("who won the <event>"),
+            ),
+            (
+                1,
+                "when is the {contest}".to_string(),
+                toks("when is the <event>"),
+            ),
         ];
         let c = Classifier::new(&intents, &ex);
         let s = c.score(&toks("who won the <event>"));
@@ -199,7 +233,11 @@ mod tests {
     #[test]
     fn unrelated_text_scores_low() {
         let intents = vec!["podium".to_string()];
-        let ex = vec![(0, "who won the {contest}".to_string(), toks("who won the <event>"))];
+        let ex = vec![(
+            0,
+            "who won the {contest}".to_string(),
+            toks("who won the <event>"),
+        )];
         let c = Classifier::new(&intents, &ex);
         let s = c.score(&toks("bake me a lemon cake"));
         assert!(s[0].score < 0.2);

@@ -645,6 +645,14 @@ impl FuzzyIndex {
     }
 }
 
+impl std::fmt::Debug for FuzzyIndex {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.debug_struct("FuzzyIndex")
+            .field("terms", &self.len())
+            .finish_non_exhaustive()
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -912,11 +920,5 @@ mod tests {
                 "{:?} not found for {:?}: {:?}", original, query, hits
             );
         }
-    }
-}
-
-impl std::fmt::Debug for FuzzyIndex {
-    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
-        f.debug_struct("FuzzyIndex").field("terms", &self.len()).finish_non_exhaustive()
     }
 }

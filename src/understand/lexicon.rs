@@ -90,15 +90,147 @@ pub struct Lexicon {
 
 /// Words too common to be a name on their own, whatever the data says.
 const COMMON: &[&str] = &[
-    "a", "an", "the", "and", "or", "of", "in", "on", "at", "to", "for", "by", "with", "from", "is", "was", "were", "are", "be",
-    "did", "do", "does", "has", "have", "had", "who", "what", "when", "where", "which", "how", "many", "much", "i", "me", "my",
-    "you", "your", "he", "she", "they", "him", "her", "them", "his", "their", "it", "its", "this", "that", "these", "those", "one",
-    "ones", "so", "far", "yet", "now", "about", "tell", "show", "give", "please", "thanks", "thank", "hi", "hello", "hey", "ok",
-    "okay", "yes", "no", "not", "still", "get", "got", "won", "win", "wins", "winner", "race", "event", "results", "result",
-    "medal", "medals", "team", "time", "next", "last", "first", "second", "third", "up", "over", "out", "all", "any", "can", "will",
-    "would", "could", "should", "there", "here", "then", "than", "just", "only", "also", "too", "very", "more", "most", "less",
-    "did", "done", "go", "went", "going", "compete", "competing", "start", "starts", "leading", "leads", "lead", "leader", "best",
-    "top", "table", "day", "days", "today", "tomorrow", "yesterday", "tonight", "morning", "evening", "afternoon", "place",
+    "a",
+    "an",
+    "the",
+    "and",
+    "or",
+    "of",
+    "in",
+    "on",
+    "at",
+    "to",
+    "for",
+    "by",
+    "with",
+    "from",
+    "is",
+    "was",
+    "were",
+    "are",
+    "be",
+    "did",
+    "do",
+    "does",
+    "has",
+    "have",
+    "had",
+    "who",
+    "what",
+    "when",
+    "where",
+    "which",
+    "how",
+    "many",
+    "much",
+    "i",
+    "me",
+    "my",
+    "you",
+    "your",
+    "he",
+    "she",
+    "they",
+    "him",
+    "her",
+    "them",
+    "his",
+    "their",
+    "it",
+    "its",
+    "this",
+    "that",
+    "these",
+    "those",
+    "one",
+    "ones",
+    "so",
+    "far",
+    "yet",
+    "now",
+    "about",
+    "tell",
+    "show",
+    "give",
+    "please",
+    "thanks",
+    "thank",
+    "hi",
+    "hello",
+    "hey",
+    "ok",
+    "okay",
+    "yes",
+    "no",
+    "not",
+    "still",
+    "get",
+    "got",
+    "won",
+    "win",
+    "wins",
+    "winner",
+    "race",
+    "event",
+    "results",
+    "result",
+    "medal",
+    "medals",
+    "team",
+    "time",
+    "next",
+    "last",
+    "first",
+    "second",
+    "third",
+    "up",
+    "over",
+    "out",
+    "all",
+    "any",
+    "can",
+    "will",
+    "would",
+    "could",
+    "should",
+    "there",
+    "here",
+    "then",
+    "than",
+    "just",
+    "only",
+    "also",
+    "too",
+    "very",
+    "more",
+    "most",
+    "less",
+    "did",
+    "done",
+    "go",
+    "went",
+    "going",
+    "compete",
+    "competing",
+    "start",
+    "starts",
+    "leading",
+    "leads",
+    "lead",
+    "leader",
+    "best",
+    "top",
+    "table",
+    "day",
+    "days",
+    "today",
+    "tomorrow",
+    "yesterday",
+    "tonight",
+    "morning",
+    "evening",
+    "afternoon",
+    "place",
 ];
 
 impl Lexicon {
@@ -121,7 +253,10 @@ impl Lexicon {
         for (i, c) in data.competitors.iter().enumerate() {
             let e = EntityRef::Competitor(i);
             add(&c.name(), Target::Entity(e, Form::Full));
-            add(&format!("{} {}", c.family, c.given), Target::Entity(e, Form::Full));
+            add(
+                &format!("{} {}", c.family, c.given),
+                Target::Entity(e, Form::Full),
+            );
             for a in &c.aliases {
                 add(a, Target::Entity(e, Form::Alias));
             }
@@ -145,7 +280,10 @@ impl Lexicon {
                 add(a, Target::Entity(e, Form::Alias));
             }
             add(&s.noun, Target::SportNoun(si));
-            add(&crate::answers::words::plural(&s.noun), Target::SportNoun(si));
+            add(
+                &crate::answers::words::plural(&s.noun),
+                Target::SportNoun(si),
+            );
             for (di, d) in s.disciplines.iter().enumerate() {
                 let e = EntityRef::Discipline(si, di);
                 add(&d.name, Target::Entity(e, Form::Full));
@@ -204,7 +342,12 @@ impl Lexicon {
         for (surface, ts) in surfaces.iter().zip(&targets) {
             let keep: Vec<Target> = ts
                 .iter()
-                .filter(|t| matches!(t, Target::Entity(..) | Target::SportNoun(_) | Target::Award(_)))
+                .filter(|t| {
+                    matches!(
+                        t,
+                        Target::Entity(..) | Target::SportNoun(_) | Target::Award(_)
+                    )
+                })
                 .cloned()
                 .collect();
             if keep.is_empty() || surface.len() < 3 {
@@ -215,10 +358,28 @@ impl Lexicon {
             fuzzy_words.push(surface.split(' ').count());
         }
         let fuzzy = FuzzyIndex::new(fuzzy_terms);
-        let mut vocab_words: Vec<String> = vocabulary.iter().filter(|w| w.len() >= 4).cloned().collect();
+        let mut vocab_words: Vec<String> = vocabulary
+            .iter()
+            .filter(|w| w.len() >= 4)
+            .cloned()
+            .collect();
         vocab_words.sort();
-        let vocab_index = FuzzyIndex::new(vocab_words.iter().enumerate().map(|(i, w)| (w.clone(), i as u32)));
-        Lexicon { automaton, targets, fuzzy, fuzzy_targets, fuzzy_words, vocabulary, vocab_index, vocab_words }
+        let vocab_index = FuzzyIndex::new(
+            vocab_words
+                .iter()
+                .enumerate()
+                .map(|(i, w)| (w.clone(), i as u32)),
+        );
+        Lexicon {
+            automaton,
+            targets,
+            fuzzy,
+            fuzzy_targets,
+            fuzzy_words,
+            vocabulary,
+            vocab_index,
+            vocab_words,
+        }
     }
 
     /// Whether a word is an ordinary word of the catalog's questions.
@@ -253,7 +414,10 @@ impl Lexicon {
         // "100 m freestyle") from hiding a shorter whole-word one.
         let mut found: Vec<(usize, usize, usize)> = Vec::new();
         for m in self.automaton.find_overlapping_iter(text) {
-            let (Some(s), Some(e)) = (starts.iter().position(|&b| b == m.start()), ends.iter().position(|&b| b == m.end())) else {
+            let (Some(s), Some(e)) = (
+                starts.iter().position(|&b| b == m.start()),
+                ends.iter().position(|&b| b == m.end()),
+            ) else {
                 continue;
             };
             found.push((s, e + 1, m.pattern().as_usize()));
@@ -277,11 +441,15 @@ impl Lexicon {
                 })
                 .collect();
             sort_candidates(&mut candidates);
-            mentions.push(Mention { start: s, end: e, candidates, exact: true });
+            mentions.push(Mention {
+                start: s,
+                end: e,
+                candidates,
+                exact: true,
+            });
         }
         self.extend_events(tokens, &mut covered, &mut mentions);
         self.spot_fuzzy(tokens, &mut covered, &mut mentions);
-        self.spot_familiar_events(tokens, &mut covered, &mut mentions);
         mentions.sort_by_key(|m| m.start);
         mentions
     }
@@ -294,7 +462,9 @@ impl Lexicon {
         let mut events = Vec::new();
         let is_discipline = |t: &Target| matches!(t, Target::Entity(EntityRef::Discipline(..), _));
         for m in mentions.iter_mut() {
-            let Some((top, _)) = m.candidates.first() else { continue };
+            let Some((top, _)) = m.candidates.first() else {
+                continue;
+            };
             let after_category = matches!(top, Target::Category(_));
             let extend_discipline = is_discipline(top);
             if !after_category && !extend_discipline {
@@ -316,7 +486,11 @@ impl Lexicon {
                 let hits = self.fuzzy.lookup(&query, 0.86, 4);
                 let mut found: Vec<(Target, f32)> = hits
                     .iter()
-                    .flat_map(|h| self.fuzzy_targets[h.id as usize].iter().map(move |t| (t.clone(), h.score as f32 * 0.97)))
+                    .flat_map(|h| {
+                        self.fuzzy_targets[h.id as usize]
+                            .iter()
+                            .map(move |t| (t.clone(), h.score as f32 * 0.97))
+                    })
                     .filter(|(t, _)| is_discipline(t))
                     .collect();
                 if found.is_empty() {
@@ -335,7 +509,12 @@ impl Lexicon {
                 m.exact = false;
             } else {
                 // Keep the category; the words after it become the event.
-                events.push(Mention { start: m.end, end, candidates: found, exact: false });
+                events.push(Mention {
+                    start: m.end,
+                    end,
+                    candidates: found,
+                    exact: false,
+                });
             }
         }
         mentions.extend(events);
@@ -345,7 +524,10 @@ impl Lexicon {
     /// single words.
     fn spot_fuzzy(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
         let unfamiliar = |covered: &[bool], i: usize| {
-            !covered[i] && tokens[i].len() >= 3 && !self.vocabulary.contains(tokens[i]) && !tokens[i].chars().all(|c| c.is_ascii_digit())
+            !covered[i]
+                && tokens[i].len() >= 3
+                && !self.vocabulary.contains(tokens[i])
+                && !tokens[i].chars().all(|c| c.is_ascii_digit())
         };
         for width in [3usize, 2, 1] {
             if tokens.len() < width {
@@ -358,7 +540,8 @@ impl Lexicon {
                 let ok = (i..i + width).all(|k| !covered[k])
                     && unfamiliar(covered, i)
                     && unfamiliar(covered, i + width - 1)
-                    && (width < 3 || (i..i + width).filter(|&k| unfamiliar(covered, k)).count() >= 2);
+                    && (width < 3
+                        || (i..i + width).filter(|&k| unfamiliar(covered, k)).count() >= 2);
                 if !ok {
                     i += 1;
                     continue;
@@ -368,7 +551,10 @@ impl Lexicon {
                 let hits = self.fuzzy.lookup(&query, min, 8);
                 // A single word must look like a single-word name, and a pair
                 // like a pair; otherwise "long jupm" would match a person.
-                let hits: Vec<_> = hits.into_iter().filter(|h| self.fuzzy_term_words(h.id) == width).collect();
+                let hits: Vec<_> = hits
+                    .into_iter()
+                    .filter(|h| self.fuzzy_term_words(h.id) == width)
+                    .collect();
                 if hits.is_empty() {
                     i += 1;
                     continue;
@@ -383,40 +569,14 @@ impl Lexicon {
                 }
                 sort_candidates(&mut candidates);
                 covered[i..i + width].iter_mut().for_each(|c| *c = true);
-                mentions.push(Mention { start: i, end: i + width, candidates, exact: false });
+                mentions.push(Mention {
+                    start: i,
+                    end: i + width,
+                    candidates,
+                    exact: false,
+                });
                 i += width;
             }
-        }
-    }
-
-    /// A last pass for event names made of everyday words ("hi jump",
-    /// "time trail"): pairs of uncovered words, tried against discipline
-    /// names only, with a high bar.
-    fn spot_familiar_events(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
-        let mut i = 0;
-        while i + 2 <= tokens.len() {
-            if covered[i] || covered[i + 1] {
-                i += 1;
-                continue;
-            }
-            let query = format!("{} {}", tokens[i], tokens[i + 1]);
-            let mut found: Vec<(Target, f32)> = self
-                .fuzzy
-                .lookup(&query, 0.9, 4)
-                .iter()
-                .filter(|h| self.fuzzy_term_words(h.id) == 2)
-                .flat_map(|h| self.fuzzy_targets[h.id as usize].iter().map(move |t| (t.clone(), h.score as f32 * 0.97)))
-                .filter(|(t, _)| matches!(t, Target::Entity(EntityRef::Discipline(..), _)))
-                .collect();
-            if found.is_empty() {
-                i += 1;
-                continue;
-            }
-            sort_candidates(&mut found);
-            covered[i] = true;
-            covered[i + 1] = true;
-            mentions.push(Mention { start: i, end: i + 2, candidates: found, exact: false });
-            i += 2;
         }
     }
 
@@ -431,7 +591,10 @@ impl Lexicon {
 fn short_forms(name: &str) -> Vec<String> {
     let words: Vec<&str> = name.split(' ').collect();
     let mut out = Vec::new();
-    if words.len() >= 2 && words[0].chars().all(|c| c.is_ascii_digit()) && (words[1] == "m" || words[1] == "km") {
+    if words.len() >= 2
+        && words[0].chars().all(|c| c.is_ascii_digit())
+        && (words[1] == "m" || words[1] == "km")
+    {
         let rest = words[2..].join(" ");
         if rest.is_empty() {
             out.push(words[0].to_string());

@@ -81,7 +81,10 @@ fn target_placeholder(t: &Target) -> &'static str {
 
 /// Splits a phrasing into normalised words, with `{slot}` placeholders
 /// replaced by the token of the slot's kind.
-pub fn phrasing_tokens(phrasing: &str, kind_of: &dyn Fn(&str) -> Option<EntityKind>) -> Vec<String> {
+pub fn phrasing_tokens(
+    phrasing: &str,
+    kind_of: &dyn Fn(&str) -> Option<EntityKind>,
+) -> Vec<String> {
     let mut out = Vec::new();
     let mut rest = phrasing;
     loop {
@@ -89,11 +92,21 @@ pub fn phrasing_tokens(phrasing: &str, kind_of: &dyn Fn(&str) -> Option<EntityKi
             Some(i) => (&rest[..i], Some(&rest[i + 1..])),
             None => (rest, None),
         };
-        out.extend(normalize::normalize(lit).split(' ').filter(|s| !s.is_empty()).map(String::from));
+        out.extend(
+            normalize::normalize(lit)
+                .split(' ')
+                .filter(|s| !s.is_empty())
+                .map(String::from),
+        );
         let Some(after) = after else { break };
         let close = after.find('}').unwrap_or(after.len());
         let name = after[..close].trim();
-        out.push(kind_of(name).map(placeholder).unwrap_or("<unknown>").to_string());
+        out.push(
+            kind_of(name)
+                .map(placeholder)
+                .unwrap_or("<unknown>")
+                .to_string(),
+        );
         rest = after.get(close + 1..).unwrap_or("");
     }
     merge_events(out)
@@ -146,7 +159,8 @@ impl Understanding {
             .intents
             .iter()
             .map(|i| {
-                let mut v: Vec<&'static str> = i.slots.iter().map(|s| placeholder(s.kind)).collect();
+                let mut v: Vec<&'static str> =
+                    i.slots.iter().map(|s| placeholder(s.kind)).collect();
                 // An event may be named through its sport, category or phase.
                 if v.contains(&"<event>") {
                     v.extend(["<sport>", "<category>", "<phase>"]);
@@ -157,7 +171,11 @@ impl Understanding {
                 (i.name.clone(), v)
             })
             .collect();
-        Understanding { lexicon, classifier, accepts }
+        Understanding {
+            lexicon,
+            classifier,
+            accepts,
+        }
     }
 
     /// Reads one message.
@@ -174,7 +192,13 @@ impl Understanding {
         let toks: Vec<&str> = toks
             .iter()
             .enumerate()
-            .map(|(i, t)| if covered[i] { *t } else { self.lexicon.correct(t).unwrap_or(t) })
+            .map(|(i, t)| {
+                if covered[i] {
+                    *t
+                } else {
+                    self.lexicon.correct(t).unwrap_or(t)
+                }
+            })
             .collect();
         let days = when::find_days(&toks, today);
         let count = when::find_count(&toks);
@@ -182,7 +206,13 @@ impl Understanding {
         let mut i = 0;
         while i < toks.len() {
             if let Some(m) = mentions.iter().find(|m| m.start == i) {
-                abstracted.push(m.candidates.first().map(|c| target_placeholder(&c.0)).unwrap_or("<unknown>").to_string());
+                abstracted.push(
+                    m.candidates
+                        .first()
+                        .map(|c| target_placeholder(&c.0))
+                        .unwrap_or("<unknown>")
+                        .to_string(),
+                );
                 i = m.end;
             } else if let Some(d) = days.iter().find(|d| d.start == i) {
                 abstracted.push("<date>".into());
@@ -199,14 +229,23 @@ impl Understanding {
         let abstracted = merge_events(abstracted);
         let mut scores = self.classifier.score(&abstracted);
         for sc in &mut scores {
-            let accepts = self.accepts.get(&sc.intent).map(Vec::as_slice).unwrap_or(&[]);
+            let accepts = self
+                .accepts
+                .get(&sc.intent)
+                .map(Vec::as_slice)
+                .unwrap_or(&[]);
             let misfits = ["<competitor>", "<group>", "<event>", "<sport>"]
                 .iter()
                 .filter(|p| abstracted.iter().any(|t| t == *p) && !accepts.contains(p))
                 .count();
             sc.score = (sc.score - MISFIT_PENALTY * misfits as f32).max(0.0);
         }
-        scores.sort_by(|a, b| b.score.partial_cmp(&a.score).unwrap_or(std::cmp::Ordering::Equal).then(a.intent.cmp(&b.intent)));
+        scores.sort_by(|a, b| {
+            b.score
+                .partial_cmp(&a.score)
+                .unwrap_or(std::cmp::Ordering::Equal)
+                .then(a.intent.cmp(&b.intent))
+        });
         Analysis {
             tokens: toks.iter().map(|s| s.to_string()).collect(),
             normalized: normalized.clone(),

@@ -22,7 +22,10 @@ pub enum Need {
     /// A required slot has no value.
     Missing { slot: String },
     /// A slot fits several entities.
-    Choose { slot: String, options: Vec<EntityRef> },
+    Choose {
+        slot: String,
+        options: Vec<EntityRef>,
+    },
     /// The reader named an event the data does not have.
     NoMatch { slot: String, what: String },
 }
@@ -84,7 +87,10 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
         let value = match def.kind {
             EntityKind::Competitor => {
                 let pick = a.mentions.iter().enumerate().find(|(i, m)| {
-                    !used.contains(i) && m.candidates.iter().any(|(t, _)| matches!(t, Target::Entity(EntityRef::Competitor(_), _)))
+                    !used.contains(i)
+                        && m.candidates
+                            .iter()
+                            .any(|(t, _)| matches!(t, Target::Entity(EntityRef::Competitor(_), _)))
                 });
                 match pick {
                     None => None,
@@ -94,10 +100,16 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                         // "Zoe Marant": a first name and a (misspelt) family
                         // name side by side name one person together.
                         if let Some(next) = a.mentions.get(i + 1).filter(|n| n.start == m.end) {
-                            let other = entity_candidates(next, |e| matches!(e, EntityRef::Competitor(_)));
+                            let other =
+                                entity_candidates(next, |e| matches!(e, EntityRef::Competitor(_)));
                             let both: Vec<(EntityRef, f32)> = c
                                 .iter()
-                                .filter_map(|(e, s)| other.iter().find(|(o, _)| o == e).map(|(_, t)| (*e, (s + t) / 2.0 + 0.05)))
+                                .filter_map(|(e, s)| {
+                                    other
+                                        .iter()
+                                        .find(|(o, _)| o == e)
+                                        .map(|(_, t)| (*e, (s + t) / 2.0 + 0.05))
+                                })
                                 .collect();
                             if !both.is_empty() {
                                 used.push(i + 1);
@@ -127,9 +139,17 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                     EntityKind::Sport => matches!(e, EntityRef::Sport(_)),
                     _ => matches!(e, EntityRef::Discipline(..)),
                 };
-                let pick = a.mentions.iter().enumerate().find(|(i, m)| !used.contains(i) && !entity_candidates(m, want).is_empty());
+                let pick = a
+                    .mentions
+                    .iter()
+                    .enumerate()
+                    .find(|(i, m)| !used.contains(i) && !entity_candidates(m, want).is_empty());
                 match pick {
-                    None if def.kind == EntityKind::Sport => sport_noun(a).map(|s| SlotValue::Entity { entity: EntityRef::Sport(s) }),
+                    None if def.kind == EntityKind::Sport => {
+                        sport_noun(a).map(|s| SlotValue::Entity {
+                            entity: EntityRef::Sport(s),
+                        })
+                    }
                     None => None,
                     Some((i, m)) => {
                         used.push(i);
@@ -149,22 +169,36 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                     }
                 }
             }
-            EntityKind::Category => categories.first().map(|c| SlotValue::Category { value: c.clone() }),
-            EntityKind::Award => a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
-                Target::Award(x) => Some(SlotValue::Award { value: x.clone() }),
-                _ => None,
-            }),
+            EntityKind::Category => categories
+                .first()
+                .map(|c| SlotValue::Category { value: c.clone() }),
+            EntityKind::Award => a
+                .mentions
+                .iter()
+                .flat_map(|m| m.candidates.first())
+                .find_map(|(t, _)| match t {
+                    Target::Award(x) => Some(SlotValue::Award { value: x.clone() }),
+                    _ => None,
+                }),
             EntityKind::Date => a.days.first().map(|d| SlotValue::Date { value: d.date }),
             EntityKind::Count => a.count.map(|c| SlotValue::Count { value: c.2 }),
             EntityKind::Contest => match resolve_contest(data, a, &slots) {
                 Ok(None) => None,
-                Ok(Some(ci)) => Some(SlotValue::Entity { entity: EntityRef::Contest(ci) }),
+                Ok(Some(ci)) => Some(SlotValue::Entity {
+                    entity: EntityRef::Contest(ci),
+                }),
                 Err(Some(options)) => {
-                    need.get_or_insert(Need::Choose { slot: def.name.clone(), options });
+                    need.get_or_insert(Need::Choose {
+                        slot: def.name.clone(),
+                        options,
+                    });
                     None
                 }
                 Err(None) => {
-                    need.get_or_insert(Need::NoMatch { slot: def.name.clone(), what: event_words(a) });
+                    need.get_or_insert(Need::NoMatch {
+                        slot: def.name.clone(),
+                        what: event_words(a),
+                    });
                     None
                 }
             },
@@ -174,42 +208,73 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                 slots.insert(def.name.clone(), v);
             }
             None if def.required => {
-                need.get_or_insert(Need::Missing { slot: def.name.clone() });
+                need.get_or_insert(Need::Missing {
+                    slot: def.name.clone(),
+                });
             }
             None => {}
         }
     }
     // A competitor's contest can only be checked once both are known: if
     // the contest was found first, the person was narrowed by it above.
-    Filled { slots, need, certainty }
+    Filled {
+        slots,
+        need,
+        certainty,
+    }
 }
 
 /// Narrows people by the rest of the message: a contest they are in, a
 /// category, a sport noun ("the rower"), or a group ("from Sordavia").
-fn narrow_people(data: &Dataset, c: &mut Vec<(EntityRef, f32)>, slots: &Slots, a: &Analysis, categories: &[String]) {
+fn narrow_people(
+    data: &Dataset,
+    c: &mut Vec<(EntityRef, f32)>,
+    slots: &Slots,
+    a: &Analysis,
+    categories: &[String],
+) {
     let keep_if = |c: &mut Vec<(EntityRef, f32)>, f: &dyn Fn(usize) -> bool| {
-        let narrowed: Vec<(EntityRef, f32)> =
-            c.iter().copied().filter(|(e, _)| matches!(e, EntityRef::Competitor(i) if f(*i))).collect();
+        let narrowed: Vec<(EntityRef, f32)> = c
+            .iter()
+            .copied()
+            .filter(|(e, _)| matches!(e, EntityRef::Competitor(i) if f(*i)))
+            .collect();
         if !narrowed.is_empty() {
             *c = narrowed;
         }
     };
-    if let Some(SlotValue::Entity { entity: EntityRef::Contest(ci) }) = slots.get("contest") {
+    if let Some(SlotValue::Entity {
+        entity: EntityRef::Contest(ci),
+    }) = slots.get("contest")
+    {
         let ci = *ci;
         keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| *x == ci));
     } else {
         // Any contest the message may mean narrows the people in it.
         let fits = match resolve_contest(data, a, slots) {
             Ok(Some(ci)) => vec![ci],
-            Err(Some(options)) => options.iter().filter_map(|e| if let EntityRef::Contest(ci) = e { Some(*ci) } else { None }).collect(),
+            Err(Some(options)) => options
+                .iter()
+                .filter_map(|e| {
+                    if let EntityRef::Contest(ci) = e {
+                        Some(*ci)
+                    } else {
+                        None
+                    }
+                })
+                .collect(),
             _ => vec![],
         };
         if !fits.is_empty() {
-            keep_if(c, &|p| data.contests_of(p).iter().any(|(x, _)| fits.contains(x)));
+            keep_if(c, &|p| {
+                data.contests_of(p).iter().any(|(x, _)| fits.contains(x))
+            });
         }
     }
     if let Some(cat) = categories.first() {
-        keep_if(c, &|p| data.competitors[p].category.as_deref() == Some(cat.as_str()));
+        keep_if(c, &|p| {
+            data.competitors[p].category.as_deref() == Some(cat.as_str())
+        });
     }
     if let Some(s) = sport_noun(a).or_else(|| mentioned_sport(a)) {
         keep_if(c, &|p| data.sport(&data.competitors[p].sport) == Some(s));
@@ -224,24 +289,35 @@ fn narrow_people(data: &Dataset, c: &mut Vec<(EntityRef, f32)>, slots: &Slots, a
 
 /// A sport named by its competitors' noun ("the rower").
 pub fn sport_noun(a: &Analysis) -> Option<usize> {
-    a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
-        Target::SportNoun(s) => Some(*s),
-        _ => None,
-    })
+    a.mentions
+        .iter()
+        .flat_map(|m| m.candidates.first())
+        .find_map(|(t, _)| match t {
+            Target::SportNoun(s) => Some(*s),
+            _ => None,
+        })
 }
 
 fn mentioned_sport(a: &Analysis) -> Option<usize> {
-    a.mentions.iter().flat_map(|m| m.candidates.first()).find_map(|(t, _)| match t {
-        Target::Entity(EntityRef::Sport(s), _) => Some(*s),
-        _ => None,
-    })
+    a.mentions
+        .iter()
+        .flat_map(|m| m.candidates.first())
+        .find_map(|(t, _)| match t {
+            Target::Entity(EntityRef::Sport(s), _) => Some(*s),
+            _ => None,
+        })
 }
 
 fn event_words(a: &Analysis) -> String {
     let mut words = Vec::new();
     for m in &a.mentions {
         if let Some((t, _)) = m.candidates.first() {
-            if matches!(t, Target::Category(_) | Target::Phase(_) | Target::Entity(EntityRef::Discipline(..) | EntityRef::Sport(_), _)) {
+            if matches!(
+                t,
+                Target::Category(_)
+                    | Target::Phase(_)
+                    | Target::Entity(EntityRef::Discipline(..) | EntityRef::Sport(_), _)
+            ) {
                 words.extend(a.tokens[m.start..m.end].iter().cloned());
             }
         }
@@ -251,21 +327,32 @@ fn event_words(a: &Analysis) -> String {
 
 /// Finds the contest a message names. `Ok(None)`: no event named;
 /// `Err(Some(options))`: several fit; `Err(None)`: none fits.
-pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Option<usize>, Option<Vec<EntityRef>>> {
+pub fn resolve_contest(
+    data: &Dataset,
+    a: &Analysis,
+    slots: &Slots,
+) -> Result<Option<usize>, Option<Vec<EntityRef>>> {
     let mut disciplines: Vec<(usize, usize)> = Vec::new();
     let mut sport = None;
     let mut category = None;
     let mut phase: Option<String> = None;
     for m in &a.mentions {
-        let Some((top, _)) = m.candidates.first() else { continue };
+        let Some((top, _)) = m.candidates.first() else {
+            continue;
+        };
         match top {
             Target::Entity(EntityRef::Contest(ci), _) => return Ok(Some(*ci)),
             Target::Entity(EntityRef::Discipline(..), _) => {
                 let best = m.best();
-                disciplines.extend(m.candidates.iter().filter(|(_, s)| *s >= best - CLOSE).filter_map(|(t, _)| match t {
-                    Target::Entity(EntityRef::Discipline(s, d), _) => Some((*s, *d)),
-                    _ => None,
-                }));
+                disciplines.extend(
+                    m.candidates
+                        .iter()
+                        .filter(|(_, s)| *s >= best - CLOSE)
+                        .filter_map(|(t, _)| match t {
+                            Target::Entity(EntityRef::Discipline(s, d), _) => Some((*s, *d)),
+                            _ => None,
+                        }),
+                );
             }
             Target::Entity(EntityRef::Sport(s), _) => sport = Some(*s),
             Target::Category(c) => category = Some(c.clone()),
@@ -277,7 +364,9 @@ pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Op
         return Ok(None);
     }
     let person = match slots.get("competitor") {
-        Some(SlotValue::Entity { entity: EntityRef::Competitor(p) }) => Some(*p),
+        Some(SlotValue::Entity {
+            entity: EntityRef::Competitor(p),
+        }) => Some(*p),
         _ => None,
     };
     let mut fits: Vec<usize> = (0..data.contests.len())
@@ -286,12 +375,20 @@ pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Op
             let (s, d) = data.discipline_ref(ci);
             (disciplines.is_empty() || disciplines.contains(&(s, d)))
                 && sport.is_none_or(|x| x == s)
-                && category.as_ref().is_none_or(|cat| c.category.as_ref() == Some(cat))
-                && phase.as_ref().is_none_or(|p| c.phase == *p || c.phase.starts_with(&format!("{p} ")))
+                && category
+                    .as_ref()
+                    .is_none_or(|cat| c.category.as_ref() == Some(cat))
+                && phase
+                    .as_ref()
+                    .is_none_or(|p| c.phase == *p || c.phase.starts_with(&format!("{p} ")))
         })
         .collect();
     if let Some(p) = person {
-        let theirs: Vec<usize> = fits.iter().copied().filter(|&ci| data.contests_of(p).iter().any(|(x, _)| *x == ci)).collect();
+        let theirs: Vec<usize> = fits
+            .iter()
+            .copied()
+            .filter(|&ci| data.contests_of(p).iter().any(|(x, _)| *x == ci))
+            .collect();
         if !theirs.is_empty() {
             fits = theirs;
         }
@@ -299,7 +396,11 @@ pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Op
     if phase.is_none() && fits.len() > 1 {
         // Unqualified, an event means its final (common practice: "the men's
         // 100 m" is the race that gives the medals).
-        let finals: Vec<usize> = fits.iter().copied().filter(|&ci| data.contests[ci].phase == "final").collect();
+        let finals: Vec<usize> = fits
+            .iter()
+            .copied()
+            .filter(|&ci| data.contests[ci].phase == "final")
+            .collect();
         if !finals.is_empty() {
             fits = finals;
         }
@@ -310,8 +411,18 @@ pub fn resolve_contest(data: &Dataset, a: &Analysis, slots: &Slots) -> Result<Op
         many => {
             let mut v: Vec<usize> = many.to_vec();
             // Sooner and more current contests first.
-            v.sort_by_key(|&ci| (data.contests[ci].status == Status::Final, data.facts[ci].start.timestamp()));
-            Err(Some(v.into_iter().take(MAX_OPTIONS).map(EntityRef::Contest).collect()))
+            v.sort_by_key(|&ci| {
+                (
+                    data.contests[ci].status == Status::Final,
+                    data.facts[ci].start.timestamp(),
+                )
+            });
+            Err(Some(
+                v.into_iter()
+                    .take(MAX_OPTIONS)
+                    .map(EntityRef::Contest)
+                    .collect(),
+            ))
         }
     }
 }

@@ -22,17 +22,37 @@ const WEEKDAYS: [(&str, Weekday); 7] = [
 ];
 
 const MONTHS: [&str; 12] = [
-    "january", "february", "march", "april", "may", "june", "july", "august", "september", "october", "november", "december",
+    "january",
+    "february",
+    "march",
+    "april",
+    "may",
+    "june",
+    "july",
+    "august",
+    "september",
+    "october",
+    "november",
+    "december",
 ];
 
 fn day_of_month(tok: &str) -> Option<i8> {
-    let digits = tok.trim_end_matches("st").trim_end_matches("nd").trim_end_matches("rd").trim_end_matches("th");
+    let digits = tok
+        .trim_end_matches("st")
+        .trim_end_matches("nd")
+        .trim_end_matches("rd")
+        .trim_end_matches("th");
     let n: i8 = digits.parse().ok()?;
     (1..=31).contains(&n).then_some(n)
 }
 
 fn month(tok: &str) -> Option<i8> {
-    MONTHS.iter().position(|m| *m == tok || (tok.len() >= 3 && m.starts_with(tok) && tok != "mar" && tok != "may")).map(|i| i as i8 + 1)
+    MONTHS
+        .iter()
+        .position(|m| {
+            *m == tok || (tok.len() >= 3 && m.starts_with(tok) && tok != "mar" && tok != "may")
+        })
+        .map(|i| i as i8 + 1)
 }
 
 /// Finds days in normalised tokens, relative to `today`. A bare weekday
@@ -48,17 +68,31 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
             "yesterday" => today.yesterday().ok().map(|d| (i + 1, d)),
             _ => {
                 if let Some((_, wd)) = WEEKDAYS.iter().find(|(n, _)| *n == t) {
-                    let ahead = (wd.to_monday_zero_offset() - today.weekday().to_monday_zero_offset()).rem_euclid(7);
-                    today.checked_add(jiff::Span::new().days(ahead as i64)).ok().map(|d| (i + 1, d))
+                    let ahead = (wd.to_monday_zero_offset()
+                        - today.weekday().to_monday_zero_offset())
+                    .rem_euclid(7);
+                    today
+                        .checked_add(jiff::Span::new().days(ahead as i64))
+                        .ok()
+                        .map(|d| (i + 1, d))
                 } else if let Ok(d) = t.parse::<Date>() {
                     Some((i + 1, d))
-                } else if let (Some(d), Some(m)) = (day_of_month(t), tokens.get(i + 1).and_then(|n| month(n))) {
+                } else if let (Some(d), Some(m)) =
+                    (day_of_month(t), tokens.get(i + 1).and_then(|n| month(n)))
+                {
                     Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
-                } else if let (Some(m), Some(d)) = (month(t), tokens.get(i + 1).and_then(|n| day_of_month(n))) {
+                } else if let (Some(m), Some(d)) =
+                    (month(t), tokens.get(i + 1).and_then(|n| day_of_month(n)))
+                {
                     Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
-                } else if let (true, Some(d)) = (i > 0 && tokens[i - 1] == "the" && t.ends_with(['h', 't', 'd']), day_of_month(t)) {
+                } else if let (true, Some(d)) = (
+                    i > 0 && tokens[i - 1] == "the" && t.ends_with(['h', 't', 'd']),
+                    day_of_month(t),
+                ) {
                     // "on the 18th": this month.
-                    Date::new(today.year(), today.month(), d).ok().map(|date| (i + 1, date))
+                    Date::new(today.year(), today.month(), d)
+                        .ok()
+                        .map(|date| (i + 1, date))
                 } else {
                     None
                 }
@@ -66,7 +100,11 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
         };
         match found {
             Some((end, date)) => {
-                out.push(DayMention { start: i, end, date });
+                out.push(DayMention {
+                    start: i,
+                    end,
+                    date,
+                });
                 i = end;
             }
             None => i += 1,
@@ -76,8 +114,27 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
 }
 
 const SMALL: [&str; 21] = [
-    "zero", "one", "two", "three", "four", "five", "six", "seven", "eight", "nine", "ten", "eleven", "twelve", "thirteen",
-    "fourteen", "fifteen", "sixteen", "seventeen", "eighteen", "nineteen", "twenty",
+    "zero",
+    "one",
+    "two",
+    "three",
+    "four",
+    "five",
+    "six",
+    "seven",
+    "eight",
+    "nine",
+    "ten",
+    "eleven",
+    "twelve",
+    "thirteen",
+    "fourteen",
+    "fifteen",
+    "sixteen",
+    "seventeen",
+    "eighteen",
+    "nineteen",
+    "twenty",
 ];
 
 /// A count such as "top five" or "top 3": (start, end, value).
@@ -85,7 +142,10 @@ pub fn find_count(tokens: &[&str]) -> Option<(usize, usize, u32)> {
     for i in 0..tokens.len().saturating_sub(1) {
         if matches!(tokens[i], "top" | "first" | "leading") {
             let next = tokens[i + 1];
-            let n = next.parse::<u32>().ok().or_else(|| SMALL.iter().position(|w| *w == next).map(|p| p as u32));
+            let n = next
+                .parse::<u32>()
+                .ok()
+                .or_else(|| SMALL.iter().position(|w| *w == next).map(|p| p as u32));
             // A table is never longer than 20 rows; "top 400" is an event.
             if let Some(n) = n.filter(|&n| (1..=20).contains(&n)) {
                 return Some((i, i + 2, n));
@@ -104,7 +164,11 @@ mod tests {
     fn relative_days() {
         // 2027-08-14 is a Saturday.
         let today = date(2027, 8, 14);
-        let f = |s: &str| find_days(&s.split(' ').collect::<Vec<_>>(), today).first().map(|m| m.date);
+        let f = |s: &str| {
+            find_days(&s.split(' ').collect::<Vec<_>>(), today)
+                .first()
+                .map(|m| m.date)
+        };
         assert_eq!(f("whats on today"), Some(today));
         assert_eq!(f("whats on tomorrow"), Some(date(2027, 8, 15)));
         assert_eq!(f("on saturday"), Some(today));

@@ -42,7 +42,11 @@ impl Server {
             .await
             .unwrap();
         });
-        Server { addr, client: reqwest::Client::new(), _shutdown: tx }
+        Server {
+            addr,
+            client: reqwest::Client::new(),
+            _shutdown: tx,
+        }
     }
 
     pub fn url(&self, path: &str) -> String {

@@ -9,11 +9,22 @@ pub static SPEC: OpSpec = OpSpec {
     name: "best_mark",
     summary: "the best mark so far in a discipline",
     params: &[
-        Param { name: "discipline", kind: EntityKind::Discipline, required: true },
-        Param { name: "category", kind: EntityKind::Category, required: false },
+        Param {
+            name: "discipline",
+            kind: EntityKind::Discipline,
+            required: true,
+        },
+        Param {
+            name: "category",
+            kind: EntityKind::Category,
+            required: false,
+        },
     ],
     outcomes: &[
-        answered("answered", &["discipline_name", "mark", "holder", "contest_name"]),
+        answered(
+            "answered",
+            &["discipline_name", "mark", "holder", "contest_name"],
+        ),
         no_data("none_yet", &["discipline_name"]),
     ],
     run,
@@ -27,7 +38,15 @@ fn run(input: &OpInput) -> OpOutput {
     let category = input.text("category");
     let mut name = data.sports[s].disciplines[d].name.clone();
     if let Some(cat) = category {
-        name = format!("{}{} {name}", cat, if cat == "women" || cat == "men" { "'s" } else { "" });
+        name = format!(
+            "{}{} {name}",
+            cat,
+            if cat == "women" || cat == "men" {
+                "'s"
+            } else {
+                ""
+            }
+        );
     }
     let f = Facts::new().set("discipline_name", name);
     let mut best: Option<(usize, usize)> = None;
@@ -45,7 +64,9 @@ fn run(input: &OpInput) -> OpOutput {
             if e.status != EntryStatus::Ok {
                 continue;
             }
-            let Some(m) = &data.facts[ci].marks[ei] else { continue };
+            let Some(m) = &data.facts[ci].marks[ei] else {
+                continue;
+            };
             let ord = match best {
                 None => std::cmp::Ordering::Less,
                 Some((bc, be)) => {
@@ -66,14 +87,22 @@ fn run(input: &OpInput) -> OpOutput {
     let Some((ci, ei)) = best else {
         return OpOutput::done("none_yet", f, vec![EntityRef::Discipline(s, d)]);
     };
-    let holders: Vec<Value> = tied.iter().map(|&(c, e)| Value::Text(entry_label(data, &data.contests[c].entries[e]))).collect();
+    let holders: Vec<Value> = tied
+        .iter()
+        .map(|&(c, e)| Value::Text(entry_label(data, &data.contests[c].entries[e])))
+        .collect();
     let mut contests: Vec<String> = tied.iter().map(|&(c, _)| data.contest_name(c)).collect();
     contests.dedup();
-    let mut f = f.set("holder", Value::List(holders)).set("contest_name", Value::from(contests));
+    let mut f = f
+        .set("holder", Value::List(holders))
+        .set("contest_name", Value::from(contests));
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);
     }
     let mut mentioned = vec![EntityRef::Discipline(s, d), EntityRef::Contest(ci)];
-    mentioned.extend(tied.iter().filter_map(|&(c, e)| super::support::entry_entity(data, &data.contests[c].entries[e])));
+    mentioned
+        .extend(tied.iter().filter_map(|&(c, e)| {
+            super::support::entry_entity(data, &data.contests[c].entries[e])
+        }));
     OpOutput::done("answered", f, mentioned)
 }

@@ -28,7 +28,9 @@ pub static HELP: OpSpec = OpSpec {
 };
 
 fn base(input: &OpInput) -> Facts {
-    Facts::new().set("title", input.data.scenario.title.as_str()).set("topics", Value::from(input.topics.to_vec()))
+    Facts::new()
+        .set("title", input.data.scenario.title.as_str())
+        .set("topics", Value::from(input.topics.to_vec()))
 }
 
 fn run_greeting(input: &OpInput) -> OpOutput {
@@ -36,7 +38,11 @@ fn run_greeting(input: &OpInput) -> OpOutput {
 }
 
 fn run_thanks(input: &OpInput) -> OpOutput {
-    OpOutput::done("answered", Facts::new().set("title", input.data.scenario.title.as_str()), vec![])
+    OpOutput::done(
+        "answered",
+        Facts::new().set("title", input.data.scenario.title.as_str()),
+        vec![],
+    )
 }
 
 fn run_help(input: &OpInput) -> OpOutput {

@@ -7,7 +7,11 @@ use crate::dataset::Status;
 pub static SPEC: OpSpec = OpSpec {
     name: "contest_time",
     summary: "when and where a contest takes place",
-    params: &[Param { name: "contest", kind: EntityKind::Contest, required: true }],
+    params: &[Param {
+        name: "contest",
+        kind: EntityKind::Contest,
+        required: true,
+    }],
     outcomes: &[
         answered("upcoming", &["contest_name", "start", "venue"]),
         answered("live", &["contest_name", "start", "venue"]),
@@ -19,7 +23,10 @@ pub static SPEC: OpSpec = OpSpec {
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
     let Some(ci) = input.contest("contest") else {
-        return OpOutput::Choose { slot: "contest", options: vec![] };
+        return OpOutput::Choose {
+            slot: "contest",
+            options: vec![],
+        };
     };
     let mut f = Facts::new();
     contest_facts(data, ci, input.now, &mut f);

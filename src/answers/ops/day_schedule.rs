@@ -8,10 +8,21 @@ pub static SPEC: OpSpec = OpSpec {
     name: "day_schedule",
     summary: "what is on for a day",
     params: &[
-        Param { name: "date", kind: EntityKind::Date, required: false },
-        Param { name: "sport", kind: EntityKind::Sport, required: false },
+        Param {
+            name: "date",
+            kind: EntityKind::Date,
+            required: false,
+        },
+        Param {
+            name: "sport",
+            kind: EntityKind::Sport,
+            required: false,
+        },
     ],
-    outcomes: &[answered("answered", &["day", "items", "count", "sport_name"]), no_data("nothing_on", &["day", "sport_name"])],
+    outcomes: &[
+        answered("answered", &["day", "items", "count", "sport_name"]),
+        no_data("nothing_on", &["day", "sport_name"]),
+    ],
     run,
 };
 
@@ -46,10 +57,17 @@ fn run(input: &OpInput) -> OpOutput {
             let spoken = when_value(start, now).render(crate::answers::value::Style::Spoken);
             // Spoken: "the women's long jump final at nineteen forty".
             let clock = spoken.rsplit(" at ").next().unwrap_or("").to_string();
-            Value::Dual { text: format!("{:02}:{:02} {name}", start.hour(), start.minute()), spoken: format!("the {name} at {clock}") }
+            Value::Dual {
+                text: format!("{:02}:{:02} {name}", start.hour(), start.minute()),
+                spoken: format!("the {name} at {clock}"),
+            }
         })
         .collect();
     f.put("count", Value::Int(items.len() as i64));
     f.put("items", Value::List(items));
-    OpOutput::done("answered", f, on.into_iter().map(EntityRef::Contest).collect())
+    OpOutput::done(
+        "answered",
+        f,
+        on.into_iter().map(EntityRef::Contest).collect(),
+    )
 }

@@ -7,9 +7,25 @@ use super::*;
 pub static SPEC: OpSpec = OpSpec {
     name: "group_medals",
     summary: "a delegation's medal count and rank",
-    params: &[Param { name: "group", kind: EntityKind::Group, required: true }],
+    params: &[Param {
+        name: "group",
+        kind: EntityKind::Group,
+        required: true,
+    }],
     outcomes: &[
-        answered("answered", &["name", "gold", "silver", "bronze", "total", "breakdown", "rank", "shared_with"]),
+        answered(
+            "answered",
+            &[
+                "name",
+                "gold",
+                "silver",
+                "bronze",
+                "total",
+                "breakdown",
+                "rank",
+                "shared_with",
+            ],
+        ),
         answered("none", &["name"]),
     ],
     run,

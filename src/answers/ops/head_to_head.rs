@@ -10,13 +10,45 @@ pub static SPEC: OpSpec = OpSpec {
     name: "head_to_head",
     summary: "which of two competitors finished ahead",
     params: &[
-        Param { name: "competitor", kind: EntityKind::Competitor, required: true },
-        Param { name: "rival", kind: EntityKind::Competitor, required: true },
-        Param { name: "contest", kind: EntityKind::Contest, required: false },
+        Param {
+            name: "competitor",
+            kind: EntityKind::Competitor,
+            required: true,
+        },
+        Param {
+            name: "rival",
+            kind: EntityKind::Competitor,
+            required: true,
+        },
+        Param {
+            name: "contest",
+            kind: EntityKind::Contest,
+            required: false,
+        },
     ],
     outcomes: &[
-        answered("answered", &["ahead", "behind", "ahead_place", "behind_place", "ahead_mark", "behind_mark", "contest_name"]),
-        answered("one_out", &["finisher", "finisher_place", "other", "other_status", "contest_name"]),
+        answered(
+            "answered",
+            &[
+                "ahead",
+                "behind",
+                "ahead_place",
+                "behind_place",
+                "ahead_mark",
+                "behind_mark",
+                "contest_name",
+            ],
+        ),
+        answered(
+            "one_out",
+            &[
+                "finisher",
+                "finisher_place",
+                "other",
+                "other_status",
+                "contest_name",
+            ],
+        ),
         answered("level", &["names", "place", "contest_name"]),
         no_data("undecided", &["contest_name"]),
         no_data("never_met", &["names"]),
@@ -25,7 +57,10 @@ pub static SPEC: OpSpec = OpSpec {
 };
 
 fn place_value(p: u32) -> Value {
-    Value::Dual { text: words::ordinal_figure(p as u64), spoken: words::ordinal(p as u64) }
+    Value::Dual {
+        text: words::ordinal_figure(p as u64),
+        spoken: words::ordinal(p as u64),
+    }
 }
 
 fn run(input: &OpInput) -> OpOutput {
@@ -48,7 +83,13 @@ fn run(input: &OpInput) -> OpOutput {
         [] => return OpOutput::done("never_met", Facts::new().set("names", names), mentioned),
         [one] => *one,
         many => {
-            return OpOutput::Choose { slot: "contest", options: many.iter().map(|(c, _, _)| EntityRef::Contest(*c)).collect() }
+            return OpOutput::Choose {
+                slot: "contest",
+                options: many
+                    .iter()
+                    .map(|(c, _, _)| EntityRef::Contest(*c))
+                    .collect(),
+            }
         }
     };
     let c = &data.contests[ci];
@@ -68,7 +109,11 @@ fn run(input: &OpInput) -> OpOutput {
             OpOutput::done("level", f, mentioned)
         }
         (Some(pa), Some(pb)) => {
-            let ((w, wp, we), (l, lp, le)) = if pa < pb { ((a, pa, ea), (b, pb, eb)) } else { ((b, pb, eb), (a, pa, ea)) };
+            let ((w, wp, we), (l, lp, le)) = if pa < pb {
+                ((a, pa, ea), (b, pb, eb))
+            } else {
+                ((b, pb, eb), (a, pa, ea))
+            };
             f.put("ahead", data.competitors[w].name());
             f.put("behind", data.competitors[l].name());
             f.put("ahead_place", place_value(wp));
@@ -82,7 +127,11 @@ fn run(input: &OpInput) -> OpOutput {
             OpOutput::done("answered", f, mentioned)
         }
         (Some(p), None) | (None, Some(p)) => {
-            let (fin, other, oe) = if xa.place.is_some() { (a, b, xb) } else { (b, a, xa) };
+            let (fin, other, oe) = if xa.place.is_some() {
+                (a, b, xb)
+            } else {
+                (b, a, xa)
+            };
             if oe.status == EntryStatus::Ok {
                 return OpOutput::done("undecided", f, mentioned);
             }

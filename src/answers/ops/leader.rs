@@ -7,11 +7,28 @@ use crate::dataset::Status;
 pub static SPEC: OpSpec = OpSpec {
     name: "leader",
     summary: "the current leader of a live contest and the margin",
-    params: &[Param { name: "contest", kind: EntityKind::Contest, required: true }],
+    params: &[Param {
+        name: "contest",
+        kind: EntityKind::Contest,
+        required: true,
+    }],
     outcomes: &[
-        answered("live", &["contest_name", "leader", "mark", "second", "margin", "updated"]),
+        answered(
+            "live",
+            &[
+                "contest_name",
+                "leader",
+                "mark",
+                "second",
+                "margin",
+                "updated",
+            ],
+        ),
         answered("tied", &["contest_name", "leader", "mark"]),
-        answered("final", &["contest_name", "winner", "mark", "second", "margin"]),
+        answered(
+            "final",
+            &["contest_name", "winner", "mark", "second", "margin"],
+        ),
         no_data("scheduled", &["contest_name", "start"]),
         no_data("no_result", &["contest_name"]),
     ],
@@ -35,20 +52,36 @@ fn run(input: &OpInput) -> OpOutput {
         return OpOutput::done("no_result", f, vec![me]);
     };
     let top_place = c.entries[first].place;
-    let leaders: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == top_place).collect();
+    let leaders: Vec<usize> = order
+        .iter()
+        .copied()
+        .filter(|&i| c.entries[i].place == top_place)
+        .collect();
     if let Some(m) = mark_value(data, ci, first) {
         f.put("mark", m);
     }
     let mut mentioned = vec![me];
-    mentioned.extend(leaders.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i])));
+    mentioned.extend(
+        leaders
+            .iter()
+            .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
+    );
     if leaders.len() > 1 {
         f.put("leader", labels(data, c, &leaders));
         return OpOutput::done("tied", f, mentioned);
     }
-    let key = if c.status == Status::Final { "winner" } else { "leader" };
+    let key = if c.status == Status::Final {
+        "winner"
+    } else {
+        "leader"
+    };
     f.put(key, labels(data, c, &leaders));
     if let Some(&second) = order.get(1) {
-        let seconds: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == c.entries[second].place).collect();
+        let seconds: Vec<usize> = order
+            .iter()
+            .copied()
+            .filter(|&i| c.entries[i].place == c.entries[second].place)
+            .collect();
         f.put("second", labels(data, c, &seconds));
         if let Some(m) = margin_value(data, ci, first, second) {
             f.put("margin", m);

@@ -9,9 +9,23 @@ use crate::answers::words;
 pub static SPEC: OpSpec = OpSpec {
     name: "medal_table",
     summary: "the medal table leader and the top of the table",
-    params: &[Param { name: "count", kind: EntityKind::Count, required: false }],
+    params: &[Param {
+        name: "count",
+        kind: EntityKind::Count,
+        required: false,
+    }],
     outcomes: &[
-        answered("answered", &["leader", "leader_breakdown", "leader_total", "leaders_count", "top", "shown"]),
+        answered(
+            "answered",
+            &[
+                "leader",
+                "leader_breakdown",
+                "leader_total",
+                "leaders_count",
+                "top",
+                "shown",
+            ],
+        ),
         no_data("empty", &[]),
     ],
     run,
@@ -34,7 +48,10 @@ fn breakdown(data: &Dataset, row: &MedalRow) -> Value {
         .zip(&row.counts)
         .map(|(a, &n)| format!("{} {a}", words::cardinal(n as u64)))
         .collect();
-    Value::Dual { text: words::join_list(&text, "and"), spoken: words::join_list(&spoken, "and") }
+    Value::Dual {
+        text: words::join_list(&text, "and"),
+        spoken: words::join_list(&spoken, "and"),
+    }
 }
 
 fn run(input: &OpInput) -> OpOutput {
@@ -43,9 +60,18 @@ fn run(input: &OpInput) -> OpOutput {
     // `order: total` ranks by the number of medals of any colour, for "who
     // has the most medals?"; ties then fall back to the usual order.
     if input.settings.get("order").map(String::as_str) == Some("total") {
-        table.sort_by(|a, b| b.total().cmp(&a.total()).then(b.counts.cmp(&a.counts)).then_with(|| data.groups[a.group].name.cmp(&data.groups[b.group].name)));
+        table.sort_by(|a, b| {
+            b.total()
+                .cmp(&a.total())
+                .then(b.counts.cmp(&a.counts))
+                .then_with(|| data.groups[a.group].name.cmp(&data.groups[b.group].name))
+        });
         for i in 0..table.len() {
-            table[i].rank = if i > 0 && table[i].total() == table[i - 1].total() { table[i - 1].rank } else { i as u32 + 1 };
+            table[i].rank = if i > 0 && table[i].total() == table[i - 1].total() {
+                table[i - 1].rank
+            } else {
+                i as u32 + 1
+            };
         }
     }
     if table.is_empty() {
@@ -53,17 +79,32 @@ fn run(input: &OpInput) -> OpOutput {
     }
     let n = match input.slots.get("count") {
         Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
-        _ => input.settings.get("rows").and_then(|s| s.parse().ok()).unwrap_or(DEFAULT_ROWS),
+        _ => input
+            .settings
+            .get("rows")
+            .and_then(|s| s.parse().ok())
+            .unwrap_or(DEFAULT_ROWS),
     };
     let leaders: Vec<&MedalRow> = table.iter().filter(|r| r.rank == 1).collect();
     let mut f = Facts::new();
-    f.put("leader", Value::List(leaders.iter().map(|r| Value::Text(data.groups[r.group].name.clone())).collect()));
+    f.put(
+        "leader",
+        Value::List(
+            leaders
+                .iter()
+                .map(|r| Value::Text(data.groups[r.group].name.clone()))
+                .collect(),
+        ),
+    );
     f.put("leaders_count", Value::Int(leaders.len() as i64));
     f.put("leader_breakdown", breakdown(data, leaders[0]));
     f.put("leader_total", Value::Int(leaders[0].total() as i64));
     // Include every row tied with the last one shown, so a cut never splits
     // a shared rank.
-    let cutoff_rank = table.get(n.min(table.len()) - 1).map(|r| r.rank).unwrap_or(1);
+    let cutoff_rank = table
+        .get(n.min(table.len()) - 1)
+        .map(|r| r.rank)
+        .unwrap_or(1);
     let shown: Vec<&MedalRow> = table.iter().filter(|r| r.rank <= cutoff_rank).collect();
     let lines: Vec<Value> = shown
         .iter()
@@ -72,7 +113,11 @@ fn run(input: &OpInput) -> OpOutput {
             let name = &data.groups[r.group].name;
             Value::Dual {
                 text: format!("{}. {name} ({})", r.rank, b.render(Style::Text)),
-                spoken: format!("{}, {name}, with {}", words::ordinal(r.rank as u64), b.render(Style::Spoken)),
+                spoken: format!(
+                    "{}, {name}, with {}",
+                    words::ordinal(r.rank as u64),
+                    b.render(Style::Spoken)
+                ),
             }
         })
         .collect();

@@ -239,16 +239,27 @@ impl OpInput<'_> {
 pub enum OpOutput {
     /// An outcome and the facts that fill its wording. `mentioned` lists the
     /// entities the answer is about, for follow-up questions.
-    Done { outcome: &'static str, facts: HashMap<String, Value>, mentioned: Vec<EntityRef> },
+    Done {
+        outcome: &'static str,
+        facts: HashMap<String, Value>,
+        mentioned: Vec<EntityRef>,
+    },
     /// The operation cannot answer without one more detail, and the data
     /// narrow it to these options (never guessed).
-    Choose { slot: &'static str, options: Vec<EntityRef> },
+    Choose {
+        slot: &'static str,
+        options: Vec<EntityRef>,
+    },
 }
 
 impl OpOutput {
     /// A finished outcome.
     pub fn done(outcome: &'static str, facts: Facts, mentioned: Vec<EntityRef>) -> OpOutput {
-        OpOutput::Done { outcome, facts: facts.0, mentioned }
+        OpOutput::Done {
+            outcome,
+            facts: facts.0,
+            mentioned,
+        }
     }
 }
 
@@ -299,10 +310,18 @@ pub fn names() -> Vec<&'static str> {
 
 /// Shorthand for outcome declarations.
 pub(crate) const fn answered(name: &'static str, facts: &'static [&'static str]) -> OutcomeSpec {
-    OutcomeSpec { name, class: OutcomeClass::Answered, facts }
+    OutcomeSpec {
+        name,
+        class: OutcomeClass::Answered,
+        facts,
+    }
 }
 
 /// Shorthand for outcome declarations.
 pub(crate) const fn no_data(name: &'static str, facts: &'static [&'static str]) -> OutcomeSpec {
-    OutcomeSpec { name, class: OutcomeClass::NoData, facts }
+    OutcomeSpec {
+        name,
+        class: OutcomeClass::NoData,
+        facts,
+    }
 }

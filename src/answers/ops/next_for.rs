@@ -7,7 +7,11 @@ use crate::dataset::Status;
 pub static SPEC: OpSpec = OpSpec {
     name: "next_for",
     summary: "when a competitor competes next",
-    params: &[Param { name: "competitor", kind: EntityKind::Competitor, required: true }],
+    params: &[Param {
+        name: "competitor",
+        kind: EntityKind::Competitor,
+        required: true,
+    }],
     outcomes: &[
         answered("upcoming", &["name", "contest_name", "start", "venue"]),
         answered("live", &["name", "contest_name", "start", "venue"]),
@@ -19,7 +23,10 @@ pub static SPEC: OpSpec = OpSpec {
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
     let Some(pi) = input.competitor("competitor") else {
-        return OpOutput::Choose { slot: "competitor", options: vec![] };
+        return OpOutput::Choose {
+            slot: "competitor",
+            options: vec![],
+        };
     };
     let mut f = Facts::new().set("name", data.competitors[pi].name());
     // A contest under way counts as "next": the reader wants to watch it.
@@ -32,8 +39,16 @@ fn run(input: &OpInput) -> OpOutput {
     match next {
         Some(ci) => {
             contest_facts(data, ci, input.now, &mut f);
-            let outcome = if data.contests[ci].status == Status::Live { "live" } else { "upcoming" };
-            OpOutput::done(outcome, f, vec![EntityRef::Competitor(pi), EntityRef::Contest(ci)])
+            let outcome = if data.contests[ci].status == Status::Live {
+                "live"
+            } else {
+                "upcoming"
+            };
+            OpOutput::done(
+                outcome,
+                f,
+                vec![EntityRef::Competitor(pi), EntityRef::Contest(ci)],
+            )
         }
         None => OpOutput::done("done", f, vec![EntityRef::Competitor(pi)]),
     }

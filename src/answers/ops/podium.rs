@@ -9,12 +9,30 @@ pub static SPEC: OpSpec = OpSpec {
     name: "podium",
     summary: "the winner and medallists of a contest",
     params: &[
-        Param { name: "contest", kind: EntityKind::Contest, required: true },
-        Param { name: "award", kind: EntityKind::Award, required: false },
+        Param {
+            name: "contest",
+            kind: EntityKind::Contest,
+            required: true,
+        },
+        Param {
+            name: "award",
+            kind: EntityKind::Award,
+            required: false,
+        },
     ],
     outcomes: &[
         // Everyone on the podium; `missing` lists awards not given (a tie).
-        answered("answered", &["winner", "gold", "silver", "bronze", "missing", "missing_count"]),
+        answered(
+            "answered",
+            &[
+                "winner",
+                "gold",
+                "silver",
+                "bronze",
+                "missing",
+                "missing_count",
+            ],
+        ),
         // The holders of the one award asked for.
         answered("award", &["holders", "shared"]),
         // The asked-for award was not given, because of a tie above it.
@@ -36,14 +54,22 @@ fn run(input: &OpInput) -> OpOutput {
     let me = EntityRef::Contest(ci);
     match c.status {
         Status::Scheduled => {
-            return OpOutput::done("scheduled", Facts::new().set("start", when_value(&data.facts[ci].start, input.now)), vec![me])
+            return OpOutput::done(
+                "scheduled",
+                Facts::new().set("start", when_value(&data.facts[ci].start, input.now)),
+                vec![me],
+            )
         }
         Status::Live => {
             let order = placed(c);
             let Some(&first) = order.first() else {
                 return OpOutput::done("live", Facts::new(), vec![me]);
             };
-            let leaders: Vec<usize> = order.iter().copied().filter(|&i| c.entries[i].place == c.entries[first].place).collect();
+            let leaders: Vec<usize> = order
+                .iter()
+                .copied()
+                .filter(|&i| c.entries[i].place == c.entries[first].place)
+                .collect();
             let mut f = Facts::new().set("leader", labels(data, c, &leaders));
             if let Some(m) = super::support::mark_value(data, ci, first) {
                 f.put("mark", m);
@@ -61,14 +87,23 @@ fn run(input: &OpInput) -> OpOutput {
             for above in awards[..pos].iter().rev() {
                 let h = holders(c, above);
                 if h.len() > 1 {
-                    let f = Facts::new().set("tied", labels(data, c, &h)).set("tied_award", above.as_str());
+                    let f = Facts::new()
+                        .set("tied", labels(data, c, &h))
+                        .set("tied_award", above.as_str());
                     return OpOutput::done("not_awarded", f, vec![me]);
                 }
             }
             return OpOutput::done("no_result", Facts::new(), vec![me]);
         }
-        let mentioned = std::iter::once(me).chain(ix.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i]))).collect();
-        let f = Facts::new().set("holders", labels(data, c, &ix)).set("shared", if ix.len() > 1 { "shared" } else { "" });
+        let mentioned = std::iter::once(me)
+            .chain(
+                ix.iter()
+                    .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
+            )
+            .collect();
+        let f = Facts::new()
+            .set("holders", labels(data, c, &ix))
+            .set("shared", if ix.len() > 1 { "shared" } else { "" });
         return OpOutput::done("award", f, mentioned);
     }
     if placed(c).is_empty() {
@@ -82,7 +117,10 @@ fn run(input: &OpInput) -> OpOutput {
         if ix.is_empty() {
             missing.push(a.clone());
         }
-        mentioned.extend(ix.iter().filter_map(|&i| super::support::entry_entity(data, &c.entries[i])));
+        mentioned.extend(
+            ix.iter()
+                .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
+        );
         // The first three awards have fixed fact names editors can use.
         let key = match k {
             0 => "gold",

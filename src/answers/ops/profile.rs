@@ -9,13 +9,39 @@ use crate::dataset::{EntryStatus, Status};
 pub static SPEC: OpSpec = OpSpec {
     name: "profile",
     summary: "a competitor's results and medals so far",
-    params: &[Param { name: "competitor", kind: EntityKind::Competitor, required: true }],
+    params: &[Param {
+        name: "competitor",
+        kind: EntityKind::Competitor,
+        required: true,
+    }],
     outcomes: &[
         answered(
             "answered",
-            &["name", "group", "sport_noun", "results", "results_count", "gold", "silver", "bronze", "total", "breakdown", "next"],
+            &[
+                "name",
+                "group",
+                "sport_noun",
+                "results",
+                "results_count",
+                "gold",
+                "silver",
+                "bronze",
+                "total",
+                "breakdown",
+                "next",
+            ],
         ),
-        answered("no_medals", &["name", "group", "sport_noun", "results", "results_count", "next"]),
+        answered(
+            "no_medals",
+            &[
+                "name",
+                "group",
+                "sport_noun",
+                "results",
+                "results_count",
+                "next",
+            ],
+        ),
         no_data("nothing_yet", &["name", "group", "sport_noun", "next"]),
     ],
     run,
@@ -63,7 +89,11 @@ fn run(input: &OpInput) -> OpOutput {
                     continue;
                 };
                 results.push(Value::Dual { text, spoken });
-                if let Some(k) = e.award.as_ref().and_then(|a| data.awards().iter().position(|x| x == a)) {
+                if let Some(k) = e
+                    .award
+                    .as_ref()
+                    .and_then(|a| data.awards().iter().position(|x| x == a))
+                {
                     counts[k] += 1;
                 }
             }
@@ -75,8 +105,14 @@ fn run(input: &OpInput) -> OpOutput {
         f.put(
             "next",
             Value::Dual {
-                text: format!("the {name} {}", start.render(crate::answers::value::Style::Text)),
-                spoken: format!("the {name} {}", start.render(crate::answers::value::Style::Spoken)),
+                text: format!(
+                    "the {name} {}",
+                    start.render(crate::answers::value::Style::Text)
+                ),
+                spoken: format!(
+                    "the {name} {}",
+                    start.render(crate::answers::value::Style::Spoken)
+                ),
             },
         );
     }

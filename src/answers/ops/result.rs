@@ -9,13 +9,34 @@ pub static SPEC: OpSpec = OpSpec {
     name: "result",
     summary: "a competitor's result in a contest",
     params: &[
-        Param { name: "competitor", kind: EntityKind::Competitor, required: true },
-        Param { name: "contest", kind: EntityKind::Contest, required: false },
+        Param {
+            name: "competitor",
+            kind: EntityKind::Competitor,
+            required: true,
+        },
+        Param {
+            name: "contest",
+            kind: EntityKind::Contest,
+            required: false,
+        },
     ],
     outcomes: &[
-        answered("answered", &["name", "place", "place_nth", "mark", "award", "contest_name"]),
+        answered(
+            "answered",
+            &[
+                "name",
+                "place",
+                "place_nth",
+                "mark",
+                "award",
+                "contest_name",
+            ],
+        ),
         answered("did_not_finish", &["name", "status", "contest_name"]),
-        no_data("live", &["name", "place", "place_nth", "mark", "contest_name"]),
+        no_data(
+            "live",
+            &["name", "place", "place_nth", "mark", "contest_name"],
+        ),
         no_data("scheduled", &["name", "start", "contest_name"]),
         no_data("not_entered", &["name", "contest_name"]),
         no_data("no_result", &["name", "contest_name"]),
@@ -35,7 +56,9 @@ fn run(input: &OpInput) -> OpOutput {
         Some(ci) => match theirs.iter().find(|(c, _)| *c == ci) {
             Some(&pair) => pair,
             None => {
-                let f = Facts::new().set("name", name).set("contest_name", data.contest_name(ci));
+                let f = Facts::new()
+                    .set("name", name)
+                    .set("contest_name", data.contest_name(ci));
                 return OpOutput::done("not_entered", f, vec![who, EntityRef::Contest(ci)]);
             }
         },
@@ -54,7 +77,9 @@ fn run(input: &OpInput) -> OpOutput {
     let c = &data.contests[ci];
     let e = &c.entries[ei];
     let mentioned = vec![who, EntityRef::Contest(ci)];
-    let mut f = Facts::new().set("name", name).set("contest_name", data.contest_name(ci));
+    let mut f = Facts::new()
+        .set("name", name)
+        .set("contest_name", data.contest_name(ci));
     if c.status == Status::Scheduled {
         f.put("start", when_value(&data.facts[ci].start, input.now));
         return OpOutput::done("scheduled", f, mentioned);
@@ -64,12 +89,23 @@ fn run(input: &OpInput) -> OpOutput {
         return OpOutput::done("did_not_finish", f, mentioned);
     }
     let Some(place) = e.place else {
-        return OpOutput::done(if c.status == Status::Live { "live" } else { "no_result" }, f, mentioned);
+        return OpOutput::done(
+            if c.status == Status::Live {
+                "live"
+            } else {
+                "no_result"
+            },
+            f,
+            mentioned,
+        );
     };
     f.put("place", Value::Int(place as i64));
     f.put(
         "place_nth",
-        Value::Dual { text: words::ordinal_figure(place as u64), spoken: words::ordinal(place as u64) },
+        Value::Dual {
+            text: words::ordinal_figure(place as u64),
+            spoken: words::ordinal(place as u64),
+        },
     );
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);

@@ -32,10 +32,12 @@ pub fn entry_entity(data: &Dataset, e: &Entry) -> Option<EntityRef> {
 /// The entry's mark as a value with a written and a spoken form.
 pub fn mark_value(data: &Dataset, contest: usize, entry: usize) -> Option<Value> {
     let c = &data.contests[contest];
-    data.facts[contest].marks[entry].as_ref().map(|m| Value::Dual {
-        text: mark::format_text(c.measure, m),
-        spoken: mark::format_spoken(c.measure, m),
-    })
+    data.facts[contest].marks[entry]
+        .as_ref()
+        .map(|m| Value::Dual {
+            text: mark::format_text(c.measure, m),
+            spoken: mark::format_spoken(c.measure, m),
+        })
 }
 
 /// The gap between two entries' marks.
@@ -53,7 +55,9 @@ pub fn margin_value(data: &Dataset, contest: usize, a: usize, b: usize) -> Optio
 
 /// Indices of placed entries, best first (ties keep file order).
 pub fn placed(c: &Contest) -> Vec<usize> {
-    let mut v: Vec<usize> = (0..c.entries.len()).filter(|&i| c.entries[i].place.is_some()).collect();
+    let mut v: Vec<usize> = (0..c.entries.len())
+        .filter(|&i| c.entries[i].place.is_some())
+        .collect();
     v.sort_by_key(|&i| c.entries[i].place);
     v
 }
@@ -63,12 +67,18 @@ pub fn holders(c: &Contest, award: &str) -> Vec<usize> {
     if c.status != Status::Final {
         return Vec::new();
     }
-    (0..c.entries.len()).filter(|&i| c.entries[i].award.as_deref() == Some(award)).collect()
+    (0..c.entries.len())
+        .filter(|&i| c.entries[i].award.as_deref() == Some(award))
+        .collect()
 }
 
 /// Labels of several entries as one list value.
 pub fn labels(data: &Dataset, c: &Contest, ix: &[usize]) -> Value {
-    Value::List(ix.iter().map(|&i| Value::Text(entry_label(data, &c.entries[i]))).collect())
+    Value::List(
+        ix.iter()
+            .map(|&i| Value::Text(entry_label(data, &c.entries[i])))
+            .collect(),
+    )
 }
 
 /// How a non-finishing status reads: "did not finish".
@@ -138,7 +148,9 @@ pub fn medal_table(data: &Dataset) -> Vec<MedalRow> {
     let mut counts = vec![vec![0u32; awards.len()]; data.groups.len()];
     for c in data.contests.iter().filter(|c| c.status == Status::Final) {
         for e in &c.entries {
-            let (Some(a), Some(g)) = (e.award.as_deref(), data.entry_group(e)) else { continue };
+            let (Some(a), Some(g)) = (e.award.as_deref(), data.entry_group(e)) else {
+                continue;
+            };
             if let Some(k) = awards.iter().position(|x| x == a) {
                 counts[g][k] += 1;
             }
@@ -148,7 +160,11 @@ pub fn medal_table(data: &Dataset) -> Vec<MedalRow> {
         .into_iter()
         .enumerate()
         .filter(|(_, c)| c.iter().any(|&n| n > 0))
-        .map(|(group, counts)| MedalRow { group, counts, rank: 0 })
+        .map(|(group, counts)| MedalRow {
+            group,
+            counts,
+            rank: 0,
+        })
         .collect();
     rows.sort_by(|a, b| {
         b.counts
@@ -182,7 +198,16 @@ pub fn medal_facts(data: &Dataset, counts: &[u32], facts: &mut super::Facts) {
         .iter()
         .zip(counts)
         .filter(|(_, &n)| n > 0)
-        .map(|(a, &n)| format!("{} {a}", crate::answers::value::int_words(n as i64, crate::answers::value::Style::Text, false)))
+        .map(|(a, &n)| {
+            format!(
+                "{} {a}",
+                crate::answers::value::int_words(
+                    n as i64,
+                    crate::answers::value::Style::Text,
+                    false
+                )
+            )
+        })
         .collect();
     let spoken: Vec<String> = data
         .awards()
@@ -193,7 +218,10 @@ pub fn medal_facts(data: &Dataset, counts: &[u32], facts: &mut super::Facts) {
         .collect();
     facts.put(
         "breakdown",
-        Value::Dual { text: words::join_list(&parts, "and"), spoken: words::join_list(&spoken, "and") },
+        Value::Dual {
+            text: words::join_list(&parts, "and"),
+            spoken: words::join_list(&spoken, "and"),
+        },
     );
 }
 
@@ -220,13 +248,22 @@ mod tests {
     use super::*;
 
     fn row(g: usize, c: [u32; 3]) -> MedalRow {
-        MedalRow { group: g, counts: c.to_vec(), rank: 0 }
+        MedalRow {
+            group: g,
+            counts: c.to_vec(),
+            rank: 0,
+        }
     }
 
     #[test]
     fn ties_share_a_rank_and_the_next_rank_skips() {
         // Standard competition ranking ("1224"), common practice.
-        let mut rows = vec![row(0, [3, 1, 0]), row(1, [2, 0, 1]), row(2, [2, 0, 1]), row(3, [1, 5, 5])];
+        let mut rows = vec![
+            row(0, [3, 1, 0]),
+            row(1, [2, 0, 1]),
+            row(2, [2, 0, 1]),
+            row(3, [1, 5, 5]),
+        ];
         assign_ranks(&mut rows);
         let ranks: Vec<u32> = rows.iter().map(|r| r.rank).collect();
         assert_eq!(ranks, vec![1, 2, 2, 4]);
