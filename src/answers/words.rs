@@ -7,7 +7,7 @@
 //! serial comma, words for small counts and figures for larger ones.
 
 /// Names of the numbers below twenty, indexed by value.
-const UNITS: [&str; 20] = [
+pub const UNITS: [&str; 20] = [
     "zero",
     "one",
     "two",

@@ -178,29 +178,10 @@ fn split_glued(word: &str) -> Option<(&str, &'static str)> {
 }
 
 fn small_number(word: &str) -> Option<u64> {
-    const WORDS: [&str; 20] = [
-        "zero",
-        "one",
-        "two",
-        "three",
-        "four",
-        "five",
-        "six",
-        "seven",
-        "eight",
-        "nine",
-        "ten",
-        "eleven",
-        "twelve",
-        "thirteen",
-        "fourteen",
-        "fifteen",
-        "sixteen",
-        "seventeen",
-        "eighteen",
-        "nineteen",
-    ];
-    WORDS.iter().position(|w| *w == word).map(|p| p as u64)
+    crate::answers::words::UNITS
+        .iter()
+        .position(|w| *w == word)
+        .map(|p| p as u64)
 }
 
 fn tens(word: &str) -> Option<u64> {

@@ -113,30 +113,6 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
     out
 }
 
-const SMALL: [&str; 21] = [
-    "zero",
-    "one",
-    "two",
-    "three",
-    "four",
-    "five",
-    "six",
-    "seven",
-    "eight",
-    "nine",
-    "ten",
-    "eleven",
-    "twelve",
-    "thirteen",
-    "fourteen",
-    "fifteen",
-    "sixteen",
-    "seventeen",
-    "eighteen",
-    "nineteen",
-    "twenty",
-];
-
 /// A count such as "top five" or "top 3": (start, end, value).
 pub fn find_count(tokens: &[&str]) -> Option<(usize, usize, u32)> {
     for i in 0..tokens.len().saturating_sub(1) {
@@ -145,7 +121,13 @@ pub fn find_count(tokens: &[&str]) -> Option<(usize, usize, u32)> {
             let n = next
                 .parse::<u32>()
                 .ok()
-                .or_else(|| SMALL.iter().position(|w| *w == next).map(|p| p as u32));
+                .or_else(|| {
+                    crate::answers::words::UNITS
+                        .iter()
+                        .position(|w| *w == next)
+                        .map(|p| p as u32)
+                })
+                .or_else(|| (next == "twenty").then_some(20));
             // A table is never longer than 20 rows; "top 400" is an event.
             if let Some(n) = n.filter(|&n| (1..=20).contains(&n)) {
                 return Some((i, i + 2, n));
