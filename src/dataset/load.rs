@@ -238,6 +238,19 @@ pub fn build(
     if !p.0.is_empty() {
         return Err(LoadError::Invalid(p.0));
     }
+    for (ci, f) in facts.iter_mut().enumerate() {
+        f.name = contest_name(&contests, &sports, &sport_ix, ci);
+    }
+    let mut entries_of = vec![Vec::new(); competitors.len()];
+    for (ci, c) in contests.iter().enumerate() {
+        for (ei, e) in c.entries.iter().enumerate() {
+            for id in e.competitor.iter().chain(&e.members) {
+                if let Some(&pi) = competitor_ix.get(id) {
+                    entries_of[pi].push((ci, ei));
+                }
+            }
+        }
+    }
     Ok(Dataset {
         scenario,
         sports,
@@ -253,7 +266,46 @@ pub fn build(
         group_ix,
         competitor_ix,
         contest_ix,
+        entries_of,
     })
+}
+
+/// "women's long jump", with the phase added when it is not the final or
+/// when the same event has other phases ("men's 100 m final", "heat 1").
+fn contest_name(
+    contests: &[Contest],
+    sports: &[Sport],
+    sport_ix: &HashMap<Id, usize>,
+    ci: usize,
+) -> String {
+    let c = &contests[ci];
+    let mut out = String::new();
+    match c.category.as_deref() {
+        Some("women") => out.push_str("women's "),
+        Some("men") => out.push_str("men's "),
+        Some(other) => {
+            out.push_str(other);
+            out.push(' ');
+        }
+        None => {}
+    }
+    let discipline = sport_ix
+        .get(&c.sport)
+        .and_then(|&s| sports[s].disciplines.iter().find(|d| d.id == c.discipline))
+        .map(|d| d.name.as_str())
+        .unwrap_or(&c.discipline);
+    out.push_str(discipline);
+    let other_phases = contests.iter().any(|o| {
+        o.id != c.id
+            && o.sport == c.sport
+            && o.discipline == c.discipline
+            && o.category == c.category
+    });
+    if c.phase != "final" || other_phases {
+        out.push(' ');
+        out.push_str(&c.phase);
+    }
+    out
 }
 
 #[allow(clippy::too_many_arguments)]
@@ -412,6 +464,8 @@ fn check_contest(
         better,
         marks,
         updated,
+        // Filled in once every contest has been checked.
+        name: String::new(),
     }
 }
 

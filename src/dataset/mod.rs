@@ -39,6 +39,9 @@ pub struct Dataset {
     group_ix: HashMap<Id, usize>,
     competitor_ix: HashMap<Id, usize>,
     contest_ix: HashMap<Id, usize>,
+    /// (contest, entry) pairs per competitor, derived once at load because
+    /// slot filling asks it for every candidate person.
+    entries_of: Vec<Vec<(usize, usize)>>,
 }
 
 /// What is derived from a contest once, at load time.
@@ -52,6 +55,8 @@ pub struct ContestFacts {
     pub marks: Vec<Option<Mark>>,
     /// Last update of a live contest.
     pub updated: Option<Timestamp>,
+    /// The name readers know it by: "women's long jump final".
+    pub name: String,
 }
 
 /// A reference to something a reader can name.
@@ -80,16 +85,6 @@ impl Dataset {
         self.contest_ix.get(id).copied()
     }
 
-    /// The discipline of a contest.
-    pub fn discipline_of(&self, contest: usize) -> &Discipline {
-        let c = &self.contests[contest];
-        let s = &self.sports[self.sport_ix[&c.sport]];
-        s.disciplines
-            .iter()
-            .find(|d| d.id == c.discipline)
-            .expect("validated: a contest's discipline belongs to its sport")
-    }
-
     /// Discipline index pair of a contest.
     pub fn discipline_ref(&self, contest: usize) -> (usize, usize) {
         let c = &self.contests[contest];
@@ -104,29 +99,7 @@ impl Dataset {
 
     /// The contest's name as a reader would say it: "women's long jump final".
     pub fn contest_name(&self, contest: usize) -> String {
-        let c = &self.contests[contest];
-        let d = self.discipline_of(contest);
-        let mut out = String::new();
-        match c.category.as_deref() {
-            Some("women") => out.push_str("women's "),
-            Some("men") => out.push_str("men's "),
-            Some(other) => {
-                out.push_str(other);
-                out.push(' ');
-            }
-            None => {}
-        }
-        out.push_str(&d.name);
-        if c.phase != "final"
-            || self
-                .contests
-                .iter()
-                .any(|o| o.id != c.id && o.discipline == c.discipline && o.category == c.category)
-        {
-            out.push(' ');
-            out.push_str(&c.phase);
-        }
-        out
+        self.facts[contest].name.clone()
     }
 
     /// The group an entry stands for: its own group, else its competitor's.
@@ -192,18 +165,10 @@ impl Dataset {
         }
     }
 
-    /// Contests a competitor takes part in (individually or as a team member).
-    pub fn contests_of(&self, competitor: usize) -> Vec<(usize, usize)> {
-        let id = &self.competitors[competitor].id;
-        let mut out = Vec::new();
-        for (ci, c) in self.contests.iter().enumerate() {
-            for (ei, e) in c.entries.iter().enumerate() {
-                if e.competitor.as_ref() == Some(id) || e.members.iter().any(|m| m == id) {
-                    out.push((ci, ei));
-                }
-            }
-        }
-        out
+    /// Contests a competitor takes part in (individually or as a team
+    /// member), as (contest, entry) pairs in file order.
+    pub fn contests_of(&self, competitor: usize) -> &[(usize, usize)] {
+        &self.entries_of[competitor]
     }
 
     /// The rank-ordered awards of this scenario.

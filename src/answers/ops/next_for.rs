@@ -32,8 +32,8 @@ fn run(input: &OpInput) -> OpOutput {
     // A contest under way counts as "next": the reader wants to watch it.
     let next = data
         .contests_of(pi)
-        .into_iter()
-        .map(|(c, _)| c)
+        .iter()
+        .map(|&(c, _)| c)
         .filter(|&c| data.contests[c].status != Status::Final)
         .min_by_key(|&c| data.facts[c].start.timestamp());
     match next {

@@ -63,7 +63,7 @@ fn run(input: &OpInput) -> OpOutput {
     let mut results = Vec::new();
     let mut counts = vec![0u32; data.awards().len()];
     let mut next: Option<usize> = None;
-    let mut theirs = data.contests_of(pi);
+    let mut theirs = data.contests_of(pi).to_vec();
     theirs.sort_by_key(|(c, _)| data.facts[*c].start.timestamp());
     for (ci, ei) in theirs {
         let c = &data.contests[ci];

@@ -62,7 +62,7 @@ fn run(input: &OpInput) -> OpOutput {
                 return OpOutput::done("not_entered", f, vec![who, EntityRef::Contest(ci)]);
             }
         },
-        None => match theirs.as_slice() {
+        None => match theirs {
             [] => return OpOutput::done("no_result", Facts::new().set("name", name), vec![who]),
             [only] => *only,
             // Several contests: ask which, never pick one silently.
