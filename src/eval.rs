@@ -39,9 +39,13 @@ pub struct Turn {
     /// Phrases the reply must not contain.
     #[serde(default)]
     pub never: Vec<String>,
+    /// Labels for reporting ("misspelling", "ambiguous"...).
+    #[serde(default)]
+    pub tags: Vec<String>,
 }
 
-/// A case: one question, or a conversation.
+/// A case: one question, or a conversation. Unknown keys are an error in
+/// both, so a typo such as `say:` cannot silently turn a check off.
 #[derive(Debug, Clone, Deserialize)]
 #[serde(untagged)]
 pub enum Case {
@@ -50,56 +54,7 @@ pub enum Case {
         #[serde(default)]
         tags: Vec<String>,
     },
-    Single(SingleCase),
-}
-
-/// One question with its labels; unknown keys are an error, so a typo such
-/// as `say:` cannot silently turn a check off.
-#[derive(Debug, Clone, Deserialize)]
-#[serde(deny_unknown_fields)]
-pub struct SingleCase {
-    pub ask: String,
-    #[serde(default)]
-    pub intent: Option<String>,
-    #[serde(default)]
-    pub slots: Option<BTreeMap<String, String>>,
-    #[serde(default)]
-    pub outcome: Option<Outcome>,
-    #[serde(default)]
-    pub says: Vec<String>,
-    #[serde(default)]
-    pub never: Vec<String>,
-    #[serde(default)]
-    pub tags: Vec<String>,
-}
-
-impl SingleCase {
-    /// The labelled turn.
-    pub fn turn(&self) -> Turn {
-        Turn {
-            ask: self.ask.clone(),
-            intent: self.intent.clone(),
-            slots: self.slots.clone(),
-            outcome: self.outcome,
-            says: self.says.clone(),
-            never: self.never.clone(),
-        }
-    }
-}
-
-impl<'de> Deserialize<'de> for Outcome {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> Result<Self, D::Error> {
-        let s = String::deserialize(d)?;
-        match s.as_str() {
-            "answered" => Ok(Outcome::Answered),
-            "clarify" => Ok(Outcome::Clarify),
-            "not_understood" => Ok(Outcome::NotUnderstood),
-            "no_data" => Ok(Outcome::NoData),
-            other => Err(serde::de::Error::custom(format!(
-                "unknown outcome {other:?}; use answered, clarify, not_understood or no_data"
-            ))),
-        }
-    }
+    Single(Turn),
 }
 
 /// A turn that did not meet its labels.
@@ -173,15 +128,15 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
     };
     let (mut tp, mut fp, mut fn_) = (0usize, 0usize, 0usize);
     for (ci, case) in cases.iter().enumerate() {
-        let turns: Vec<Turn> = match case {
-            Case::Single(single) => vec![single.turn()],
+        let turns: &[Turn] = match case {
+            Case::Single(turn) => std::slice::from_ref(turn),
             Case::Conversation { conversation, .. } => {
                 r.conversations += 1;
-                conversation.clone()
+                conversation
             }
         };
         let user = format!("eval-{ci}");
-        for t in &turns {
+        for t in turns {
             r.turns += 1;
             let answer = match engine.handle(&user, "chat", &t.ask).await {
                 Ok(a) => a,

@@ -24,7 +24,7 @@ pub const MIN_SCORE: f32 = 0.42;
 pub const MIN_SCORE_TO_ASK: f32 = 0.55;
 
 /// What kind of reply this is.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, serde::Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Outcome {
     /// A fact from the data.
