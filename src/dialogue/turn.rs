@@ -205,10 +205,7 @@ fn ask_choice(
     a: &Analysis,
 ) -> Reply {
     let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
-    let noun = options
-        .first()
-        .map(|e| noun_for(ctx.data, *e))
-        .unwrap_or("one");
+    let noun = options.first().map(|e| noun_for(*e)).unwrap_or("one");
     let mut values = HashMap::new();
     values.insert("options".to_string(), Value::from(labels.clone()));
     values.insert("noun".to_string(), Value::Text(noun.to_string()));
@@ -317,53 +314,50 @@ fn run(
 /// (the pending question is dropped).
 fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis) -> Option<Reply> {
     let intent = ctx.catalog.intent(&p.intent)?;
-    let def = intent.slot(&p.slot)?;
     let carried = load_slots(ctx.data, &p.slots);
     // A clearly different question wins over a loose answer.
     let new_question = a
         .scores
         .first()
         .is_some_and(|b| b.score >= 0.75 && b.intent != p.intent);
-    let value = if p.options.is_empty() {
+    if p.options.is_empty() {
+        // The service asked for a missing detail: the message answers it if
+        // it fills that slot, or brings up something to ask about instead.
         if new_question {
             return None;
         }
         let filled = fill(ctx.data, intent, a, &carried);
-        if filled.slots.contains_key(&p.slot)
+        let answers = filled.slots.contains_key(&p.slot)
             || filled
                 .need
                 .as_ref()
-                .is_some_and(|n| !matches!(n, Need::Missing { slot } if *slot == p.slot))
-        {
-            let confidence = filled.certainty;
-            return Some(proceed(
+                .is_some_and(|n| !matches!(n, Need::Missing { slot } if *slot == p.slot));
+        return answers.then(|| {
+            proceed(
                 ctx,
                 s,
                 intent,
                 filled.slots,
                 filled.need,
-                confidence,
+                filled.certainty,
                 a,
+            )
+        });
+    }
+    let options: Vec<EntityRef> = p
+        .options
+        .iter()
+        .filter_map(|o| load_entity(ctx.data, o))
+        .collect();
+    let value = match pick(ctx.data, &options, a) {
+        Picked::One(e) => SlotValue::Entity { entity: e },
+        Picked::Some(narrowed) if !new_question => {
+            return Some(ask_choice(
+                ctx, s, intent, carried, &p.slot, narrowed, 1.0, a,
             ));
         }
-        return None;
-    } else {
-        let options: Vec<EntityRef> = p
-            .options
-            .iter()
-            .filter_map(|o| load_entity(ctx.data, o))
-            .collect();
-        match pick(ctx.data, &options, a) {
-            Picked::One(e) => SlotValue::Entity { entity: e },
-            Picked::Some(narrowed) if !new_question => {
-                return Some(ask_choice(
-                    ctx, s, intent, carried, &p.slot, narrowed, 1.0, a,
-                ));
-            }
-            _ => return None,
-        }
+        _ => return None,
     };
-    let _ = def;
     let mut slots = carried;
     slots.insert(p.slot.clone(), value);
     // Fill anything else the intent still needs from this message.
@@ -415,15 +409,6 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
     }
     let mut keep: Vec<EntityRef> = options.to_vec();
     let mut narrowed = false;
-    // Each detail narrows the options, unless it would rule out all of them.
-    let mut apply = |f: &dyn Fn(&EntityRef) -> bool| {
-        let next: Vec<EntityRef> = keep.iter().copied().filter(|e| f(e)).collect();
-        if !next.is_empty() && next.len() < keep.len() {
-            keep = next;
-            narrowed = true;
-        }
-        narrowed
-    };
     // Names mentioned in the message.
     let named: Vec<EntityRef> = a
         .mentions
@@ -434,19 +419,19 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
             _ => None,
         })
         .collect();
-    apply(&|e| named.contains(e));
+    narrowed |= narrow(&mut keep, &|e| named.contains(e));
     if let Some(sport) = sport_noun(a) {
-        apply(&|e| sport_of(data, *e) == Some(sport));
+        narrowed |= narrow(&mut keep, &|e| sport_of(data, *e) == Some(sport));
     }
     for m in &a.mentions {
         match m.candidates.first() {
             Some((Target::Entity(EntityRef::Group(g), _), _)) => {
                 let g = *g;
-                apply(&|e| group_of(data, *e) == Some(g));
+                narrowed |= narrow(&mut keep, &|e| group_of(data, *e) == Some(g));
             }
             Some((Target::Entity(EntityRef::Sport(sp), _), _)) => {
                 let sp = *sp;
-                apply(&|e| sport_of(data, *e) == Some(sp));
+                narrowed |= narrow(&mut keep, &|e| sport_of(data, *e) == Some(sp));
             }
             _ => {}
         }
@@ -454,19 +439,21 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
     // Event details narrow contest options.
     if options.iter().all(|e| matches!(e, EntityRef::Contest(_))) {
         if let Ok(Some(ci)) = resolve_contest(data, a, &Slots::new()) {
-            apply(&|e| *e == EntityRef::Contest(ci));
+            narrowed |= narrow(&mut keep, &|e| *e == EntityRef::Contest(ci));
         }
         for m in &a.mentions {
             match m.candidates.first() {
                 Some((Target::Category(c), _)) => {
                     let c = c.clone();
-                    apply(
+                    narrowed |= narrow(
+                        &mut keep,
                         &|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].category.as_deref() == Some(c.as_str())),
                     );
                 }
                 Some((Target::Phase(p), _)) => {
                     let p = p.clone();
-                    apply(
+                    narrowed |= narrow(
+                        &mut keep,
                         &|e| matches!(e, EntityRef::Contest(i) if data.contests[*i].phase.starts_with(p.as_str())),
                     );
                 }
@@ -474,20 +461,33 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
             }
         }
     }
-    // Words of the option's own label ("the 400 m one", "Quillon").
-    if !apply(&|_| true) {
+    // Words of the option's own label ("the 400 m one", "Quillon"), when
+    // nothing else told the options apart.
+    if !narrowed {
         let label_hit = |e: &EntityRef| {
             let label = crate::understand::normalize::normalize(&describe(data, *e));
             toks.iter().any(|t| {
                 t.len() >= 3 && !matches!(*t, "the" | "one") && label.split(' ').any(|w| w == *t)
             })
         };
-        apply(&label_hit);
+        narrowed |= narrow(&mut keep, &label_hit);
     }
     match keep.as_slice() {
         [one] if narrowed => Picked::One(*one),
         _ if narrowed => Picked::Some(keep),
         _ => Picked::None,
+    }
+}
+
+/// Keeps the options that pass `f`, unless that would rule out all of them
+/// or none; returns whether the list got shorter.
+fn narrow(keep: &mut Vec<EntityRef>, f: &dyn Fn(&EntityRef) -> bool) -> bool {
+    let next: Vec<EntityRef> = keep.iter().copied().filter(|e| f(e)).collect();
+    if !next.is_empty() && next.len() < keep.len() {
+        *keep = next;
+        true
+    } else {
+        false
     }
 }
 
@@ -528,8 +528,7 @@ pub fn describe(data: &Dataset, e: EntityRef) -> String {
     }
 }
 
-fn noun_for(data: &Dataset, e: EntityRef) -> &'static str {
-    let _ = data;
+fn noun_for(e: EntityRef) -> &'static str {
     match e {
         EntityRef::Competitor(_) => "person",
         EntityRef::Group(_) => "team",
@@ -592,8 +591,13 @@ fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
         .service
         .not_understood
         .render(&values, ctx.style);
-    let confidence = a.scores.first().map(|s| s.score).unwrap_or(0.0);
-    let mut r = plain_reply(text, Outcome::NotUnderstood, None, 1.0 - confidence, a);
-    r.confidence = (1.0 - confidence).clamp(0.0, 1.0);
-    r
+    // Confidence that no intent fits: the complement of the best score.
+    let best = a.scores.first().map(|s| s.score).unwrap_or(0.0);
+    plain_reply(
+        text,
+        Outcome::NotUnderstood,
+        None,
+        (1.0 - best).clamp(0.0, 1.0),
+        a,
+    )
 }
