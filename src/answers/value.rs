@@ -74,15 +74,10 @@ pub fn int_words(n: i64, style: Style, figures: bool) -> String {
     let abs = n.unsigned_abs();
     match (style, figures) {
         (Style::Spoken, _) => format!("{neg}{}", words::cardinal(abs)),
-        (Style::Text, true) => format!("{neg}{}", group_thousands(abs)),
-        (Style::Text, false) if abs >= 10 => format!("{neg}{}", group_thousands(abs)),
+        (Style::Text, true) => format!("{neg}{}", words::figures(abs)),
+        (Style::Text, false) if abs >= 10 => format!("{neg}{}", words::figures(abs)),
         (Style::Text, false) => format!("{neg}{}", words::running_number(abs)),
     }
-}
-
-/// 1234567 → "1,234,567".
-pub fn group_thousands(n: u64) -> String {
-    words::figures(n)
 }
 
 impl From<&str> for Value {
@@ -130,9 +125,9 @@ mod tests {
 
     #[test]
     fn thousands_are_grouped() {
-        assert_eq!(group_thousands(0), "0");
-        assert_eq!(group_thousands(999), "999");
-        assert_eq!(group_thousands(1000), "1,000");
-        assert_eq!(group_thousands(1234567), "1,234,567");
+        assert_eq!(words::figures(0), "0");
+        assert_eq!(words::figures(999), "999");
+        assert_eq!(words::figures(1000), "1,000");
+        assert_eq!(words::figures(1234567), "1,234,567");
     }
 }

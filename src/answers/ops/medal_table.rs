@@ -1,8 +1,7 @@
 //! `medal_table`: who leads the medal table, and the top N.
 
-use super::support::{medal_table, MedalRow};
+use super::support::{breakdown, medal_table, MedalRow};
 use super::*;
-use crate::answers::value::int_words;
 use crate::answers::value::Style;
 use crate::answers::words;
 
@@ -34,25 +33,6 @@ pub static SPEC: OpSpec = OpSpec {
 /// How many rows to list when the reader does not say, unless the intent's
 /// `settings.rows` says otherwise.
 const DEFAULT_ROWS: usize = 3;
-
-fn breakdown(data: &Dataset, row: &MedalRow) -> Value {
-    let text: Vec<String> = data
-        .awards()
-        .iter()
-        .zip(&row.counts)
-        .map(|(a, &n)| format!("{} {a}", int_words(n as i64, Style::Text, false)))
-        .collect();
-    let spoken: Vec<String> = data
-        .awards()
-        .iter()
-        .zip(&row.counts)
-        .map(|(a, &n)| format!("{} {a}", words::cardinal(n as u64)))
-        .collect();
-    Value::Dual {
-        text: words::join_list(&text, "and"),
-        spoken: words::join_list(&spoken, "and"),
-    }
-}
 
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
@@ -97,7 +77,10 @@ fn run(input: &OpInput) -> OpOutput {
         ),
     );
     f.put("leaders_count", Value::Int(leaders.len() as i64));
-    f.put("leader_breakdown", breakdown(data, leaders[0]));
+    f.put(
+        "leader_breakdown",
+        breakdown(data, &leaders[0].counts, true),
+    );
     f.put("leader_total", Value::Int(leaders[0].total() as i64));
     // Include every row tied with the last one shown, so a cut never splits
     // a shared rank.
@@ -109,7 +92,7 @@ fn run(input: &OpInput) -> OpOutput {
     let lines: Vec<Value> = shown
         .iter()
         .map(|r| {
-            let b = breakdown(data, r);
+            let b = breakdown(data, &r.counts, true);
             let name = &data.groups[r.group].name;
             Value::Dual {
                 text: format!("{}. {name} ({})", r.rank, b.render(Style::Text)),

@@ -3,7 +3,7 @@
 
 use jiff::{civil::Date, ZonedDateTime};
 
-use crate::answers::value::Value;
+use crate::answers::value::{int_words, Style, Value};
 use crate::answers::words;
 use crate::dataset::{mark, Contest, Dataset, EntityRef, Entry, EntryStatus, Status};
 
@@ -192,37 +192,26 @@ pub fn medal_facts(data: &Dataset, counts: &[u32], facts: &mut super::Facts) {
         facts.put(a, Value::Int(counts.get(k).copied().unwrap_or(0) as i64));
     }
     facts.put("total", Value::Int(counts.iter().sum::<u32>() as i64));
-    // "3 gold, 1 silver and 2 bronze", leaving out zero counts.
-    let parts: Vec<String> = data
-        .awards()
-        .iter()
-        .zip(counts)
-        .filter(|(_, &n)| n > 0)
-        .map(|(a, &n)| {
-            format!(
-                "{} {a}",
-                crate::answers::value::int_words(
-                    n as i64,
-                    crate::answers::value::Style::Text,
-                    false
-                )
-            )
-        })
-        .collect();
-    let spoken: Vec<String> = data
-        .awards()
-        .iter()
-        .zip(counts)
-        .filter(|(_, &n)| n > 0)
-        .map(|(a, &n)| format!("{} {a}", words::cardinal(n as u64)))
-        .collect();
-    facts.put(
-        "breakdown",
-        Value::Dual {
-            text: words::join_list(&parts, "and"),
-            spoken: words::join_list(&spoken, "and"),
-        },
-    );
+    facts.put("breakdown", breakdown(data, counts, false));
+}
+
+/// A medal count in words, "three gold, one silver and two bronze"; zero
+/// counts are left out unless `zeros` (a table row lists every colour).
+pub fn breakdown(data: &Dataset, counts: &[u32], zeros: bool) -> Value {
+    let phrase = |style: Style| {
+        let parts: Vec<String> = data
+            .awards()
+            .iter()
+            .zip(counts)
+            .filter(|(_, &n)| zeros || n > 0)
+            .map(|(a, &n)| format!("{} {a}", int_words(n as i64, style, false)))
+            .collect();
+        words::join_list(&parts, "and")
+    };
+    Value::Dual {
+        text: phrase(Style::Text),
+        spoken: phrase(Style::Spoken),
+    }
 }
 
 /// "1st" or "joint 2nd" for a rank shared with others.
