@@ -33,6 +33,8 @@ pub struct Classifier {
     idf: Vec<f32>,
     examples: Vec<Example>,
     intents: Vec<String>,
+    /// Placeholders each intent's slots can take, by intent index.
+    accepts: Vec<Vec<&'static str>>,
 }
 
 /// One intent's score and why.
@@ -49,12 +51,25 @@ pub struct Scored {
 /// Weight of a word the catalog never uses: it still counts against the
 /// match, so a long unrelated message scores low.
 const UNKNOWN_WEIGHT: f32 = 2.0;
+/// How much an intent loses for each kind of name in the message that none
+/// of its slots can take ("can you tell me who won the 400 m" is not help).
+const MISFIT_PENALTY: f32 = 0.2;
+/// Kinds of name that count against an intent that cannot take them.
+const NAMED_KINDS: [&str; 4] = ["<competitor>", "<group>", "<event>", "<sport>"];
+/// How many of the best intents are explained with their shared words.
+const EXPLAINED: usize = 3;
 /// Bigrams carry word order at a lower weight than the words themselves.
 const BIGRAM_FACTOR: f32 = 0.5;
 
 impl Classifier {
-    /// Builds the scorer from `(intent name, abstracted phrasing tokens)`.
-    pub fn new(intents: &[String], examples: &[(usize, String, Vec<String>)]) -> Classifier {
+    /// Builds the scorer from the intent names, the examples as `(intent
+    /// index, phrasing, abstracted tokens)`, and per intent the placeholders
+    /// its slots can take.
+    pub fn new(
+        intents: &[String],
+        examples: &[(usize, String, Vec<String>)],
+        accepts: Vec<Vec<&'static str>>,
+    ) -> Classifier {
         let mut vocab: HashMap<String, Tok> = HashMap::new();
         let mut words = Vec::new();
         let mut df: Vec<Vec<usize>> = Vec::new();
@@ -110,6 +125,7 @@ impl Classifier {
             idf,
             examples,
             intents: intents.to_vec(),
+            accepts,
         }
     }
 
@@ -143,19 +159,42 @@ impl Classifier {
                 }
             }
         }
-        let mut out: Vec<Scored> = best
+        for (intent, (score, _)) in best.iter_mut().enumerate() {
+            let accepts = self.accepts.get(intent).map(Vec::as_slice).unwrap_or(&[]);
+            let misfits = NAMED_KINDS
+                .iter()
+                .filter(|p| tokens.iter().any(|t| t == *p) && !accepts.contains(p))
+                .count();
+            *score = (*score - MISFIT_PENALTY * misfits as f32).max(0.0);
+        }
+        let mut order: Vec<usize> = (0..best.len())
+            .filter(|&i| best[i].1 != usize::MAX)
+            .collect();
+        order.sort_by(|&a, &b| {
+            best[b]
+                .0
+                .partial_cmp(&best[a].0)
+                .unwrap_or(std::cmp::Ordering::Equal)
+                .then(self.intents[a].cmp(&self.intents[b]))
+        });
+        order
             .iter()
             .enumerate()
-            .filter(|(_, (_, ei))| *ei != usize::MAX)
-            .map(|(i, &(score, ei))| {
+            .map(|(rank, &i)| {
+                let (score, ei) = best[i];
                 let ex = &self.examples[ei];
-                let shared = ex
-                    .features
-                    .iter()
-                    .filter(|(t, _)| known.binary_search_by_key(t, |k| k.0).is_ok())
-                    .map(|(t, _)| self.words[*t as usize].clone())
-                    .filter(|w| !w.contains(' '))
-                    .collect();
+                // Only the best few are shown to clients; naming shared words
+                // for every intent would cost allocations on every message.
+                let shared = if rank < EXPLAINED {
+                    ex.features
+                        .iter()
+                        .filter(|(t, _)| known.binary_search_by_key(t, |k| k.0).is_ok())
+                        .map(|(t, _)| self.words[*t as usize].clone())
+                        .filter(|w| !w.contains(' '))
+                        .collect()
+                } else {
+                    Vec::new()
+                };
                 Scored {
                     intent: self.intents[i].clone(),
                     score,
@@ -163,14 +202,7 @@ impl Classifier {
                     shared,
                 }
             })
-            .collect();
-        out.sort_by(|a, b| {
-            b.score
-                .partial_cmp(&a.score)
-                .unwrap_or(std::cmp::Ordering::Equal)
-                .then(a.intent.cmp(&b.intent))
-        });
-        out
+            .collect()
     }
 }
 
@@ -221,7 +253,7 @@ mod tests {
                 toks("when is the <event>"),
             ),
         ];
-        let c = Classifier::new(&intents, &ex);
+        let c = Classifier::new(&intents, &ex, vec![vec!["<event>"]; intents.len()]);
         let s = c.score(&toks("who won the <event>"));
         assert_eq!(s[0].intent, "podium");
         assert!((s[0].score - 1.0).abs() < 1e-5);
@@ -238,7 +270,7 @@ mod tests {
             "who won the {contest}".to_string(),
             toks("who won the <event>"),
         )];
-        let c = Classifier::new(&intents, &ex);
+        let c = Classifier::new(&intents, &ex, vec![vec!["<event>"]; intents.len()]);
         let s = c.score(&toks("bake me a lemon cake"));
         assert!(s[0].score < 0.2);
     }

@@ -29,13 +29,7 @@ use lexicon::{Lexicon, Mention, Target};
 pub struct Understanding {
     pub lexicon: Lexicon,
     pub classifier: Classifier,
-    /// Placeholders each intent's slots accept, by intent name.
-    accepts: std::collections::HashMap<String, Vec<&'static str>>,
 }
-
-/// How much an intent loses for each kind of name in the message that none
-/// of its slots can take ("can you tell me who won the 400 m" is not help).
-const MISFIT_PENALTY: f32 = 0.2;
 
 /// What was read from one message.
 #[derive(Debug, Clone)]
@@ -154,7 +148,6 @@ impl Understanding {
             }
         }
         let lexicon = Lexicon::build(data, words);
-        let classifier = Classifier::new(&names, &examples);
         let accepts = catalog
             .intents
             .iter()
@@ -168,13 +161,13 @@ impl Understanding {
                 if v.contains(&"<sport>") {
                     v.push("<event>");
                 }
-                (i.name.clone(), v)
+                v
             })
             .collect();
+        let classifier = Classifier::new(&names, &examples, accepts);
         Understanding {
             lexicon,
             classifier,
-            accepts,
         }
     }
 
@@ -217,8 +210,7 @@ impl Understanding {
             } else if let Some(d) = days.iter().find(|d| d.start == i) {
                 abstracted.push("<date>".into());
                 i = d.end;
-            } else if let Some((s, e, _)) = count.filter(|c| c.0 == i) {
-                let _ = s;
+            } else if let Some((_, e, _)) = count.filter(|c| c.0 == i) {
                 abstracted.push("<count>".into());
                 i = e;
             } else {
@@ -227,28 +219,10 @@ impl Understanding {
             }
         }
         let abstracted = merge_events(abstracted);
-        let mut scores = self.classifier.score(&abstracted);
-        for sc in &mut scores {
-            let accepts = self
-                .accepts
-                .get(&sc.intent)
-                .map(Vec::as_slice)
-                .unwrap_or(&[]);
-            let misfits = ["<competitor>", "<group>", "<event>", "<sport>"]
-                .iter()
-                .filter(|p| abstracted.iter().any(|t| t == *p) && !accepts.contains(p))
-                .count();
-            sc.score = (sc.score - MISFIT_PENALTY * misfits as f32).max(0.0);
-        }
-        scores.sort_by(|a, b| {
-            b.score
-                .partial_cmp(&a.score)
-                .unwrap_or(std::cmp::Ordering::Equal)
-                .then(a.intent.cmp(&b.intent))
-        });
+        let scores = self.classifier.score(&abstracted);
         Analysis {
             tokens: toks.iter().map(|s| s.to_string()).collect(),
-            normalized: normalized.clone(),
+            normalized,
             mentions,
             days,
             count,
