@@ -11,7 +11,7 @@ use std::collections::{HashMap, HashSet};
 
 use aho_corasick::{AhoCorasick, AhoCorasickBuilder, MatchKind};
 
-use super::fuzzy::FuzzyIndex;
+use super::fuzzy::{FuzzyHit, FuzzyIndex};
 use super::normalize::normalize;
 use crate::dataset::{Dataset, EntityRef};
 
@@ -87,6 +87,10 @@ pub struct Lexicon {
     vocab_index: FuzzyIndex,
     vocab_words: Vec<String>,
 }
+
+/// What a fuzzy match's score is multiplied by, so it ranks below an exact
+/// match of the same name.
+const FUZZY_DISCOUNT: f32 = 0.97;
 
 /// Words too common to be a name on their own, whatever the data says.
 const COMMON: &[&str] = &[
@@ -484,19 +488,11 @@ impl Lexicon {
                 let from = if extend_discipline { m.start } else { m.end };
                 let query = tokens[from..end].join(" ");
                 let hits = self.fuzzy.lookup(&query, 0.86, 4);
-                let mut found: Vec<(Target, f32)> = hits
-                    .iter()
-                    .flat_map(|h| {
-                        self.fuzzy_targets[h.id as usize]
-                            .iter()
-                            .map(move |t| (t.clone(), h.score as f32 * 0.97))
-                    })
-                    .filter(|(t, _)| is_discipline(t))
-                    .collect();
+                let mut found = self.fuzzy_candidates(&hits);
+                found.retain(|(t, _)| is_discipline(t));
                 if found.is_empty() {
                     continue;
                 }
-                sort_candidates(&mut found);
                 if best.as_ref().is_none_or(|(_, b)| found[0].1 > b[0].1) {
                     best = Some((end, found));
                 }
@@ -559,15 +555,7 @@ impl Lexicon {
                     i += 1;
                     continue;
                 }
-                let mut candidates = Vec::new();
-                for h in &hits {
-                    for t in &self.fuzzy_targets[h.id as usize] {
-                        // A fuzzy match is never as certain as an exact one;
-                        // how close the spelling is decides between kinds.
-                        candidates.push((t.clone(), (h.score as f32) * 0.97));
-                    }
-                }
-                sort_candidates(&mut candidates);
+                let candidates = self.fuzzy_candidates(&hits);
                 covered[i..i + width].iter_mut().for_each(|c| *c = true);
                 mentions.push(Mention {
                     start: i,
@@ -578,6 +566,22 @@ impl Lexicon {
                 i += width;
             }
         }
+    }
+
+    /// The targets of fuzzy hits, best first. A fuzzy match is never as
+    /// certain as an exact one; how close the spelling is decides between
+    /// kinds (a family name against a discipline, say).
+    fn fuzzy_candidates(&self, hits: &[FuzzyHit]) -> Vec<(Target, f32)> {
+        let mut out: Vec<(Target, f32)> = hits
+            .iter()
+            .flat_map(|h| {
+                self.fuzzy_targets[h.id as usize]
+                    .iter()
+                    .map(move |t| (t.clone(), h.score as f32 * FUZZY_DISCOUNT))
+            })
+            .collect();
+        sort_candidates(&mut out);
+        out
     }
 
     fn fuzzy_term_words(&self, id: u32) -> usize {
