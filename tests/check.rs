@@ -97,6 +97,8 @@ replies:
   live: "Under way."
   scheduled: "Due {start}."
   no_result: "Nothing yet."
+  placings: "{first|and} first."
+  no_awards: "No medals in this round."
 "#;
 
 fn expect_error(file_text: &str, needle: &str, line: u32) {

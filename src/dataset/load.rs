@@ -528,6 +528,7 @@ fn check_places(
         }
         let e = &c.entries[i];
         // Awards are given only when a final is over; heats place without them.
+        // (The same rule as `Dataset::awards_in`.)
         let expected = if c.status == Status::Final && c.phase == "final" {
             scenario
                 .awards

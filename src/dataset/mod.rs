@@ -171,6 +171,12 @@ impl Dataset {
         &self.entries_of[competitor]
     }
 
+    /// Whether a contest's round gives awards: only the final does; heats
+    /// place competitors without medals.
+    pub fn awards_in(&self, contest: usize) -> bool {
+        self.contests[contest].phase == "final"
+    }
+
     /// The rank-ordered awards of this scenario.
     pub fn awards(&self) -> &[String] {
         &self.scenario.awards

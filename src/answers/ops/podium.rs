@@ -37,6 +37,10 @@ pub static SPEC: OpSpec = OpSpec {
         answered("award", &["holders", "shared"]),
         // The asked-for award was not given, because of a tie above it.
         answered("not_awarded", &["tied", "tied_award"]),
+        // A round that gives no medals (a heat): the first three places.
+        answered("placings", &["first", "second", "third"]),
+        // An award asked for in a round that gives none.
+        answered("no_awards", &[]),
         // Still under way: who leads now.
         no_data("live", &["leader", "mark"]),
         no_data("scheduled", &["start"]),
@@ -77,6 +81,33 @@ fn run(input: &OpInput) -> OpOutput {
             return OpOutput::done("live", f, vec![me]);
         }
         Status::Final => {}
+    }
+    if !data.awards_in(ci) {
+        // Heats give places, not medals: naming a "winner" with medals here
+        // would be wrong, so say who placed and, if asked, that there are
+        // no medals in this round.
+        if input.text("award").is_some() {
+            return OpOutput::done("no_awards", Facts::new(), vec![me]);
+        }
+        let order = placed(c);
+        if order.is_empty() {
+            return OpOutput::done("no_result", Facts::new(), vec![me]);
+        }
+        let mut f = Facts::new();
+        let mut mentioned = vec![me];
+        for (place, key) in [(1, "first"), (2, "second"), (3, "third")] {
+            let ix: Vec<usize> = order
+                .iter()
+                .copied()
+                .filter(|&i| c.entries[i].place == Some(place))
+                .collect();
+            mentioned.extend(
+                ix.iter()
+                    .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
+            );
+            f.put(key, labels(data, c, &ix));
+        }
+        return OpOutput::done("placings", f, mentioned);
     }
     let awards = data.awards();
     if let Some(award) = input.text("award") {
