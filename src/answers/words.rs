@@ -612,3 +612,46 @@ mod tests {
         assert_eq!(decimal_words(""), "");
     }
 }
+
+/// "a" or "an" before a word, by its first sound as spelled: "an athlete",
+/// "a swimmer", "a university", "an hour". Spelling rules with the common
+/// exceptions (common practice); enough for nouns editors write.
+pub fn indefinite_article(word: &str) -> &'static str {
+    let w = word.trim_start().to_lowercase();
+    // A "yoo" or "w" sound despite the vowel letter.
+    const CONSONANT_SOUND: [&str; 6] = ["uni", "use", "usu", "eu", "one", "once"];
+    // A silent h.
+    const VOWEL_SOUND: [&str; 4] = ["hour", "honest", "honour", "heir"];
+    if CONSONANT_SOUND.iter().any(|p| w.starts_with(p)) {
+        return "a";
+    }
+    if VOWEL_SOUND.iter().any(|p| w.starts_with(p)) {
+        return "an";
+    }
+    match w.chars().next() {
+        Some('a' | 'e' | 'i' | 'o' | 'u') => "an",
+        _ => "a",
+    }
+}
+
+#[cfg(test)]
+mod article_tests {
+    use super::indefinite_article;
+
+    #[test]
+    fn article_follows_the_first_sound() {
+        // Common practice of English usage, from memory.
+        for (w, a) in [
+            ("athlete", "an"),
+            ("swimmer", "a"),
+            ("oarsman", "an"),
+            ("university", "a"),
+            ("hour", "an"),
+            ("European", "a"),
+            ("umpire", "an"),
+            ("gymnast", "a"),
+        ] {
+            assert_eq!(indefinite_article(w), a, "{w}");
+        }
+    }
+}

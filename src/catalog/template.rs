@@ -44,6 +44,8 @@ enum Filter {
     },
     Upper,
     Lower,
+    /// "a swimmer", "an athlete".
+    Article,
 }
 
 /// A mistake in a template, at a character offset within it.
@@ -201,11 +203,12 @@ fn parse_field(inner: &str, offset: usize) -> Result<Piece, TemplateError> {
             ["verb", one, many] => Filter::Verb { one: one.to_string(), many: many.to_string() },
             ["upper"] => Filter::Upper,
             ["lower"] => Filter::Lower,
+            ["a"] => Filter::Article,
             _ => {
                 return Err(TemplateError {
                     offset,
                     message: format!(
-                        "unknown filter {:?} in {{{inner}}}; filters are and, or, count:noun, ordinal, nth, figure, verb:one:many, upper, lower",
+                        "unknown filter {:?} in {{{inner}}}; filters are and, or, count:noun, ordinal, nth, figure, verb:one:many, upper, lower, a",
                         f.trim()
                     ),
                 })
@@ -286,6 +289,10 @@ fn apply(v: &Value, filters: &[Filter], style: Style) -> String {
                 .clone()
                 .unwrap_or_else(|| v.render(style))
                 .to_lowercase(),
+            Filter::Article => {
+                let t = text.clone().unwrap_or_else(|| v.render(style));
+                format!("{} {t}", words::indefinite_article(&t))
+            }
         };
         text = Some(t);
     }

@@ -42,7 +42,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "next",
             ],
         ),
-        no_data("nothing_yet", &["name", "group", "sport_noun", "next"]),
+        no_data("nothing_yet", &["name", "group", "sport_noun", "live", "next"]),
     ],
     run,
 };
@@ -74,7 +74,11 @@ fn run(input: &OpInput) -> OpOutput {
                     next = Some(ci);
                 }
             }
-            Status::Live => {}
+            Status::Live => {
+                if !f.0.contains_key("live") {
+                    f.put("live", format!("the {}", data.contest_name(ci)));
+                }
+            }
             Status::Final => {
                 let name = data.contest_name(ci);
                 let (text, spoken) = if e.status != EntryStatus::Ok {
