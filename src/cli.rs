@@ -9,7 +9,7 @@ use std::time::Duration;
 
 use clap::{Args, Parser, Subcommand};
 
-use crate::dialogue::MemoryStore;
+use crate::dialogue::{MemoryStore, RedisStore, SessionStore};
 use crate::engine::{self, Clock, Engine, Settings, Sources};
 
 /// Answers readers' questions about results data.
@@ -34,6 +34,36 @@ pub struct Common {
     pub now: Option<String>,
 }
 
+/// Where conversations are kept and for how long.
+#[derive(Debug, Args, Clone)]
+pub struct SessionOptions {
+    /// Redis URL for sessions shared by every replica (default: in this
+    /// process's memory).
+    #[arg(long, env = "TIDINGS_REDIS_URL")]
+    pub redis_url: Option<String>,
+    /// Prefix of every Redis key, so several deployments can share one Redis.
+    #[arg(long, env = "TIDINGS_REDIS_PREFIX", default_value = "tidings:")]
+    pub redis_prefix: String,
+    /// Idle time after which a conversation is forgotten, in seconds.
+    #[arg(long, env = "TIDINGS_SESSION_TTL", default_value_t = 1800)]
+    pub session_ttl: u64,
+    /// How long a message id is remembered for retries, in seconds.
+    #[arg(long, env = "TIDINGS_RETRY_WINDOW", default_value_t = 600)]
+    pub retry_window: u64,
+}
+
+impl SessionOptions {
+    /// Options for one-process tools: in memory, with the given TTL.
+    fn in_memory(session_ttl: u64) -> SessionOptions {
+        SessionOptions {
+            redis_url: None,
+            redis_prefix: String::new(),
+            session_ttl,
+            retry_window: 600,
+        }
+    }
+}
+
 #[derive(Debug, Subcommand)]
 pub enum Command {
     /// Serve the HTTP API.
@@ -43,9 +73,8 @@ pub enum Command {
         /// Address to listen on.
         #[arg(long, env = "TIDINGS_LISTEN", default_value = "127.0.0.1:8080")]
         listen: SocketAddr,
-        /// Idle time after which a conversation is forgotten, in seconds.
-        #[arg(long, env = "TIDINGS_SESSION_TTL", default_value_t = 1800)]
-        session_ttl: u64,
+        #[command(flatten)]
+        sessions: SessionOptions,
     },
     /// Answer one question and exit.
     Ask {
@@ -113,15 +142,25 @@ pub fn id_secret() -> Vec<u8> {
     }
 }
 
-/// Builds an engine with in-memory sessions.
-pub fn local_engine(c: &Common, ttl: Duration) -> Result<Engine, String> {
+/// Builds an engine: the scenario, the clock and the session store.
+pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
     let snap = engine::load(&sources(c)).map_err(|e| e.to_string())?;
     let settings = Settings {
         clock: clock(&c.now)?,
-        session_ttl: ttl,
+        session_ttl: Duration::from_secs(o.session_ttl.max(1)),
+        retry_window: Duration::from_secs(o.retry_window.max(1)),
         id_secret: id_secret(),
     };
-    Ok(Engine::new(snap, Arc::new(MemoryStore::new()), settings))
+    let store: Arc<dyn SessionStore> = match &o.redis_url {
+        Some(url) => Arc::new(RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?),
+        None => Arc::new(MemoryStore::new()),
+    };
+    Ok(Engine::new(snap, store, settings))
+}
+
+/// Builds an engine with in-memory sessions.
+pub fn local_engine(c: &Common, ttl: Duration) -> Result<Engine, String> {
+    build_engine(c, &SessionOptions::in_memory(ttl.as_secs()))
 }
 
 /// Runs a command; returns the process exit code.
@@ -130,9 +169,9 @@ pub async fn run(cli: Cli) -> i32 {
         Command::Serve {
             common,
             listen,
-            session_ttl,
+            sessions,
         } => {
-            let engine = match local_engine(&common, Duration::from_secs(session_ttl)) {
+            let engine = match build_engine(&common, &sessions) {
                 Ok(e) => e,
                 Err(e) => {
                     eprintln!("{e}");
@@ -150,6 +189,7 @@ pub async fn run(cli: Cli) -> i32 {
             tracing::info!(
                 addr = %listener.local_addr().map(|a| a.to_string()).unwrap_or_default(),
                 scenario = %snap.data.scenario.title,
+                sessions = engine.store_name(),
                 intents = snap.catalog.intents.len(),
                 "serving"
             );

@@ -9,14 +9,15 @@ use std::time::Duration;
 use arc_swap::ArcSwap;
 use hmac::{Hmac, Mac};
 use jiff::{Timestamp, ZonedDateTime};
-use serde::Serialize;
+use serde::{Deserialize, Serialize};
 use sha2::Sha256;
 
 use crate::answers::value::Style;
 use crate::catalog::{self, Catalog};
 use crate::dataset::{self, Dataset};
+use crate::dialogue::session::SCHEMA;
 use crate::dialogue::turn::{turn, Reply, TurnContext};
-use crate::dialogue::{Session, SessionStore};
+use crate::dialogue::{KeepReply, Saved, Session, SessionStore, StoreError};
 use crate::understand::Understanding;
 
 /// One consistent version of everything a turn reads. A request holds an
@@ -124,7 +125,7 @@ pub enum Clock {
 }
 
 /// How replies are shaped for a channel.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Channel {
     /// Chat bubbles: text.
@@ -160,8 +161,40 @@ pub struct Settings {
     pub clock: Clock,
     /// How long an idle session is kept.
     pub session_ttl: Duration,
+    /// How long a message id is remembered, so a retry of the message gets
+    /// the first reply back instead of being handled twice.
+    pub retry_window: Duration,
     /// Key for hashing user ids; never logged.
     pub id_secret: Vec<u8>,
+}
+
+impl Settings {
+    /// Settings for tests and tools: the given clock, a 30-minute session
+    /// TTL, a 10-minute retry window.
+    pub fn with_clock(clock: Clock, id_secret: Vec<u8>) -> Settings {
+        Settings {
+            clock,
+            session_ttl: Duration::from_secs(1800),
+            retry_window: Duration::from_secs(600),
+            id_secret,
+        }
+    }
+}
+
+/// How often a turn is redone when another message from the same reader
+/// saved first. Each redo sees the other's update, so only a burst of this
+/// many simultaneous messages from one reader can exhaust it.
+const SAVE_ATTEMPTS: u32 = 16;
+
+/// One message as it arrives.
+#[derive(Debug, Clone, Copy)]
+pub struct Incoming<'a> {
+    /// The reader's id on the channel; hashed before use.
+    pub user: &'a str,
+    pub channel: &'a str,
+    pub text: &'a str,
+    /// The platform's id for the message; a retry carries the same one.
+    pub message_id: Option<&'a str>,
 }
 
 /// Why a message could not be handled. Reader mistakes are caught before
@@ -170,10 +203,16 @@ pub struct Settings {
 pub enum EngineError {
     #[error("unknown channel {0:?}; channels are chat and plain")]
     UnknownChannel(String),
+    /// The session store is needed (erasure) and cannot be reached.
+    #[error("{0}")]
+    Store(#[from] StoreError),
+    /// Too many messages from one reader at the same moment.
+    #[error("too many simultaneous messages from this reader; send again")]
+    Busy,
 }
 
 /// A handled message with the version facts answers can cite.
-#[derive(Debug, Clone, Serialize)]
+#[derive(Debug, Clone, Serialize, Deserialize)]
 pub struct Answer {
     #[serde(flatten)]
     pub reply: Reply,
@@ -184,6 +223,10 @@ pub struct Answer {
     /// Set when the session store could not be used: the reply was made
     /// without conversation context.
     pub degraded: bool,
+    /// Set when this is the stored reply to a message handled before (a
+    /// retry); not part of the reply body.
+    #[serde(skip)]
+    pub repeated: bool,
 }
 
 /// The shared engine handle.
@@ -246,28 +289,121 @@ impl Engine {
         format!("{channel}:{}", hex::encode(&digest[..16]))
     }
 
-    /// Handles one message from a reader.
+    /// The opaque key for a message id, scoped to the reader's key.
+    fn message_key(&self, id: &str) -> String {
+        let mut mac = Hmac::<Sha256>::new_from_slice(&self.settings.id_secret)
+            .expect("HMAC takes keys of any length");
+        mac.update(b"message\0");
+        mac.update(id.as_bytes());
+        hex::encode(&mac.finalize().into_bytes()[..12])
+    }
+
+    /// Handles one message with no message id (tools, tests).
     pub async fn handle(
         &self,
         user: &str,
         channel: &str,
         text: &str,
     ) -> Result<Answer, EngineError> {
-        let ch = Channel::parse(channel)
-            .ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
+        self.handle_message(Incoming {
+            user,
+            channel,
+            text,
+            message_id: None,
+        })
+        .await
+    }
+
+    /// Handles one message from a reader: loads the session, runs the turn
+    /// and saves the session with compare-and-set, redoing the turn if
+    /// another message from the same reader saved first. A message id seen
+    /// before gets its first reply back and changes nothing. When the store
+    /// cannot be reached the message is answered on its own, marked
+    /// `degraded`.
+    pub async fn handle_message(&self, m: Incoming<'_>) -> Result<Answer, EngineError> {
+        let ch = Channel::parse(m.channel)
+            .ok_or_else(|| EngineError::UnknownChannel(m.channel.to_string()))?;
+        let key = self.user_key(ch.name(), m.user);
+        let message = m.message_id.map(|id| self.message_key(id));
+        for attempt in 0..SAVE_ATTEMPTS {
+            let loaded = match self.store.load(&key, message.as_deref()).await {
+                Ok(l) => l,
+                Err(e) => {
+                    tracing::warn!(error = %e, "session store unavailable; answering without context");
+                    let (answer, _) = self.answer(ch, None, m.text, &key);
+                    return Ok(Answer {
+                        degraded: true,
+                        ..answer
+                    });
+                }
+            };
+            if let Some(earlier) = loaded.earlier_reply {
+                if let Some(a) = repeated(&earlier) {
+                    return Ok(a);
+                }
+            }
+            let (answer, session) = self.answer(ch, loaded.session, m.text, &key);
+            let body = message.as_ref().map(|_| serde_json::to_string(&answer));
+            let keep = match (&message, &body) {
+                (Some(message), Some(Ok(reply))) => Some(KeepReply {
+                    message,
+                    reply,
+                    ttl: self.settings.retry_window,
+                }),
+                _ => None,
+            };
+            match self
+                .store
+                .save(
+                    &key,
+                    &session,
+                    loaded.version,
+                    self.settings.session_ttl,
+                    keep,
+                )
+                .await
+            {
+                Ok(Saved::Stored) => return Ok(answer),
+                Ok(Saved::Answered(earlier)) => {
+                    if let Some(a) = repeated(&earlier) {
+                        return Ok(a);
+                    }
+                    return Ok(answer);
+                }
+                Ok(Saved::Conflict) => {
+                    tracing::debug!(attempt, "session changed meanwhile; redoing the turn");
+                    // A short random pause spreads out readers' bursts.
+                    let pause = rand::random_range(0..=(attempt as u64 + 1) * 2);
+                    tokio::time::sleep(Duration::from_millis(pause)).await;
+                }
+                Err(e) => {
+                    tracing::warn!(error = %e, "session not saved");
+                    return Ok(Answer {
+                        degraded: true,
+                        ..answer
+                    });
+                }
+            }
+        }
+        Err(EngineError::Busy)
+    }
+
+    /// Runs one turn against the current snapshot. A stored session from
+    /// another schema, or idle past the TTL, is not used.
+    fn answer(
+        &self,
+        ch: Channel,
+        stored: Option<Session>,
+        text: &str,
+        key: &str,
+    ) -> (Answer, Session) {
         let snap = self.snapshot();
         let now = self.now(&snap.data);
-        let key = self.user_key(ch.name(), user);
-        let mut degraded = false;
-        let session = match self.store.load(&key).await {
-            Ok(Some(s)) if s.schema == crate::dialogue::session::SCHEMA => s,
-            Ok(_) => Session::new(ch.name(), now.timestamp().as_second()),
-            Err(e) => {
-                tracing::warn!(error = %e, "session store unavailable; answering without context");
-                degraded = true;
-                Session::new(ch.name(), now.timestamp().as_second())
-            }
-        };
+        let now_s = now.timestamp().as_second();
+        let ttl = i64::try_from(self.settings.session_ttl.as_secs()).unwrap_or(i64::MAX);
+        let session = stored
+            .filter(|s| s.schema == SCHEMA && s.updated_at.saturating_add(ttl) >= now_s)
+            .unwrap_or_else(|| Session::new(ch.name(), now_s));
         let ctx = TurnContext {
             data: &snap.data,
             catalog: &snap.catalog,
@@ -277,17 +413,7 @@ impl Engine {
         };
         let (reply, session) = turn(&ctx, session, text);
         tracing::debug!(user = %key, intent = ?reply.intent, outcome = ?reply.outcome, "turn");
-        if !degraded {
-            if let Err(e) = self
-                .store
-                .save(&key, &session, self.settings.session_ttl)
-                .await
-            {
-                tracing::warn!(error = %e, "session not saved");
-                degraded = true;
-            }
-        }
-        Ok(Answer {
+        let answer = Answer {
             reply,
             channel: ch,
             dataset_version: snap.data.version,
@@ -297,7 +423,44 @@ impl Engine {
                 .to_zoned_datetime(snap.data.tz.clone())
                 .strftime("%Y-%m-%dT%H:%M:%S%:z")
                 .to_string(),
-            degraded,
-        })
+            degraded: false,
+            repeated: false,
+        };
+        (answer, session)
+    }
+
+    /// Removes everything kept for a reader on a channel.
+    pub async fn erase(&self, channel: &str, user: &str) -> Result<u64, EngineError> {
+        let ch = Channel::parse(channel)
+            .ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
+        let key = self.user_key(ch.name(), user);
+        let removed = self.store.erase(&key).await?;
+        tracing::info!(user = %key, removed, "reader's data erased");
+        Ok(removed)
+    }
+
+    /// The session store's name ("memory", "redis").
+    pub fn store_name(&self) -> &'static str {
+        self.store.name()
+    }
+
+    /// Whether the session store answers, and its name.
+    pub async fn store_status(&self) -> (&'static str, Result<(), StoreError>) {
+        (self.store.name(), self.store.ping().await)
+    }
+}
+
+/// A stored reply read back for a retried message. `None` if it no longer
+/// parses (written by an older version): the message is then handled anew.
+fn repeated(stored: &str) -> Option<Answer> {
+    match serde_json::from_str::<Answer>(stored) {
+        Ok(a) => Some(Answer {
+            repeated: true,
+            ..a
+        }),
+        Err(e) => {
+            tracing::warn!(error = %e, "stored reply unreadable; handling the message again");
+            None
+        }
     }
 }

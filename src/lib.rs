@@ -26,11 +26,7 @@
 //! use tidings::dialogue::MemoryStore;
 //!
 //! let snap = engine::load(&Sources::default()).unwrap();
-//! let settings = Settings {
-//!     clock: Clock::System,
-//!     session_ttl: std::time::Duration::from_secs(60),
-//!     id_secret: b"example".to_vec(),
-//! };
+//! let settings = Settings::with_clock(Clock::System, b"example".to_vec());
 //! let engine = Engine::new(snap, Arc::new(MemoryStore::new()), settings);
 //! let answer = engine.handle("reader-1", "chat", "hello").await.unwrap();
 //! assert!(!answer.reply.text.is_empty());

@@ -2,7 +2,7 @@
 //! times and lists of them. Each knows how it reads and how it sounds, so one
 //! reply template serves text and voice channels alike.
 
-use serde::Serialize;
+use serde::{Deserialize, Serialize};
 
 use super::words;
 
@@ -16,7 +16,7 @@ pub enum Style {
 }
 
 /// One value an operation produced.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(untagged)]
 pub enum Value {
     /// Running text, printed as is.

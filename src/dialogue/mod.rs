@@ -1,13 +1,20 @@
 //! Dialogue: one reader's conversation, turn by turn.
 //!
 //! - [`session`]: what is kept between messages;
-//! - [`store`]: where it is kept (the [`store::SessionStore`] trait);
+//! - [`store`]: where it is kept (the [`store::SessionStore`] trait and
+//!   the in-memory store);
+//! - [`redis_store`]: the store shared by replicas, in Redis;
+//! - [`context`]: what the conversation adds to a message (follow-ups,
+//!   pronouns, details carried over);
 //! - [`turn`]: one message in, one reply out, given the session.
 
+pub mod context;
+pub mod redis_store;
 pub mod session;
 pub mod store;
 pub mod turn;
 
+pub use redis_store::RedisStore;
 pub use session::Session;
-pub use store::{MemoryStore, SessionStore, StoreError};
+pub use store::{KeepReply, Loaded, MemoryStore, Saved, SessionStore, StoreError};
 pub use turn::{Outcome, Reply};

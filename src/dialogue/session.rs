@@ -13,7 +13,7 @@ use crate::dataset::{Dataset, EntityRef};
 
 /// Bumped whenever the stored shape changes, so older sessions are dropped
 /// instead of misread.
-pub const SCHEMA: u32 = 1;
+pub const SCHEMA: u32 = 2;
 
 /// An entity by kind and id: ids survive dataset updates, indexes do not.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
@@ -57,9 +57,10 @@ pub struct Session {
     #[serde(default)]
     pub last_slots: BTreeMap<String, StoredSlot>,
     pub pending: Option<Pending>,
-    /// Entities the last answers were about, most recent first.
+    /// Entities the last answers were about, most recent first: what "she",
+    /// "they" and "that race" can refer to.
     #[serde(default)]
-    pub recent: Vec<StoredEntity>,
+    pub recent: Vec<Recent>,
     /// Unix seconds.
     pub created_at: i64,
     pub updated_at: i64,
@@ -67,6 +68,30 @@ pub struct Session {
 
 /// How many recent entities are kept.
 pub const RECENT: usize = 8;
+
+/// How prominent a recent entity was in its turn, most prominent first:
+/// "she" means the person the reader asked about, else the answer's subject
+/// (the winner, the leader), and only then someone else the answer named.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize, Deserialize)]
+#[serde(rename_all = "snake_case")]
+pub enum Salience {
+    /// Named by the reader (a filled slot).
+    Asked,
+    /// The first of its kind the answer named.
+    Subject,
+    /// Named further on in the answer.
+    Mentioned,
+}
+
+/// An entity a recent turn was about.
+#[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
+pub struct Recent {
+    #[serde(flatten)]
+    pub entity: StoredEntity,
+    /// The turn it came up in.
+    pub turn: u64,
+    pub salience: Salience,
+}
 
 impl Session {
     /// A fresh session.
@@ -84,22 +109,46 @@ impl Session {
         }
     }
 
-    /// Adds entities to the front of the recent list.
-    pub fn remember(&mut self, data: &Dataset, entities: &[EntityRef]) {
-        let mut fresh: Vec<StoredEntity> =
-            entities.iter().map(|e| store_entity(data, *e)).collect();
-        fresh.dedup();
-        let mut rest: Vec<StoredEntity> = std::mem::take(&mut self.recent)
+    /// Puts this turn's entities at the front of the recent list: those
+    /// the reader `asked` about, then those the answer `mentioned` (the first
+    /// of each kind as its subject).
+    pub fn remember(&mut self, data: &Dataset, asked: &[EntityRef], mentioned: &[EntityRef]) {
+        let mut fresh: Vec<Recent> = Vec::new();
+        let mut kinds_seen: Vec<&'static str> = Vec::new();
+        let tagged = asked
+            .iter()
+            .map(|e| (*e, Salience::Asked))
+            .chain(mentioned.iter().map(|e| (*e, Salience::Mentioned)));
+        for (e, salience) in tagged {
+            let entity = store_entity(data, e);
+            if fresh.iter().any(|r| r.entity == entity) {
+                continue;
+            }
+            let kind = kind_name(e);
+            let salience = if salience == Salience::Mentioned && !kinds_seen.contains(&kind) {
+                Salience::Subject
+            } else {
+                salience
+            };
+            kinds_seen.push(kind);
+            fresh.push(Recent {
+                entity,
+                turn: self.turn,
+                salience,
+            });
+        }
+        let rest: Vec<Recent> = std::mem::take(&mut self.recent)
             .into_iter()
-            .filter(|e| !fresh.contains(e))
+            .filter(|r| !fresh.iter().any(|f| f.entity == r.entity))
             .collect();
-        fresh.append(&mut rest);
+        fresh.extend(rest);
         fresh.truncate(RECENT);
         self.recent = fresh;
     }
 }
 
-fn kind_name(e: EntityRef) -> &'static str {
+/// The stored name of an entity's kind.
+pub fn kind_name(e: EntityRef) -> &'static str {
     match e {
         EntityRef::Competitor(_) => "competitor",
         EntityRef::Group(_) => "group",

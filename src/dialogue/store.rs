@@ -1,5 +1,20 @@
 //! Where sessions live between messages, behind one trait so any replica can
 //! answer the next message when the store is shared.
+//!
+//! The contract every store keeps (checked by one test suite run against
+//! each implementation, `tests/store_contract.rs`):
+//!
+//! - a reader's data lives under one opaque key (`{channel}:{hmac}`), never
+//!   a raw id;
+//! - [`SessionStore::load`] reads the session, its version and the reply
+//!   already given to a message id, in one round trip;
+//! - [`SessionStore::save`] writes only if the version is still the one that
+//!   was loaded (compare-and-set), so two messages handled at once never
+//!   lose an update; and it keeps the reply under the message id unless one
+//!   is there already (set-if-absent), so a retried message gets the first
+//!   reply back;
+//! - sessions expire after an idle TTL, remembered replies after theirs;
+//! - [`SessionStore::erase`] removes everything kept for a reader.
 
 use std::collections::HashMap;
 use std::future::Future;
@@ -18,105 +33,216 @@ pub enum StoreError {
     /// The backend could not be reached or answered with an error.
     #[error("session store unavailable: {0}")]
     Unavailable(String),
-    /// Stored data could not be read back.
+    /// Stored data could not be read back or written.
     #[error("stored session unreadable: {0}")]
     Corrupt(String),
 }
 
-/// Session storage keyed by an opaque key (already hashed, never a raw id).
+/// What [`SessionStore::load`] found for a reader.
+#[derive(Debug, Clone, PartialEq, Default)]
+pub struct Loaded {
+    /// The session, if one is kept and readable. A session that no longer
+    /// parses counts as absent: the reader starts afresh instead of failing.
+    pub session: Option<Session>,
+    /// The version to pass back to [`SessionStore::save`]; 0 when nothing
+    /// is stored.
+    pub version: u64,
+    /// The reply already given to the message id asked about, as stored.
+    pub earlier_reply: Option<String>,
+}
+
+/// A reply to keep under a message id, for retries of that message.
+#[derive(Debug, Clone, Copy)]
+pub struct KeepReply<'a> {
+    /// The message id, already hashed.
+    pub message: &'a str,
+    /// The reply as it was sent.
+    pub reply: &'a str,
+    /// How long retries of the message are recognised.
+    pub ttl: Duration,
+}
+
+/// What [`SessionStore::save`] did.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum Saved {
+    /// The session (and the reply, if any) was stored.
+    Stored,
+    /// Someone else saved first: the version moved on. Nothing was written;
+    /// load again and redo the turn.
+    Conflict,
+    /// The message was answered meanwhile (a retry racing its original):
+    /// nothing was written and this is the reply given then.
+    Answered(String),
+}
+
+/// Session storage keyed by an opaque reader key (already hashed).
 pub trait SessionStore: Send + Sync + 'static {
-    /// The session under `key`, if present and not expired.
-    fn load<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<Option<Session>, StoreError>>;
-    /// Stores `session` under `key`, expiring after `ttl` without use.
+    /// The reader's session and version, and the reply kept under
+    /// `message` if that message was answered already.
+    fn load<'a>(
+        &'a self,
+        reader: &'a str,
+        message: Option<&'a str>,
+    ) -> BoxFuture<'a, Result<Loaded, StoreError>>;
+
+    /// Stores `session` if the stored version is still `expected`, with an
+    /// idle expiry of `ttl`, and keeps `reply` under its message id if none
+    /// is kept yet. Either everything is written or nothing.
     fn save<'a>(
         &'a self,
-        key: &'a str,
+        reader: &'a str,
         session: &'a Session,
+        expected: u64,
         ttl: Duration,
-    ) -> BoxFuture<'a, Result<(), StoreError>>;
-    /// Removes the session under `key`.
-    fn delete<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<(), StoreError>>;
+        reply: Option<KeepReply<'a>>,
+    ) -> BoxFuture<'a, Result<Saved, StoreError>>;
+
+    /// Removes everything kept for the reader: session and remembered
+    /// replies. Returns how many records were removed.
+    fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>>;
+
+    /// Whether the store answers right now.
+    fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>>;
+
     /// A short name for logs and status.
     fn name(&self) -> &'static str;
 }
 
 /// Sessions in this process's memory: the default when no shared store is
-/// configured. Expired sessions are dropped when touched and swept on save.
+/// configured. Expired records are dropped when touched and swept on save.
 #[derive(Debug, Default)]
 pub struct MemoryStore {
     // A std mutex: every critical section is a short map operation with no
-    // await inside, so an async mutex would only add cost.
-    inner: Mutex<HashMap<String, (Session, Instant)>>,
+    // await inside, so an async mutex would only add cost; holding it for
+    // the whole of `save` is what makes compare-and-set atomic.
+    inner: Mutex<Maps>,
+}
+
+#[derive(Debug, Default)]
+struct Maps {
+    sessions: HashMap<String, Kept>,
+    /// (reader, message) → reply.
+    replies: HashMap<(String, String), (String, Instant)>,
+}
+
+#[derive(Debug)]
+struct Kept {
+    session: Session,
+    version: u64,
+    expires: Instant,
 }
 
 impl MemoryStore {
+    /// An empty store.
     pub fn new() -> MemoryStore {
         MemoryStore::default()
     }
 
-    fn lock(&self) -> std::sync::MutexGuard<'_, HashMap<String, (Session, Instant)>> {
-        // A panic while holding the lock cannot leave the map half-written
-        // (every operation is a single insert or remove), so a poisoned
-        // lock is still safe to use.
+    fn lock(&self) -> std::sync::MutexGuard<'_, Maps> {
+        // A panic while holding the lock cannot leave the maps half-written
+        // (every operation is a few inserts or removes that cannot panic),
+        // so a poisoned lock is still safe to use.
         self.inner.lock().unwrap_or_else(|p| p.into_inner())
     }
 }
 
+impl Maps {
+    fn sweep(&mut self, now: Instant) {
+        self.sessions.retain(|_, k| k.expires > now);
+        self.replies.retain(|_, (_, exp)| *exp > now);
+    }
+
+    fn version(&self, reader: &str, now: Instant) -> u64 {
+        match self.sessions.get(reader) {
+            Some(k) if k.expires > now => k.version,
+            _ => 0,
+        }
+    }
+
+    fn reply(&self, reader: &str, message: &str, now: Instant) -> Option<String> {
+        self.replies
+            .get(&(reader.to_string(), message.to_string()))
+            .filter(|(_, exp)| *exp > now)
+            .map(|(r, _)| r.clone())
+    }
+}
+
 impl SessionStore for MemoryStore {
-    fn load<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<Option<Session>, StoreError>> {
+    fn load<'a>(
+        &'a self,
+        reader: &'a str,
+        message: Option<&'a str>,
+    ) -> BoxFuture<'a, Result<Loaded, StoreError>> {
         Box::pin(async move {
-            let mut map = self.lock();
-            match map.get(key) {
-                Some((s, expires)) if *expires > Instant::now() => Ok(Some(s.clone())),
-                Some(_) => {
-                    map.remove(key);
-                    Ok(None)
-                }
-                None => Ok(None),
-            }
+            let now = Instant::now();
+            let maps = self.lock();
+            let session = maps
+                .sessions
+                .get(reader)
+                .filter(|k| k.expires > now)
+                .map(|k| k.session.clone());
+            Ok(Loaded {
+                session,
+                version: maps.version(reader, now),
+                earlier_reply: message.and_then(|m| maps.reply(reader, m, now)),
+            })
         })
     }
 
     fn save<'a>(
         &'a self,
-        key: &'a str,
+        reader: &'a str,
         session: &'a Session,
+        expected: u64,
         ttl: Duration,
-    ) -> BoxFuture<'a, Result<(), StoreError>> {
+        reply: Option<KeepReply<'a>>,
+    ) -> BoxFuture<'a, Result<Saved, StoreError>> {
         Box::pin(async move {
             let now = Instant::now();
-            let mut map = self.lock();
-            map.retain(|_, (_, exp)| *exp > now);
-            map.insert(key.to_string(), (session.clone(), now + ttl));
-            Ok(())
+            let mut maps = self.lock();
+            maps.sweep(now);
+            if let Some(r) = reply {
+                if let Some(earlier) = maps.reply(reader, r.message, now) {
+                    return Ok(Saved::Answered(earlier));
+                }
+            }
+            if maps.version(reader, now) != expected {
+                return Ok(Saved::Conflict);
+            }
+            maps.sessions.insert(
+                reader.to_string(),
+                Kept {
+                    session: session.clone(),
+                    version: expected + 1,
+                    expires: now + ttl,
+                },
+            );
+            if let Some(r) = reply {
+                maps.replies.insert(
+                    (reader.to_string(), r.message.to_string()),
+                    (r.reply.to_string(), now + r.ttl),
+                );
+            }
+            Ok(Saved::Stored)
         })
     }
 
-    fn delete<'a>(&'a self, key: &'a str) -> BoxFuture<'a, Result<(), StoreError>> {
+    fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>> {
         Box::pin(async move {
-            self.lock().remove(key);
-            Ok(())
+            let mut maps = self.lock();
+            let mut removed = u64::from(maps.sessions.remove(reader).is_some());
+            let before = maps.replies.len();
+            maps.replies.retain(|(r, _), _| r != reader);
+            removed += (before - maps.replies.len()) as u64;
+            Ok(removed)
         })
+    }
+
+    fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>> {
+        Box::pin(async { Ok(()) })
     }
 
     fn name(&self) -> &'static str {
         "memory"
-    }
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-
-    #[tokio::test]
-    async fn sessions_expire_after_their_ttl() {
-        let store = MemoryStore::new();
-        let s = Session::new("chat", 0);
-        store.save("k", &s, Duration::from_millis(0)).await.unwrap();
-        assert_eq!(store.load("k").await.unwrap(), None);
-        store.save("k", &s, Duration::from_secs(60)).await.unwrap();
-        assert_eq!(store.load("k").await.unwrap(), Some(s));
-        store.delete("k").await.unwrap();
-        assert_eq!(store.load("k").await.unwrap(), None);
     }
 }

@@ -5,8 +5,9 @@
 use std::collections::{BTreeMap, HashMap};
 
 use jiff::ZonedDateTime;
-use serde::Serialize;
+use serde::{Deserialize, Serialize};
 
+use super::context;
 use super::session::{load_entity, load_slots, store_entity, store_slots, Pending, Session};
 use crate::answers::ops::{EntityKind, OpInput, OpOutput, OutcomeClass, SlotValue, Slots};
 use crate::answers::value::{Style, Value};
@@ -14,17 +15,17 @@ use crate::catalog::{Catalog, Intent};
 use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::Scored;
 use crate::understand::lexicon::Target;
-use crate::understand::slots::{fill, resolve_contest, sport_noun, Need};
+use crate::understand::slots::{fill, resolve_contest, sport_noun, Filled, Need};
 use crate::understand::{Analysis, Understanding};
 
 /// Below this score no intent is taken to be meant.
-pub const MIN_SCORE: f32 = 0.42;
+pub const MIN_SCORE: f32 = 0.45;
 /// Asking for a missing detail needs more certainty than answering: a
 /// question back to an off-topic message would only confuse.
 pub const MIN_SCORE_TO_ASK: f32 = 0.55;
 
 /// What kind of reply this is.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, serde::Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Outcome {
     /// A fact from the data.
@@ -38,7 +39,7 @@ pub enum Outcome {
 }
 
 /// A filled slot as shown in replies.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct SlotOut {
     pub kind: EntityKind,
     /// Stable id (entity id, ISO 8601 date, number).
@@ -48,7 +49,7 @@ pub struct SlotOut {
 }
 
 /// An option offered in a clarifying question.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct OptionOut {
     pub kind: String,
     pub id: String,
@@ -56,7 +57,7 @@ pub struct OptionOut {
 }
 
 /// The reply to one message.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct Reply {
     pub text: String,
     pub intent: Option<String>,
@@ -119,6 +120,21 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     }
 
     let best = a.scores.first();
+    // A variation of the last question ("and silver?") before anything else:
+    // read on its own it would fit no intent, or the wrong one.
+    if let Some((intent, carried)) = context::variation(ctx.data, ctx.catalog, &s, &a, best) {
+        let filled = fill(ctx.data, intent, &a, &carried);
+        let reply = proceed(
+            ctx,
+            &mut s,
+            intent,
+            filled.slots,
+            filled.need,
+            filled.certainty,
+            &a,
+        );
+        return (reply, s);
+    }
     let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
         return (not_understood(ctx, &a), s);
     };
@@ -126,7 +142,7 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         return (not_understood(ctx, &a), s);
     };
     let confidence = best.score.min(1.0);
-    let filled = fill(ctx.data, intent, &a, &Slots::new());
+    let filled = fill_in_context(ctx, &s, intent, &a);
     if matches!(filled.need, Some(Need::Missing { .. }))
         && best.score < MIN_SCORE_TO_ASK
         && a.mentions.is_empty()
@@ -146,6 +162,31 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     (reply, s)
 }
 
+/// Fills the intent's slots from the message, then from the conversation:
+/// pronouns first ("she"), then details the last question had and this one
+/// leaves out.
+fn fill_in_context(ctx: &TurnContext, s: &Session, intent: &Intent, a: &Analysis) -> Filled {
+    let mut carried = Slots::new();
+    let pointed = context::resolve_pointers(ctx.data, s, intent, a, &mut carried);
+    let mut filled = fill(ctx.data, intent, a, &carried);
+    if pointed.is_some() {
+        filled.need = pointed;
+        return filled;
+    }
+    // Each round fills one missing slot; an intent has only a few.
+    for _ in 0..intent.slots.len() {
+        let Some(Need::Missing { slot }) = &filled.need else {
+            break;
+        };
+        let Some(v) = context::carried_over(ctx.data, s, intent, slot, a) else {
+            break;
+        };
+        carried.insert(slot.clone(), v);
+        filled = fill(ctx.data, intent, a, &carried);
+    }
+    filled
+}
+
 /// Runs the intent, or asks for what is still needed.
 fn proceed(
     ctx: &TurnContext,
@@ -161,6 +202,7 @@ fn proceed(
             let def = intent
                 .slot(&slot)
                 .expect("fill only names the intent's slots");
+            remember_asked(ctx.data, s, &slots);
             s.pending = Some(Pending {
                 intent: intent.name.clone(),
                 slots: store_slots(ctx.data, &slots),
@@ -187,6 +229,7 @@ fn proceed(
                 format!("I could not find a {what} event in the results.")
             };
             s.last_intent = Some(intent.name.clone());
+            s.last_slots = store_slots(ctx.data, &slots);
             plain_reply(text, Outcome::NoData, Some(intent), confidence, a)
         }
         None => run(ctx, s, intent, slots, confidence, a),
@@ -210,6 +253,7 @@ fn ask_choice(
     values.insert("options".to_string(), Value::from(labels.clone()));
     values.insert("noun".to_string(), Value::Text(noun.to_string()));
     let text = ctx.catalog.service.choose.render(&values, ctx.style);
+    remember_asked(ctx.data, s, &slots);
     s.pending = Some(Pending {
         intent: intent.name.clone(),
         slots: store_slots(ctx.data, &slots),
@@ -231,6 +275,15 @@ fn ask_choice(
         })
         .collect();
     r
+}
+
+/// What the reader named is worth pointing back at even while a detail is
+/// still asked for ("did A beat B?" … "when does she race next?").
+fn remember_asked(data: &Dataset, s: &mut Session, slots: &Slots) {
+    let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
+    if !asked.is_empty() {
+        s.remember(data, &asked, &[]);
+    }
 }
 
 fn run(
@@ -286,10 +339,8 @@ fn run(
                 .unwrap_or_default();
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);
-            let mut remembered: Vec<EntityRef> =
-                slots.values().filter_map(SlotValue::entity).collect();
-            remembered.extend(mentioned);
-            s.remember(ctx.data, &remembered);
+            let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
+            s.remember(ctx.data, &asked, &mentioned);
             let class = match spec.class {
                 OutcomeClass::Answered => Outcome::Answered,
                 OutcomeClass::NoData => Outcome::NoData,

@@ -64,10 +64,19 @@ impl From<JsonRejection> for ApiError {
 
 impl From<crate::engine::EngineError> for ApiError {
     fn from(e: crate::engine::EngineError) -> ApiError {
+        use crate::engine::EngineError;
         match e {
-            crate::engine::EngineError::UnknownChannel(_) => {
-                ApiError::invalid("unknown_channel", e.to_string())
-            }
+            EngineError::UnknownChannel(_) => ApiError::invalid("unknown_channel", e.to_string()),
+            EngineError::Store(_) => ApiError {
+                status: StatusCode::SERVICE_UNAVAILABLE,
+                code: "store_unavailable",
+                message: "the session store cannot be reached; try again shortly".into(),
+            },
+            EngineError::Busy => ApiError {
+                status: StatusCode::SERVICE_UNAVAILABLE,
+                code: "busy",
+                message: e.to_string(),
+            },
         }
     }
 }

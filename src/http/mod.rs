@@ -1,4 +1,6 @@
-//! The HTTP API: `POST /v1/messages` and `GET /healthz`.
+//! The HTTP API: `POST /v1/messages`, `DELETE /v1/users/{channel}/{user}`,
+//! `GET /healthz` (the process is up) and `GET /readyz` (and its session
+//! store answers).
 //!
 //! Errors come back as `{"error": {"code", "message"}}`; a reader's mistake
 //! is never a 500.
@@ -8,10 +10,10 @@ mod error;
 use std::future::Future;
 use std::time::Duration;
 
-use axum::extract::{DefaultBodyLimit, FromRequest, MatchedPath, Request, State};
+use axum::extract::{DefaultBodyLimit, FromRequest, MatchedPath, Path, Request, State};
 use axum::http::StatusCode;
 use axum::response::IntoResponse;
-use axum::routing::{get, post};
+use axum::routing::{delete, get, post};
 use axum::{Json, Router};
 use serde::Deserialize;
 use serde_json::json;
@@ -21,7 +23,7 @@ use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
 
-use crate::engine::Engine;
+use crate::engine::{Engine, Incoming};
 
 /// Largest request body accepted.
 pub const MAX_BODY: usize = 16 * 1024;
@@ -70,9 +72,61 @@ async fn messages(
             format!("text must be at most {MAX_TEXT} characters"),
         ));
     }
+    if let Some(id) = &m.message_id {
+        if id.is_empty() || id.chars().count() > 200 {
+            return Err(ApiError::invalid(
+                "bad_message_id",
+                "message_id must be 1 to 200 characters",
+            ));
+        }
+    }
     let channel = m.channel.as_deref().unwrap_or("chat");
-    let answer = engine.handle(&m.user, channel, text).await?;
-    Ok(Json(answer))
+    let answer = engine
+        .handle_message(Incoming {
+            user: &m.user,
+            channel,
+            text,
+            message_id: m.message_id.as_deref(),
+        })
+        .await?;
+    // A retry gets the first reply; the header tells the client so.
+    let repeated = [(
+        "tidings-repeated",
+        if answer.repeated { "true" } else { "false" },
+    )];
+    Ok((repeated, Json(answer)))
+}
+
+/// Erases everything kept for a reader: 204 whether or not anything was
+/// kept, so the answer does not reveal whether the reader ever wrote.
+async fn erase_user(
+    State(engine): State<Engine>,
+    Path((channel, user)): Path<(String, String)>,
+) -> Result<StatusCode, ApiError> {
+    if user.is_empty() {
+        return Err(ApiError::invalid("empty_user", "user must not be empty"));
+    }
+    engine.erase(&channel, &user).await?;
+    Ok(StatusCode::NO_CONTENT)
+}
+
+/// Ready when the session store answers. When it does not, replies still
+/// go out (without conversation context, marked `degraded`), so this says
+/// so with a 200 and `"status": "degraded"` rather than a 503: every replica
+/// shares the store, and a 503 would take all of them out of the load
+/// balancer at once.
+async fn readyz(State(engine): State<Engine>) -> impl IntoResponse {
+    let (store, status) = engine.store_status().await;
+    let snap = engine.snapshot();
+    let (status, sessions) = match status {
+        Ok(()) => ("ready", "ok".to_string()),
+        Err(e) => ("degraded", e.to_string()),
+    };
+    Json(json!({
+        "status": status,
+        "sessions": { "store": store, "status": sessions },
+        "dataset_version": snap.data.version,
+    }))
 }
 
 async fn healthz(State(engine): State<Engine>) -> impl IntoResponse {
@@ -94,7 +148,9 @@ async fn not_found() -> ApiError {
 pub fn app(engine: Engine) -> Router {
     Router::new()
         .route("/v1/messages", post(messages))
+        .route("/v1/users/{channel}/{user}", delete(erase_user))
         .route("/healthz", get(healthz))
+        .route("/readyz", get(readyz))
         .fallback(not_found)
         .with_state(engine)
         // Layers run outside-in: the trace span wraps everything, then the

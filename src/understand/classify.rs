@@ -10,7 +10,7 @@
 
 use std::collections::HashMap;
 
-use serde::Serialize;
+use serde::{Deserialize, Serialize};
 
 /// A word or placeholder id in the scorer's vocabulary.
 type Tok = u32;
@@ -38,7 +38,7 @@ pub struct Classifier {
 }
 
 /// One intent's score and why.
-#[derive(Debug, Clone, Serialize, PartialEq)]
+#[derive(Debug, Clone, Serialize, Deserialize, PartialEq)]
 pub struct Scored {
     pub intent: String,
     pub score: f32,

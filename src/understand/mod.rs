@@ -132,6 +132,22 @@ fn merge_events(tokens: Vec<String>) -> Vec<String> {
     out
 }
 
+/// A word that points back at someone or something ("she", "that race"),
+/// scored as the kind of name it stands for: "when does she race next" is
+/// asked like "when does <competitor> race next". Which one it means is the
+/// dialogue's business. Returns the placeholder and how many tokens it spans.
+fn pointer_at(toks: &[&str], i: usize) -> Option<(&'static str, usize)> {
+    match toks[i] {
+        "she" | "he" | "her" | "him" | "his" | "hers" => Some(("<competitor>", 1)),
+        "it" => Some(("<event>", 1)),
+        "that" | "this" => match toks.get(i + 1) {
+            Some(&("race" | "event" | "final" | "contest" | "heat")) => Some(("<event>", 2)),
+            _ => None,
+        },
+        _ => None,
+    }
+}
+
 impl Understanding {
     /// Builds the lexicon and scorer for a dataset and catalog.
     pub fn build(data: &Dataset, catalog: &Catalog) -> Understanding {
@@ -213,6 +229,9 @@ impl Understanding {
             } else if let Some((_, e, _)) = count.filter(|c| c.0 == i) {
                 abstracted.push("<count>".into());
                 i = e;
+            } else if let Some((kind, len)) = pointer_at(&toks, i) {
+                abstracted.push(kind.into());
+                i += len;
             } else {
                 abstracted.push(toks[i].to_string());
                 i += 1;

@@ -15,11 +15,8 @@ pub const NOW: &str = "2027-08-14T21:10:00+01:00";
 /// An engine over the built-in demo with in-memory sessions.
 pub fn demo_engine() -> Engine {
     let snap = engine::load(&Sources::default()).expect("the demo loads");
-    let settings = Settings {
-        clock: Clock::Fixed(NOW.parse().unwrap()),
-        session_ttl: Duration::from_secs(1800),
-        id_secret: b"test-secret".to_vec(),
-    };
+    let settings =
+        Settings::with_clock(Clock::Fixed(NOW.parse().unwrap()), b"test-secret".to_vec());
     Engine::new(snap, Arc::new(MemoryStore::new()), settings)
 }
 
@@ -64,5 +61,113 @@ impl Server {
             .unwrap();
         let status = r.status().as_u16();
         (status, r.json().await.unwrap())
+    }
+}
+
+/// The private Redis started by `tests/run.sh`. Tests that need it fail
+/// loudly when it is missing: they never skip silently.
+pub fn redis_url() -> String {
+    std::env::var("TIDINGS_TEST_REDIS_URL").unwrap_or_else(|_| {
+        panic!("TIDINGS_TEST_REDIS_URL is not set: run the tests with `bash tests/run.sh`, which starts a private redis-server")
+    })
+}
+
+/// A key prefix of its own for one test, so tests share one Redis safely.
+pub fn test_prefix(name: &str) -> String {
+    format!("tidings-test:{name}:{:016x}:", rand::random::<u64>())
+}
+
+/// An engine over the demo with the given store and settings.
+pub fn engine_with(store: Arc<dyn tidings::dialogue::SessionStore>, settings: Settings) -> Engine {
+    let snap = engine::load(&Sources::default()).expect("the demo loads");
+    Engine::new(snap, store, settings)
+}
+
+/// The demo test settings: fixed clock, fixed secret.
+pub fn test_settings() -> Settings {
+    Settings::with_clock(Clock::Fixed(NOW.parse().unwrap()), b"test-secret".to_vec())
+}
+
+/// An engine over the demo with sessions in Redis under `prefix`.
+pub fn redis_engine(prefix: &str) -> (Engine, Arc<tidings::dialogue::RedisStore>) {
+    let store = Arc::new(
+        tidings::dialogue::RedisStore::new(&redis_url(), prefix).expect("the Redis URL parses"),
+    );
+    (engine_with(store.clone(), test_settings()), store)
+}
+
+/// A plain Redis connection for inspecting what the service stored.
+pub async fn redis_conn() -> redis::aio::MultiplexedConnection {
+    redis::Client::open(redis_url())
+        .unwrap()
+        .get_multiplexed_async_connection()
+        .await
+        .unwrap_or_else(|e| panic!("cannot reach the test Redis at {}: {e}", redis_url()))
+}
+
+/// Every key under a prefix (SCAN, never KEYS).
+pub async fn keys_under(prefix: &str) -> Vec<String> {
+    let mut conn = redis_conn().await;
+    let mut cursor: u64 = 0;
+    let mut keys = Vec::new();
+    loop {
+        let (next, batch): (u64, Vec<String>) = redis::cmd("SCAN")
+            .arg(cursor)
+            .arg("MATCH")
+            .arg(format!("{prefix}*"))
+            .arg("COUNT")
+            .arg(1000)
+            .query_async(&mut conn)
+            .await
+            .unwrap();
+        keys.extend(batch);
+        if next == 0 {
+            return keys;
+        }
+        cursor = next;
+    }
+}
+
+/// A message with optional id, as a chat platform sends it.
+pub async fn post_message(
+    s: &Server,
+    user: &str,
+    text: &str,
+    message_id: Option<&str>,
+) -> (u16, serde_json::Value, bool) {
+    let mut body = serde_json::json!({"user": user, "text": text});
+    if let Some(id) = message_id {
+        body["message_id"] = serde_json::json!(id);
+    }
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&body)
+        .send()
+        .await
+        .unwrap();
+    let status = r.status().as_u16();
+    let repeated = r
+        .headers()
+        .get("tidings-repeated")
+        .is_some_and(|v| v == "true");
+    (status, r.json().await.unwrap(), repeated)
+}
+
+/// Waits for `check` to hold, polling; panics with `what` after `limit`.
+pub async fn wait_until<F, Fut>(what: &str, limit: Duration, mut check: F)
+where
+    F: FnMut() -> Fut,
+    Fut: std::future::Future<Output = bool>,
+{
+    let deadline = tokio::time::Instant::now() + limit;
+    loop {
+        if check().await {
+            return;
+        }
+        if tokio::time::Instant::now() > deadline {
+            panic!("timed out waiting for {what}");
+        }
+        tokio::time::sleep(Duration::from_millis(25)).await;
     }
 }

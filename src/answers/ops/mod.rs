@@ -31,7 +31,7 @@ use crate::answers::value::Value;
 use crate::dataset::{Dataset, EntityRef};
 
 /// What a slot holds.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, serde::Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum EntityKind {
     Competitor,

@@ -42,7 +42,10 @@ pub static SPEC: OpSpec = OpSpec {
                 "next",
             ],
         ),
-        no_data("nothing_yet", &["name", "group", "sport_noun", "live", "next"]),
+        no_data(
+            "nothing_yet",
+            &["name", "group", "sport_noun", "live", "next"],
+        ),
     ],
     run,
 };

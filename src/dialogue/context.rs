@@ -1,0 +1,358 @@
+//! What the conversation so far adds to a message: the follow-up that
+//! changes one detail of the last question ("and silver?", "what about the
+//! women's?", "how about Sordavia?"), the pronoun that points back at
+//! someone ("when does she race next?"), and the detail a new question
+//! leaves out because it was just talked about ("who got bronze?").
+//!
+//! Context only ever comes from the reader's own live session (it expires
+//! with it) and is only used where the message leaves a gap; when it points
+//! at more than one thing the reader is asked, never guessed for.
+
+use crate::answers::ops::{EntityKind, SlotValue, Slots};
+use crate::catalog::{Catalog, Intent};
+use crate::dataset::{Dataset, EntityRef};
+use crate::understand::classify::Scored;
+use crate::understand::lexicon::Target;
+use crate::understand::slots::{resolve_contest, Need, MAX_OPTIONS};
+use crate::understand::Analysis;
+
+use super::session::{load_entity, load_slots, Session};
+
+/// Openings that mark a message as a variation of the last question.
+const CUES: &[&[&str]] = &[
+    &["and", "what", "about"],
+    &["and", "how", "about"],
+    &["what", "about"],
+    &["how", "about"],
+    &["what", "of"],
+    &["same", "for"],
+    &["and", "for"],
+    &["and", "in"],
+    &["and"],
+];
+
+/// Above this score a message is its own question even if it opens with
+/// "and": "and when does she race next?" asks something new.
+const OWN_QUESTION: f32 = 0.75;
+
+/// Longest message (in words) read as a bare fragment ("silver?", "the
+/// women's") when it has no cue.
+const FRAGMENT: usize = 4;
+
+/// Whether the message opens with a follow-up cue.
+pub fn has_cue(a: &Analysis) -> bool {
+    CUES.iter().any(|cue| {
+        a.tokens.len() >= cue.len() && a.tokens.iter().zip(cue.iter()).all(|(t, c)| t == c)
+    })
+}
+
+/// The kinds of slot a message gives a value for.
+fn touched(a: &Analysis) -> Vec<EntityKind> {
+    let mut kinds = Vec::new();
+    for m in &a.mentions {
+        let Some((t, _)) = m.candidates.first() else {
+            continue;
+        };
+        let k = match t {
+            Target::Entity(EntityRef::Competitor(_), _) => EntityKind::Competitor,
+            Target::Entity(EntityRef::Group(_), _) => EntityKind::Group,
+            Target::Entity(EntityRef::Sport(_), _) | Target::SportNoun(_) => EntityKind::Sport,
+            Target::Entity(EntityRef::Discipline(..) | EntityRef::Contest(_), _) => {
+                EntityKind::Contest
+            }
+            // A category or a phase on its own changes the event.
+            Target::Category(_) | Target::Phase(_) => EntityKind::Contest,
+            Target::Award(_) => EntityKind::Award,
+        };
+        if !kinds.contains(&k) {
+            kinds.push(k);
+        }
+    }
+    if !a.days.is_empty() {
+        kinds.push(EntityKind::Date);
+    }
+    if a.count.is_some() {
+        kinds.push(EntityKind::Count);
+    }
+    kinds
+}
+
+/// Whether an intent has a slot that takes values of `kind`. A category or
+/// sport can also go into an event slot ("what about the women's?").
+fn takes(intent: &Intent, kind: EntityKind) -> bool {
+    intent.slots.iter().any(|d| {
+        d.kind == kind
+            || (kind == EntityKind::Contest && d.kind == EntityKind::Category)
+            || (kind == EntityKind::Sport && d.kind == EntityKind::Contest)
+    })
+}
+
+/// A variation of the last question: its intent and its slots, with the
+/// ones the message changes taken out (or, for the event, already
+/// replaced), so filling from the message completes them. `None` when the
+/// message is not read as a variation.
+pub fn variation<'c>(
+    data: &Dataset,
+    catalog: &'c Catalog,
+    s: &Session,
+    a: &Analysis,
+    best: Option<&Scored>,
+) -> Option<(&'c Intent, Slots)> {
+    let last = catalog.intent(s.last_intent.as_deref()?)?;
+    let kinds = touched(a);
+    if kinds.is_empty() || !kinds.iter().all(|k| takes(last, *k)) {
+        return None;
+    }
+    let best_score = best.map(|b| b.score).unwrap_or(0.0);
+    let same_intent = best.is_some_and(|b| b.intent == last.name);
+    let cue = has_cue(a);
+    let fragment = a.tokens.len() <= FRAGMENT && best_score < super::turn::MIN_SCORE;
+    if !(cue && (best_score < OWN_QUESTION || same_intent) || fragment) {
+        return None;
+    }
+    let mut slots = load_slots(data, &s.last_slots);
+    for def in &last.slots {
+        let changed = kinds.contains(&def.kind)
+            || (def.kind == EntityKind::Category && kinds.contains(&EntityKind::Contest));
+        if changed {
+            slots.remove(&def.name);
+        }
+    }
+    if kinds.contains(&EntityKind::Contest) {
+        let old = s.last_slots.iter().find_map(|(name, v)| match v {
+            super::session::StoredSlot::Entity { entity } if entity.kind == "contest" => {
+                Some((name.clone(), load_entity(data, entity)?))
+            }
+            _ => None,
+        });
+        if let Some((name, EntityRef::Contest(old))) = old {
+            if let Some(ci) = varied_contest(data, old, a) {
+                slots.insert(
+                    name,
+                    SlotValue::Entity {
+                        entity: EntityRef::Contest(ci),
+                    },
+                );
+            }
+        }
+    }
+    Some((last, slots))
+}
+
+/// The event a follow-up means, given the last one: a new event named in
+/// full, or the last one with its category or phase changed ("the women's",
+/// "in the final"). `None` leaves it to slot filling, which asks when
+/// several fit and says so when none does.
+fn varied_contest(data: &Dataset, old: usize, a: &Analysis) -> Option<usize> {
+    let oc = &data.contests[old];
+    let pick_like_old = |options: &[usize]| -> Option<usize> {
+        // Several events fit the new words: keep those like the last one.
+        let same_cat: Vec<usize> = options
+            .iter()
+            .copied()
+            .filter(|&ci| data.contests[ci].category == oc.category)
+            .collect();
+        match same_cat.as_slice() {
+            [one] => Some(*one),
+            _ => None,
+        }
+    };
+    match resolve_contest(data, a, &Slots::new()) {
+        Ok(Some(ci)) => return Some(ci),
+        Err(Some(options)) => {
+            let cis: Vec<usize> = options
+                .iter()
+                .filter_map(|e| match e {
+                    EntityRef::Contest(ci) => Some(*ci),
+                    _ => None,
+                })
+                .collect();
+            return pick_like_old(&cis);
+        }
+        Err(None) => return None,
+        Ok(None) => {}
+    }
+    // Only a category or a phase was named: the same discipline with that
+    // changed, everything else as before.
+    let mut category = oc.category.clone();
+    let mut phase: Option<String> = None;
+    for m in &a.mentions {
+        match m.candidates.first() {
+            Some((Target::Category(c), _)) => category = Some(c.clone()),
+            Some((Target::Phase(p), _)) => phase = Some(p.clone()),
+            _ => {}
+        }
+    }
+    let disc = data.discipline_ref(old);
+    let fits: Vec<usize> = (0..data.contests.len())
+        .filter(|&ci| {
+            let c = &data.contests[ci];
+            data.discipline_ref(ci) == disc
+                && c.category == category
+                && match &phase {
+                    Some(p) => c.phase == *p || c.phase.starts_with(&format!("{p} ")),
+                    None => c.phase == oc.phase,
+                }
+        })
+        .collect();
+    match fits.as_slice() {
+        [one] => Some(*one),
+        _ => None,
+    }
+}
+
+/// What a word in the message points back at.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+enum Pointer {
+    /// "she", "her": a woman competitor.
+    She,
+    /// "he", "him": a man competitor.
+    He,
+    /// "they", "them": a group, or a competitor of any category.
+    They,
+    /// "that race", "it": an event.
+    That,
+}
+
+fn pointers(a: &Analysis) -> Vec<Pointer> {
+    let mut out = Vec::new();
+    for (i, t) in a.tokens.iter().enumerate() {
+        let p = match t.as_str() {
+            "she" | "her" | "hers" | "herself" => Some(Pointer::She),
+            "he" | "him" | "his" | "himself" => Some(Pointer::He),
+            "they" | "them" | "their" | "theirs" | "themselves" => Some(Pointer::They),
+            "it" | "its" => Some(Pointer::That),
+            "that" | "this" | "same" => a
+                .tokens
+                .get(i + 1)
+                .filter(|n| {
+                    matches!(
+                        n.as_str(),
+                        "race" | "event" | "final" | "contest" | "heat" | "match" | "game"
+                    )
+                })
+                .map(|_| Pointer::That),
+            _ => None,
+        };
+        if let Some(p) = p {
+            if !out.contains(&p) {
+                out.push(p);
+            }
+        }
+    }
+    out
+}
+
+/// What recent entity a pointer of the right kind means: those of the
+/// latest turn that had any, most salient first. Several means the reader
+/// must say which.
+fn referents(data: &Dataset, s: &Session, kind: EntityKind, p: Pointer) -> Vec<EntityRef> {
+    let fits = |e: EntityRef| match (kind, e, p) {
+        (EntityKind::Competitor, EntityRef::Competitor(i), Pointer::She) => {
+            data.competitors[i].category.as_deref() != Some("men")
+        }
+        (EntityKind::Competitor, EntityRef::Competitor(i), Pointer::He) => {
+            data.competitors[i].category.as_deref() != Some("women")
+        }
+        (EntityKind::Competitor, EntityRef::Competitor(_), Pointer::They) => true,
+        (EntityKind::Group, EntityRef::Group(_), Pointer::They) => true,
+        (EntityKind::Contest, EntityRef::Contest(_), Pointer::That) => true,
+        _ => false,
+    };
+    let found: Vec<(EntityRef, u64, super::session::Salience)> = s
+        .recent
+        .iter()
+        .filter_map(|r| {
+            let e = load_entity(data, &r.entity)?;
+            fits(e).then_some((e, r.turn, r.salience))
+        })
+        .collect();
+    let Some(turn) = found.iter().map(|f| f.1).max() else {
+        return vec![];
+    };
+    let Some(top) = found.iter().filter(|f| f.1 == turn).map(|f| f.2).min() else {
+        return vec![];
+    };
+    found
+        .iter()
+        .filter(|f| f.1 == turn && f.2 == top)
+        .map(|f| f.0)
+        .take(MAX_OPTIONS)
+        .collect()
+}
+
+/// Fills the intent's open slots that a pronoun in the message points at.
+/// Returns a question when a pronoun fits several recent entities.
+pub fn resolve_pointers(
+    data: &Dataset,
+    s: &Session,
+    intent: &Intent,
+    a: &Analysis,
+    slots: &mut Slots,
+) -> Option<Need> {
+    let ps = pointers(a);
+    if ps.is_empty() {
+        return None;
+    }
+    let named = touched(a);
+    for def in &intent.slots {
+        if slots.contains_key(&def.name) || named.contains(&def.kind) {
+            continue;
+        }
+        let wanted: &[Pointer] = match def.kind {
+            EntityKind::Competitor => &[Pointer::She, Pointer::He, Pointer::They],
+            EntityKind::Group => &[Pointer::They],
+            EntityKind::Contest => &[Pointer::That],
+            _ => &[],
+        };
+        let Some(p) = ps.iter().find(|p| wanted.contains(p)) else {
+            continue;
+        };
+        match referents(data, s, def.kind, *p).as_slice() {
+            [] => {}
+            [one] => {
+                slots.insert(def.name.clone(), SlotValue::Entity { entity: *one });
+            }
+            many => {
+                return Some(Need::Choose {
+                    slot: def.name.clone(),
+                    options: many.to_vec(),
+                })
+            }
+        }
+    }
+    None
+}
+
+/// A value for a required slot the message left out, from the last
+/// question's slots of the same kind: "who got bronze?" right after the
+/// 400 m means the 400 m. Only one value of that kind may fit.
+///
+/// An event carried over takes the category or round the message names:
+/// "who is leading the men's?" right after the women's high jump means the
+/// men's high jump, never the women's.
+pub fn carried_over(
+    data: &Dataset,
+    s: &Session,
+    intent: &Intent,
+    slot: &str,
+    a: &Analysis,
+) -> Option<SlotValue> {
+    let def = intent.slot(slot)?;
+    let last = load_slots(data, &s.last_slots);
+    let mut same_kind = last.values().filter(|v| v.kind() == def.kind);
+    let v = same_kind.next()?;
+    if same_kind.next().is_some() {
+        return None;
+    }
+    match v {
+        SlotValue::Entity {
+            entity: EntityRef::Contest(old),
+        } if touched(a).contains(&EntityKind::Contest) => {
+            varied_contest(data, *old, a).map(|ci| SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            })
+        }
+        other => Some(other.clone()),
+    }
+}
