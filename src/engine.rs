@@ -435,7 +435,9 @@ impl Engine {
             .ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
         let key = self.user_key(ch.name(), user);
         let removed = self.store.erase(&key).await?;
-        tracing::info!(user = %key, removed, "reader's data erased");
+        // Erasures are worth an info line; which reader only at debug.
+        tracing::info!(removed, "reader's data erased");
+        tracing::debug!(user = %key, "erased reader");
         Ok(removed)
     }
 
