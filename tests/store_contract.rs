@@ -8,6 +8,8 @@
 //! did. Every test uses its own random key prefix, so tests run in
 //! parallel (and against a shared server) without seeing each other.
 
+mod common;
+
 use std::collections::BTreeSet;
 use std::sync::Arc;
 use std::time::{Duration, Instant};
@@ -364,26 +366,9 @@ async fn inspector() -> redis::aio::MultiplexedConnection {
         .unwrap_or_else(|e| panic!("no redis at TIDINGS_TEST_REDIS_URL ({e}): {HOW}"))
 }
 
-/// Every key matching `pattern`, by `SCAN` to the end.
-async fn scan(con: &mut redis::aio::MultiplexedConnection, pattern: &str) -> BTreeSet<String> {
-    let mut keys = BTreeSet::new();
-    let mut cursor: u64 = 0;
-    loop {
-        let (next, batch): (u64, Vec<String>) = redis::cmd("SCAN")
-            .arg(cursor)
-            .arg("MATCH")
-            .arg(pattern)
-            .arg("COUNT")
-            .arg(1000)
-            .query_async(con)
-            .await
-            .unwrap();
-        keys.extend(batch);
-        if next == 0 {
-            return keys;
-        }
-        cursor = next;
-    }
+/// Every key matching `pattern`.
+async fn scan(pattern: &str) -> BTreeSet<String> {
+    common::keys_matching(pattern).await.into_iter().collect()
 }
 
 async fn pttl(con: &mut redis::aio::MultiplexedConnection, key: &str) -> i64 {
@@ -420,7 +405,7 @@ async fn redis_keys_live_under_the_prefix_with_the_reader_as_hash_tag() {
         format!("{p}{{{reader}}}:ms"),
     ]
     .into();
-    assert_eq!(scan(&mut con, &format!("{p}*")).await, expected);
+    assert_eq!(scan(&format!("{p}*")).await, expected);
 
     let session_key = format!("{p}{{{reader}}}:s");
     let (version, json): (String, String) = redis::cmd("HMGET")
@@ -492,7 +477,6 @@ async fn redis_expires_the_session_after_its_ttl_and_replies_after_theirs() {
 #[tokio::test]
 async fn redis_erase_leaves_no_key_of_the_reader() {
     let store = redis_store().await;
-    let mut con = inspector().await;
     let reader = new_reader();
     let other = new_reader();
     let p = store.prefix().to_string();
@@ -507,14 +491,11 @@ async fn redis_erase_leaves_no_key_of_the_reader() {
             .unwrap();
     }
     assert_eq!(store.erase(&reader).await.unwrap(), 3);
-    assert_eq!(
-        scan(&mut con, &format!("{p}{{{reader}}}*")).await,
-        BTreeSet::new()
-    );
+    assert_eq!(scan(&format!("{p}{{{reader}}}*")).await, BTreeSet::new());
     // The other reader keeps session, two replies and the index.
-    assert_eq!(scan(&mut con, &format!("{p}*")).await.len(), 4);
+    assert_eq!(scan(&format!("{p}*")).await.len(), 4);
     store.erase(&other).await.unwrap();
-    assert_eq!(scan(&mut con, &format!("{p}*")).await, BTreeSet::new());
+    assert_eq!(scan(&format!("{p}*")).await, BTreeSet::new());
 }
 
 #[tokio::test]

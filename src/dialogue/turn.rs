@@ -122,34 +122,28 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     let best = a.scores.first();
     // A variation of the last question ("and silver?") before anything else:
     // read on its own it would fit no intent, or the wrong one.
-    if let Some((intent, carried)) = context::variation(ctx.data, ctx.catalog, &s, &a, best) {
-        let filled = fill(ctx.data, intent, &a, &carried);
-        let reply = proceed(
-            ctx,
-            &mut s,
-            intent,
-            filled.slots,
-            filled.need,
-            filled.certainty,
-            &a,
-        );
-        return (reply, s);
-    }
-    let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
-        return (not_understood(ctx, &a), s);
-    };
-    let Some(intent) = ctx.catalog.intent(&best.intent) else {
-        return (not_understood(ctx, &a), s);
-    };
-    let confidence = best.score.min(1.0);
-    let filled = fill_in_context(ctx, &s, intent, &a);
-    if matches!(filled.need, Some(Need::Missing { .. }))
-        && best.score < MIN_SCORE_TO_ASK
-        && a.mentions.is_empty()
-    {
-        return (not_understood(ctx, &a), s);
-    }
-    let confidence = confidence * filled.certainty;
+    let (intent, filled, confidence) =
+        if let Some((intent, carried)) = context::variation(ctx.data, ctx.catalog, &s, &a, best) {
+            let filled = fill(ctx.data, intent, &a, &carried);
+            let confidence = filled.certainty;
+            (intent, filled, confidence)
+        } else {
+            let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
+                return (not_understood(ctx, &a), s);
+            };
+            let Some(intent) = ctx.catalog.intent(&best.intent) else {
+                return (not_understood(ctx, &a), s);
+            };
+            let filled = fill_in_context(ctx, &s, intent, &a);
+            if matches!(filled.need, Some(Need::Missing { .. }))
+                && best.score < MIN_SCORE_TO_ASK
+                && a.mentions.is_empty()
+            {
+                return (not_understood(ctx, &a), s);
+            }
+            let confidence = best.score.min(1.0) * filled.certainty;
+            (intent, filled, confidence)
+        };
     let reply = proceed(
         ctx,
         &mut s,

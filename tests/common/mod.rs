@@ -107,6 +107,11 @@ pub async fn redis_conn() -> redis::aio::MultiplexedConnection {
 
 /// Every key under a prefix (SCAN, never KEYS).
 pub async fn keys_under(prefix: &str) -> Vec<String> {
+    keys_matching(&format!("{prefix}*")).await
+}
+
+/// Every key matching a SCAN pattern, iterating the cursor to the end.
+pub async fn keys_matching(pattern: &str) -> Vec<String> {
     let mut conn = redis_conn().await;
     let mut cursor: u64 = 0;
     let mut keys = Vec::new();
@@ -114,7 +119,7 @@ pub async fn keys_under(prefix: &str) -> Vec<String> {
         let (next, batch): (u64, Vec<String>) = redis::cmd("SCAN")
             .arg(cursor)
             .arg("MATCH")
-            .arg(format!("{prefix}*"))
+            .arg(pattern)
             .arg("COUNT")
             .arg(1000)
             .query_async(&mut conn)
