@@ -175,6 +175,133 @@ async fn resets(s: &Server) {
     }
 }
 
+/// Context fills gaps only where it is certain; otherwise the reader is
+/// asked. Each case once gave a wrong or invented fact.
+async fn context_never_invents(s: &Server) {
+    // One woman in mind, two slots: not a tie of her with herself.
+    let r = talk(
+        s,
+        "reader-she-her",
+        &[
+            ("who won the women's 400m?", &["Rasaline Rentenert"]),
+            ("did she beat her?", &[]),
+        ],
+    )
+    .await;
+    assert_eq!(r[1]["outcome"], "clarify", "{}", r[1]);
+    assert!(!r[1]["text"]
+        .as_str()
+        .unwrap()
+        .contains("could not be separated"));
+    // "she" after a man: ask, never answer about him.
+    let r = talk(
+        s,
+        "reader-she-him",
+        &[
+            ("how did Trilunick do in the 400m?", &["Larrel Trilunick"]),
+            ("when does she race next?", &["Which athlete"]),
+        ],
+    )
+    .await;
+    assert!(!r[1]["text"].as_str().unwrap().contains("Trilunick"));
+    // A pronoun means the last answer's people, not an older turn's.
+    talk(
+        s,
+        "reader-latest",
+        &[
+            ("who won the women's 400m?", &["Rasaline Rentenert"]),
+            (
+                "who won gold in the women's all-around?",
+                &["Krundena Dovonasko"],
+            ),
+            ("when does she compete next?", &["Krundena Dovonasko"]),
+        ],
+    )
+    .await;
+    let r = talk(
+        s,
+        "reader-they",
+        &[
+            ("how many medals has Kalvenmark won?", &["Kalvenmark"]),
+            ("who won the men's 400m?", &["Larrel Trilunick"]),
+            ("how many medals have they won?", &["Which delegation"]),
+        ],
+    )
+    .await;
+    assert_eq!(r[2]["outcome"], "clarify");
+    // A shared silver: "she" could be either, so ask.
+    talk(
+        s,
+        "reader-shared",
+        &[
+            (
+                "who won silver in the women's 200m freestyle?",
+                &["Zoë Quillon", "Hurra Brussand"],
+            ),
+            (
+                "how many medals has she won?",
+                &["Zoë Quillon", "Hurra Brussand", "Which"],
+            ),
+        ],
+    )
+    .await;
+    // A new question is not taken as the answer to a pending one.
+    talk(
+        s,
+        "reader-pending",
+        &[
+            ("who won the 200m?", &["Which event"]),
+            (
+                "who was first in the men's 400m?",
+                &["Larrel Trilunick", "men's 400 m"],
+            ),
+        ],
+    )
+    .await;
+    // A whole new question keeps nothing of the last one (not the medal).
+    let r = talk(
+        s,
+        "reader-whole",
+        &[
+            ("who won the men's 400m?", &["Larrel Trilunick"]),
+            ("and silver?", &["Nulan Bendand"]),
+            (
+                "and who won the men's 200m?",
+                &["Wonorin Galkace", "won the men's 200 m, with"],
+            ),
+        ],
+    )
+    .await;
+    assert!(!r[2]["text"].as_str().unwrap().contains("silver in"));
+    // A sport on its own changes the event: which one is asked.
+    let r = talk(
+        s,
+        "reader-sport",
+        &[
+            ("who is leading the men's high jump?", &["Lomov Kerreth"]),
+            ("how about gymnastics?", &["Which event"]),
+        ],
+    )
+    .await;
+    assert!(!r[1]["text"].as_str().unwrap().contains("high jump"));
+    // They met in the 400 m, not in the 200 m: never "have not met".
+    talk(
+        s,
+        "reader-met",
+        &[
+            (
+                "did Trilunick beat Bendand in the 400m?",
+                &["Larrel Trilunick finished ahead"],
+            ),
+            (
+                "and in the 200m?",
+                &["did not both compete in the men's 200 m"],
+            ),
+        ],
+    )
+    .await;
+}
+
 macro_rules! on_both_stores {
     ($($name:ident),* $(,)?) => {
         mod in_memory {
@@ -206,5 +333,6 @@ on_both_stores!(
     entity_switch,
     pronouns,
     clarification_answers,
-    resets
+    resets,
+    context_never_invents
 );

@@ -14,7 +14,7 @@ use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::Scored;
 use crate::understand::lexicon::Target;
 use crate::understand::slots::{resolve_contest, Need, MAX_OPTIONS};
-use crate::understand::Analysis;
+use crate::understand::{Analysis, Understanding};
 
 use super::session::{load_entity, load_slots, Session};
 
@@ -32,18 +32,32 @@ const CUES: &[&[&str]] = &[
 ];
 
 /// Above this score a message is its own question even if it opens with
-/// "and": "and when does she race next?" asks something new.
+/// "and": "and when does she race next?" asks something new, and "and who
+/// won the men's 200 m?" keeps nothing (not the medal) of the last one.
 const OWN_QUESTION: f32 = 0.75;
 
 /// Longest message (in words) read as a bare fragment ("silver?", "the
 /// women's") when it has no cue.
 const FRAGMENT: usize = 4;
 
-/// Whether the message opens with a follow-up cue.
-pub fn has_cue(a: &Analysis) -> bool {
-    CUES.iter().any(|cue| {
-        a.tokens.len() >= cue.len() && a.tokens.iter().zip(cue.iter()).all(|(t, c)| t == c)
-    })
+/// How many words of follow-up cue the message opens with (0 for none).
+pub fn cue_len(a: &Analysis) -> usize {
+    CUES.iter()
+        .find(|cue| {
+            a.tokens.len() >= cue.len() && a.tokens.iter().zip(cue.iter()).all(|(t, c)| t == c)
+        })
+        .map_or(0, |cue| cue.len())
+}
+
+/// How well the message scores as a question of its own once its cue is
+/// set aside: "and who won the men's 200 m?" is a whole question, "and
+/// silver?" is not.
+fn own_question_score(u: &Understanding, a: &Analysis) -> f32 {
+    let n = cue_len(a);
+    // The cue words open the message and are never names, so they are the
+    // first tokens of the abstracted form too.
+    let rest = a.abstracted.get(n..).unwrap_or_default();
+    u.classifier.score(rest).first().map_or(0.0, |b| b.score)
 }
 
 /// The kinds of slot a message gives a value for.
@@ -56,7 +70,13 @@ fn touched(a: &Analysis) -> Vec<EntityKind> {
         let k = match t {
             Target::Entity(EntityRef::Competitor(_), _) => EntityKind::Competitor,
             Target::Entity(EntityRef::Group(_), _) => EntityKind::Group,
-            Target::Entity(EntityRef::Sport(_), _) | Target::SportNoun(_) => EntityKind::Sport,
+            // A sport changes the event too ("how about gymnastics?").
+            Target::Entity(EntityRef::Sport(_), _) | Target::SportNoun(_) => {
+                if !kinds.contains(&EntityKind::Contest) {
+                    kinds.push(EntityKind::Contest);
+                }
+                EntityKind::Sport
+            }
             Target::Entity(EntityRef::Discipline(..) | EntityRef::Contest(_), _) => {
                 EntityKind::Contest
             }
@@ -94,6 +114,7 @@ fn takes(intent: &Intent, kind: EntityKind) -> bool {
 pub fn variation<'c>(
     data: &Dataset,
     catalog: &'c Catalog,
+    understanding: &Understanding,
     s: &Session,
     a: &Analysis,
     best: Option<&Scored>,
@@ -104,10 +125,14 @@ pub fn variation<'c>(
         return None;
     }
     let best_score = best.map(|b| b.score).unwrap_or(0.0);
-    let same_intent = best.is_some_and(|b| b.intent == last.name);
-    let cue = has_cue(a);
+    let cue = cue_len(a) > 0;
     let fragment = a.tokens.len() <= FRAGMENT && best_score < super::turn::MIN_SCORE;
-    if !(cue && (best_score < OWN_QUESTION || same_intent) || fragment) {
+    let follows = if cue {
+        own_question_score(understanding, a) < OWN_QUESTION
+    } else {
+        fragment
+    };
+    if !follows {
         return None;
     }
     let mut slots = load_slots(data, &s.last_slots);
@@ -214,6 +239,8 @@ enum Pointer {
     That,
 }
 
+/// The pronouns in a message, in order, each as often as it occurs: "did
+/// she beat her?" points at two people.
 fn pointers(a: &Analysis) -> Vec<Pointer> {
     let mut out = Vec::new();
     for (i, t) in a.tokens.iter().enumerate() {
@@ -234,19 +261,42 @@ fn pointers(a: &Analysis) -> Vec<Pointer> {
                 .map(|_| Pointer::That),
             _ => None,
         };
-        if let Some(p) = p {
-            if !out.contains(&p) {
-                out.push(p);
-            }
-        }
+        out.extend(p);
     }
     out
 }
 
-/// What recent entity a pointer of the right kind means: those of the
-/// latest turn that had any, most salient first. Several means the reader
-/// must say which.
-fn referents(data: &Dataset, s: &Session, kind: EntityKind, p: Pointer) -> Vec<EntityRef> {
+/// The pronouns that can stand for a slot of this kind.
+fn pointers_for(kind: EntityKind) -> &'static [Pointer] {
+    match kind {
+        EntityKind::Competitor => &[Pointer::She, Pointer::He, Pointer::They],
+        EntityKind::Group => &[Pointer::They],
+        EntityKind::Contest => &[Pointer::That],
+        _ => &[],
+    }
+}
+
+/// Whether the message has a pronoun that could stand for this kind: then
+/// the slot is the pronoun's business, and nothing else is carried into it.
+pub fn points_at(a: &Analysis, kind: EntityKind) -> bool {
+    let wanted = pointers_for(kind);
+    pointers(a).iter().any(|p| wanted.contains(p))
+}
+
+/// What recent entity a pointer of the right kind means: among those of
+/// the latest turn that named anything, the most salient (asked about, else
+/// the answer's subjects, else the rest), leaving out entities already
+/// used in this message. An older turn is never reached back to: after
+/// "who won the women's 400 m?" and a question about an event in progress,
+/// "she" does not mean the 400 m winner. Several means the reader must say
+/// which.
+fn referents(
+    data: &Dataset,
+    s: &Session,
+    kind: EntityKind,
+    p: Pointer,
+    used: &[EntityRef],
+) -> Vec<EntityRef> {
     let fits = |e: EntityRef| match (kind, e, p) {
         (EntityKind::Competitor, EntityRef::Competitor(i), Pointer::She) => {
             data.competitors[i].category.as_deref() != Some("men")
@@ -259,17 +309,18 @@ fn referents(data: &Dataset, s: &Session, kind: EntityKind, p: Pointer) -> Vec<E
         (EntityKind::Contest, EntityRef::Contest(_), Pointer::That) => true,
         _ => false,
     };
+    let Some(turn) = s.recent.iter().map(|r| r.turn).max() else {
+        return vec![];
+    };
     let found: Vec<(EntityRef, u64, super::session::Salience)> = s
         .recent
         .iter()
+        .filter(|r| r.turn == turn)
         .filter_map(|r| {
             let e = load_entity(data, &r.entity)?;
-            fits(e).then_some((e, r.turn, r.salience))
+            (fits(e) && !used.contains(&e)).then_some((e, r.turn, r.salience))
         })
         .collect();
-    let Some(turn) = found.iter().map(|f| f.1).max() else {
-        return vec![];
-    };
     let Some(top) = found.iter().filter(|f| f.1 == turn).map(|f| f.2).min() else {
         return vec![];
     };
@@ -290,27 +341,39 @@ pub fn resolve_pointers(
     a: &Analysis,
     slots: &mut Slots,
 ) -> Option<Need> {
-    let ps = pointers(a);
+    let mut ps = pointers(a);
     if ps.is_empty() {
         return None;
     }
+    // Names in the message fill their slots first (a person named in full
+    // is never also "she"); each pronoun then stands for one slot, and two
+    // slots never get the same entity ("did she beat her?").
     let named = touched(a);
+    let mut used: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
+    for m in &a.mentions {
+        if let Some((Target::Entity(e, _), _)) = m.candidates.first() {
+            used.push(*e);
+        }
+    }
+    let mut named_left: Vec<EntityKind> = named;
     for def in &intent.slots {
-        if slots.contains_key(&def.name) || named.contains(&def.kind) {
+        if slots.contains_key(&def.name) {
             continue;
         }
-        let wanted: &[Pointer] = match def.kind {
-            EntityKind::Competitor => &[Pointer::She, Pointer::He, Pointer::They],
-            EntityKind::Group => &[Pointer::They],
-            EntityKind::Contest => &[Pointer::That],
-            _ => &[],
-        };
-        let Some(p) = ps.iter().find(|p| wanted.contains(p)) else {
+        if let Some(i) = named_left.iter().position(|k| *k == def.kind) {
+            // The message names one of this kind: it fills this slot.
+            named_left.remove(i);
+            continue;
+        }
+        let wanted = pointers_for(def.kind);
+        let Some(i) = ps.iter().position(|p| wanted.contains(p)) else {
             continue;
         };
-        match referents(data, s, def.kind, *p).as_slice() {
+        let p = ps.remove(i);
+        match referents(data, s, def.kind, p, &used).as_slice() {
             [] => {}
             [one] => {
+                used.push(*one);
                 slots.insert(def.name.clone(), SlotValue::Entity { entity: *one });
             }
             many => {

@@ -110,27 +110,26 @@ impl Session {
     }
 
     /// Puts this turn's entities at the front of the recent list: those
-    /// the reader `asked` about, then those the answer `mentioned` (the first
-    /// of each kind as its subject).
-    pub fn remember(&mut self, data: &Dataset, asked: &[EntityRef], mentioned: &[EntityRef]) {
+    /// the reader `asked` about, the answer's `subjects`, then the rest it
+    /// `mentioned`.
+    pub fn remember(
+        &mut self,
+        data: &Dataset,
+        asked: &[EntityRef],
+        subjects: &[EntityRef],
+        mentioned: &[EntityRef],
+    ) {
         let mut fresh: Vec<Recent> = Vec::new();
-        let mut kinds_seen: Vec<&'static str> = Vec::new();
         let tagged = asked
             .iter()
             .map(|e| (*e, Salience::Asked))
+            .chain(subjects.iter().map(|e| (*e, Salience::Subject)))
             .chain(mentioned.iter().map(|e| (*e, Salience::Mentioned)));
         for (e, salience) in tagged {
             let entity = store_entity(data, e);
             if fresh.iter().any(|r| r.entity == entity) {
                 continue;
             }
-            let kind = kind_name(e);
-            let salience = if salience == Salience::Mentioned && !kinds_seen.contains(&kind) {
-                Salience::Subject
-            } else {
-                salience
-            };
-            kinds_seen.push(kind);
             fresh.push(Recent {
                 entity,
                 turn: self.turn,

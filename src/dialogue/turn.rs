@@ -122,28 +122,29 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     let best = a.scores.first();
     // A variation of the last question ("and silver?") before anything else:
     // read on its own it would fit no intent, or the wrong one.
-    let (intent, filled, confidence) =
-        if let Some((intent, carried)) = context::variation(ctx.data, ctx.catalog, &s, &a, best) {
-            let filled = fill(ctx.data, intent, &a, &carried);
-            let confidence = filled.certainty;
-            (intent, filled, confidence)
-        } else {
-            let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
-                return (not_understood(ctx, &a), s);
-            };
-            let Some(intent) = ctx.catalog.intent(&best.intent) else {
-                return (not_understood(ctx, &a), s);
-            };
-            let filled = fill_in_context(ctx, &s, intent, &a);
-            if matches!(filled.need, Some(Need::Missing { .. }))
-                && best.score < MIN_SCORE_TO_ASK
-                && a.mentions.is_empty()
-            {
-                return (not_understood(ctx, &a), s);
-            }
-            let confidence = best.score.min(1.0) * filled.certainty;
-            (intent, filled, confidence)
+    let (intent, filled, confidence) = if let Some((intent, carried)) =
+        context::variation(ctx.data, ctx.catalog, ctx.understanding, &s, &a, best)
+    {
+        let filled = fill(ctx.data, intent, &a, &carried);
+        let confidence = filled.certainty;
+        (intent, filled, confidence)
+    } else {
+        let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
+            return (not_understood(ctx, &a), s);
         };
+        let Some(intent) = ctx.catalog.intent(&best.intent) else {
+            return (not_understood(ctx, &a), s);
+        };
+        let filled = fill_in_context(ctx, &s, intent, &a);
+        if matches!(filled.need, Some(Need::Missing { .. }))
+            && best.score < MIN_SCORE_TO_ASK
+            && a.mentions.is_empty()
+        {
+            return (not_understood(ctx, &a), s);
+        }
+        let confidence = best.score.min(1.0) * filled.certainty;
+        (intent, filled, confidence)
+    };
     let reply = proceed(
         ctx,
         &mut s,
@@ -172,6 +173,14 @@ fn fill_in_context(ctx: &TurnContext, s: &Session, intent: &Intent, a: &Analysis
         let Some(Need::Missing { slot }) = &filled.need else {
             break;
         };
+        // "she" that fits nobody is asked about, never replaced by whoever
+        // the last question was about.
+        if intent
+            .slot(slot)
+            .is_some_and(|d| context::points_at(a, d.kind))
+        {
+            break;
+        }
         let Some(v) = context::carried_over(ctx.data, s, intent, slot, a) else {
             break;
         };
@@ -276,7 +285,7 @@ fn ask_choice(
 fn remember_asked(data: &Dataset, s: &mut Session, slots: &Slots) {
     let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
     if !asked.is_empty() {
-        s.remember(data, &asked, &[]);
+        s.remember(data, &asked, &[], &[]);
     }
 }
 
@@ -315,6 +324,7 @@ fn run(
             outcome,
             facts,
             mentioned,
+            subjects,
         } => {
             let spec = intent
                 .operation
@@ -334,7 +344,7 @@ fn run(
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);
             let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
-            s.remember(ctx.data, &asked, &mentioned);
+            s.remember(ctx.data, &asked, &subjects, &mentioned);
             let class = match spec.class {
                 OutcomeClass::Answered => Outcome::Answered,
                 OutcomeClass::NoData => Outcome::NoData,
@@ -360,11 +370,13 @@ fn run(
 fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis) -> Option<Reply> {
     let intent = ctx.catalog.intent(&p.intent)?;
     let carried = load_slots(ctx.data, &p.slots);
-    // A clearly different question wins over a loose answer.
+    // A clearly different question wins over a loose answer: it scores
+    // high for another intent and says more than a name ("how many medals
+    // has Bendand won?" is not the answer "Bendand").
     let new_question = a
         .scores
         .first()
-        .is_some_and(|b| b.score >= 0.75 && b.intent != p.intent);
+        .is_some_and(|b| b.score >= 0.75 && b.intent != p.intent && own_words(a) >= 2);
     if p.options.is_empty() {
         // The service asked for a missing detail: the message answers it if
         // it fills that slot, or brings up something to ask about instead.
@@ -394,8 +406,11 @@ fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis)
         .iter()
         .filter_map(|o| load_entity(ctx.data, o))
         .collect();
+    if names_another(ctx.data, &options, a) {
+        return None;
+    }
     let value = match pick(ctx.data, &options, a) {
-        Picked::One(e) => SlotValue::Entity { entity: e },
+        Picked::One(e) if !new_question => SlotValue::Entity { entity: e },
         Picked::Some(narrowed) if !new_question => {
             return Some(ask_choice(
                 ctx, s, intent, carried, &p.slot, narrowed, 1.0, a,
@@ -408,6 +423,44 @@ fn answer_pending(ctx: &TurnContext, s: &mut Session, p: &Pending, a: &Analysis)
     // Fill anything else the intent still needs from this message.
     let filled = fill(ctx.data, intent, a, &slots);
     Some(proceed(ctx, s, intent, filled.slots, filled.need, 1.0, a))
+}
+
+/// Words of the message other than names and filler: what makes it a
+/// question of its own rather than a pick.
+fn own_words(a: &Analysis) -> usize {
+    const FILLER: [&str; 9] = [
+        "the", "a", "an", "one", "i", "mean", "please", "that", "from",
+    ];
+    a.abstracted
+        .iter()
+        .filter(|t| !t.starts_with('<') && !FILLER.contains(&t.as_str()))
+        .count()
+}
+
+/// Whether the message names something of the options' kind that is not
+/// among them: then it asks about that instead ("who was first in the
+/// men's 400 m?" while asked which 200 m was meant).
+fn names_another(data: &Dataset, options: &[EntityRef], a: &Analysis) -> bool {
+    let contests = options.iter().all(|e| matches!(e, EntityRef::Contest(_)));
+    if contests {
+        if let Ok(Some(ci)) = resolve_contest(data, a, &Slots::new()) {
+            return !options.contains(&EntityRef::Contest(ci));
+        }
+        return false;
+    }
+    a.mentions.iter().any(|m| {
+        m.exact
+            && match m.candidates.first() {
+                Some((Target::Entity(e, _), _)) => {
+                    std::mem::discriminant(e) == std::mem::discriminant(&options[0])
+                        && !m
+                            .candidates
+                            .iter()
+                            .any(|(t, _)| matches!(t, Target::Entity(x, _) if options.contains(x)))
+                }
+                _ => false,
+            }
+    })
 }
 
 enum Picked {

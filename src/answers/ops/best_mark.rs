@@ -100,9 +100,10 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("mark", m);
     }
     let mut mentioned = vec![EntityRef::Discipline(s, d), EntityRef::Contest(ci)];
-    mentioned
-        .extend(tied.iter().filter_map(|&(c, e)| {
-            super::support::entry_entity(data, &data.contests[c].entries[e])
-        }));
-    OpOutput::done("answered", f, mentioned)
+    let holders: Vec<EntityRef> = tied
+        .iter()
+        .filter_map(|&(c, e)| super::support::entry_entity(data, &data.contests[c].entries[e]))
+        .collect();
+    mentioned.extend(holders.iter().copied());
+    OpOutput::done("answered", f, mentioned).about(holders)
 }

@@ -52,6 +52,8 @@ pub static SPEC: OpSpec = OpSpec {
         answered("level", &["names", "place", "contest_name"]),
         no_data("undecided", &["contest_name"]),
         no_data("never_met", &["names"]),
+        // Both named, both competed, but not both in the event asked about.
+        no_data("not_both_in", &["names", "contest_name"]),
     ],
     run,
 };
@@ -68,6 +70,14 @@ fn run(input: &OpInput) -> OpOutput {
     let (Some(a), Some(b)) = (input.competitor("competitor"), input.competitor("rival")) else {
         return OpOutput::done("never_met", Facts::new(), vec![]);
     };
+    if a == b {
+        // One person twice ("did she beat her?" with one woman in mind) is
+        // no comparison: ask who the other one is.
+        return OpOutput::Choose {
+            slot: "rival",
+            options: vec![],
+        };
+    }
     let names = Value::from(vec![data.competitors[a].name(), data.competitors[b].name()]);
     let mentioned = vec![EntityRef::Competitor(a), EntityRef::Competitor(b)];
     let ca = data.contests_of(a);
@@ -77,7 +87,15 @@ fn run(input: &OpInput) -> OpOutput {
         .filter_map(|&(c, ea)| cb.iter().find(|(d, _)| *d == c).map(|&(_, eb)| (c, ea, eb)))
         .collect();
     if let Some(ci) = input.contest("contest") {
+        let met_elsewhere = !shared.is_empty();
         shared.retain(|(c, _, _)| *c == ci);
+        if shared.is_empty() && met_elsewhere {
+            // They met, just not in this event: "never met" would be false.
+            let f = Facts::new()
+                .set("names", names)
+                .set("contest_name", data.contest_name(ci));
+            return OpOutput::done("not_both_in", f, mentioned);
+        }
     }
     let (ci, ea, eb) = match shared.as_slice() {
         [] => return OpOutput::done("never_met", Facts::new().set("names", names), mentioned),

@@ -61,14 +61,14 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("mark", m);
     }
     let mut mentioned = vec![me];
-    mentioned.extend(
-        leaders
-            .iter()
-            .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
-    );
+    let subjects: Vec<EntityRef> = leaders
+        .iter()
+        .filter_map(|&i| super::support::entry_entity(data, &c.entries[i]))
+        .collect();
+    mentioned.extend(subjects.iter().copied());
     if leaders.len() > 1 {
         f.put("leader", labels(data, c, &leaders));
-        return OpOutput::done("tied", f, mentioned);
+        return OpOutput::done("tied", f, mentioned).about(subjects);
     }
     let key = if c.status == Status::Final {
         "winner"
@@ -88,11 +88,11 @@ fn run(input: &OpInput) -> OpOutput {
         }
     }
     if c.status == Status::Final {
-        return OpOutput::done("final", f, mentioned);
+        return OpOutput::done("final", f, mentioned).about(subjects);
     }
     if let Some(t) = data.facts[ci].updated {
         let z = t.to_zoned_datetime(data.tz.clone());
         f.put("updated", format!("{:02}:{:02}", z.hour(), z.minute()));
     }
-    OpOutput::done("live", f, mentioned)
+    OpOutput::done("live", f, mentioned).about(subjects)
 }

@@ -106,6 +106,6 @@ fn run(input: &OpInput) -> OpOutput {
         .collect();
     f.put("shown", Value::Int(lines.len() as i64));
     f.put("top", Value::List(lines));
-    let mentioned = leaders.iter().map(|r| EntityRef::Group(r.group)).collect();
-    OpOutput::done("answered", f, mentioned)
+    let mentioned: Vec<EntityRef> = leaders.iter().map(|r| EntityRef::Group(r.group)).collect();
+    OpOutput::done("answered", f, mentioned.clone()).about(mentioned)
 }

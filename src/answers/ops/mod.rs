@@ -238,11 +238,14 @@ impl OpInput<'_> {
 #[derive(Debug, Clone, PartialEq)]
 pub enum OpOutput {
     /// An outcome and the facts that fill its wording. `mentioned` lists the
-    /// entities the answer is about, for follow-up questions.
+    /// entities the answer names, for follow-up questions; `subjects` the
+    /// ones it is about (the winner; several when tied), which "she" or
+    /// "they" in the next message most likely mean.
     Done {
         outcome: &'static str,
         facts: HashMap<String, Value>,
         mentioned: Vec<EntityRef>,
+        subjects: Vec<EntityRef>,
     },
     /// The operation cannot answer without one more detail, and the data
     /// narrow it to these options (never guessed).
@@ -259,6 +262,27 @@ impl OpOutput {
             outcome,
             facts: facts.0,
             mentioned,
+            subjects: Vec::new(),
+        }
+    }
+
+    /// The same outcome, naming the answer's subjects. With none named,
+    /// every person the answer mentions is an equal candidate for a
+    /// pronoun, and the reader is asked which one.
+    pub fn about(self, who: Vec<EntityRef>) -> OpOutput {
+        match self {
+            OpOutput::Done {
+                outcome,
+                facts,
+                mentioned,
+                ..
+            } => OpOutput::Done {
+                outcome,
+                facts,
+                mentioned,
+                subjects: who,
+            },
+            other => other,
         }
     }
 }

@@ -78,7 +78,9 @@ fn run(input: &OpInput) -> OpOutput {
             if let Some(m) = super::support::mark_value(data, ci, first) {
                 f.put("mark", m);
             }
-            return OpOutput::done("live", f, vec![me]);
+            let who = entities(data, c, &leaders);
+            let mentioned = std::iter::once(me).chain(who.iter().copied()).collect();
+            return OpOutput::done("live", f, mentioned).about(who);
         }
         Status::Final => {}
     }
@@ -95,19 +97,21 @@ fn run(input: &OpInput) -> OpOutput {
         }
         let mut f = Facts::new();
         let mut mentioned = vec![me];
+        let mut firsts = Vec::new();
         for (place, key) in [(1, "first"), (2, "second"), (3, "third")] {
             let ix: Vec<usize> = order
                 .iter()
                 .copied()
                 .filter(|&i| c.entries[i].place == Some(place))
                 .collect();
-            mentioned.extend(
-                ix.iter()
-                    .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
-            );
+            let who = entities(data, c, &ix);
+            if place == 1 {
+                firsts = who.clone();
+            }
+            mentioned.extend(who);
             f.put(key, labels(data, c, &ix));
         }
-        return OpOutput::done("placings", f, mentioned);
+        return OpOutput::done("placings", f, mentioned).about(firsts);
     }
     let awards = data.awards();
     if let Some(award) = input.text("award") {
@@ -126,16 +130,12 @@ fn run(input: &OpInput) -> OpOutput {
             }
             return OpOutput::done("no_result", Facts::new(), vec![me]);
         }
-        let mentioned = std::iter::once(me)
-            .chain(
-                ix.iter()
-                    .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
-            )
-            .collect();
+        let who = entities(data, c, &ix);
+        let mentioned = std::iter::once(me).chain(who.iter().copied()).collect();
         let f = Facts::new()
             .set("holders", labels(data, c, &ix))
             .set("shared", if ix.len() > 1 { "shared" } else { "" });
-        return OpOutput::done("award", f, mentioned);
+        return OpOutput::done("award", f, mentioned).about(who);
     }
     if placed(c).is_empty() {
         return OpOutput::done("no_result", Facts::new(), vec![me]);
@@ -143,15 +143,17 @@ fn run(input: &OpInput) -> OpOutput {
     let mut f = Facts::new();
     let mut missing = Vec::new();
     let mut mentioned = vec![me];
+    let mut winners = Vec::new();
     for (k, a) in awards.iter().enumerate() {
         let ix = holders(c, a);
         if ix.is_empty() {
             missing.push(a.clone());
         }
-        mentioned.extend(
-            ix.iter()
-                .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
-        );
+        let who = entities(data, c, &ix);
+        if k == 0 {
+            winners = who.clone();
+        }
+        mentioned.extend(who);
         // The first three awards have fixed fact names editors can use.
         let key = match k {
             0 => "gold",
@@ -166,5 +168,12 @@ fn run(input: &OpInput) -> OpOutput {
     }
     f.put("missing_count", Value::Int(missing.len() as i64));
     f.put("missing", Value::from(missing));
-    OpOutput::done("answered", f, mentioned)
+    OpOutput::done("answered", f, mentioned).about(winners)
+}
+
+/// The competitors (or groups, for team entries) behind some entries.
+fn entities(data: &Dataset, c: &crate::dataset::Contest, ix: &[usize]) -> Vec<EntityRef> {
+    ix.iter()
+        .filter_map(|&i| super::support::entry_entity(data, &c.entries[i]))
+        .collect()
 }
