@@ -57,7 +57,8 @@ const RETRY_MAX_DELAY: Duration = Duration::from_millis(100);
 /// KEYS: session hash, reply key (the session key again when there is no
 /// reply; it is then never touched), reply index.
 /// ARGV: expected version, session JSON, session TTL in ms, "1" when there
-/// is a reply, the reply, reply TTL in ms.
+/// is a reply, the reply, reply TTL in ms, the version to start from when
+/// no session is stored (see [`super::store::first_version`]).
 ///
 /// A version that is missing or not a number counts as 0, as `load` reads
 /// it, so a damaged record is overwritten by the next save instead of
@@ -74,7 +75,11 @@ local current = tonumber(redis.call('HGET', KEYS[1], 'v')) or 0
 if current ~= tonumber(ARGV[1]) then
   return {'conflict'}
 end
-redis.call('HSET', KEYS[1], 'v', current + 1, 's', ARGV[2])
+local next = current + 1
+if current == 0 then
+  next = tonumber(ARGV[7])
+end
+redis.call('HSET', KEYS[1], 'v', next, 's', ARGV[2])
 redis.call('PEXPIRE', KEYS[1], ARGV[3])
 if has_reply then
   local reply_ttl = tonumber(ARGV[6])
@@ -392,7 +397,8 @@ impl SessionStore for RedisStore {
                 .arg(ttl_millis(ttl))
                 .arg(if reply.is_some() { "1" } else { "0" })
                 .arg(reply.map_or("", |r| r.reply))
-                .arg(reply.map_or(1, |r| ttl_millis(r.ttl)));
+                .arg(reply.map_or(1, |r| ttl_millis(r.ttl)))
+                .arg(super::store::first_version());
             let answer: Vec<String> = self
                 .call("save", |mut con| async move {
                     invocation.invoke_async(&mut con).await

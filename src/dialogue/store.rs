@@ -10,7 +10,9 @@
 //!   already given to a message id, in one round trip;
 //! - [`SessionStore::save`] writes only if the version is still the one that
 //!   was loaded (compare-and-set), so two messages handled at once never
-//!   lose an update; and it keeps the reply under the message id unless one
+//!   lose an update (versions start at a random number, so one never comes
+//!   back after an erasure or an expiry); and it keeps the reply under the
+//!   message id unless one
 //!   is there already (set-if-absent), so a retried message gets the first
 //!   reply back;
 //! - sessions expire after an idle TTL, remembered replies after theirs;
@@ -106,6 +108,14 @@ pub trait SessionStore: Send + Sync + 'static {
 
     /// A short name for logs and status.
     fn name(&self) -> &'static str;
+}
+
+/// The version a reader's first session starts at: random, not 1. After an
+/// erasure or an expiry a new session starts again, and a turn that loaded
+/// the old one must not find its version again (it would overwrite the new
+/// session with erased context). Below 2^52, so Lua compares it exactly.
+pub fn first_version() -> u64 {
+    rand::random_range(1..(1u64 << 52))
 }
 
 /// Sessions in this process's memory: the default when no shared store is
@@ -209,11 +219,16 @@ impl SessionStore for MemoryStore {
             if maps.version(reader, now) != expected {
                 return Ok(Saved::Conflict);
             }
+            let version = if expected == 0 {
+                first_version()
+            } else {
+                expected + 1
+            };
             maps.sessions.insert(
                 reader.to_string(),
                 Kept {
                     session: session.clone(),
-                    version: expected + 1,
+                    version,
                     expires: now + ttl,
                 },
             );
