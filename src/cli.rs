@@ -134,16 +134,28 @@ fn sources(c: &Common) -> Sources {
     }
 }
 
-/// A fresh per-process secret for hashing user ids when none is configured.
-pub fn id_secret() -> Vec<u8> {
+/// The configured secret for hashing user ids (`TIDINGS_ID_SECRET`).
+fn configured_secret() -> Option<Vec<u8>> {
     match std::env::var("TIDINGS_ID_SECRET") {
-        Ok(s) if !s.is_empty() => s.into_bytes(),
-        _ => rand::random::<[u8; 32]>().to_vec(),
+        Ok(s) if !s.is_empty() => Some(s.into_bytes()),
+        _ => None,
     }
+}
+
+/// The secret for hashing user ids: the configured one, else a fresh one
+/// for this process (fine while sessions live in this process only).
+pub fn id_secret() -> Vec<u8> {
+    configured_secret().unwrap_or_else(|| rand::random::<[u8; 32]>().to_vec())
 }
 
 /// Builds an engine: the scenario, the clock and the session store.
 pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
+    if o.redis_url.is_some() && configured_secret().is_none() {
+        // With a random key per process, replicas would not find each
+        // other's sessions, and after a restart an erasure would miss the
+        // reader's old keys.
+        return Err("--redis-url needs TIDINGS_ID_SECRET: set it to a long random value, the same on every replica".into());
+    }
     let snap = engine::load(&sources(c)).map_err(|e| e.to_string())?;
     let settings = Settings {
         clock: clock(&c.now)?,

@@ -352,17 +352,26 @@ impl Engine {
                 }),
                 _ => None,
             };
-            match self
-                .store
-                .save(
+            let save = || {
+                self.store.save(
                     &key,
                     &session,
                     loaded.version,
                     self.settings.session_ttl,
                     keep,
                 )
-                .await
-            {
+            };
+            // One more try on a store error: a connection that just dropped
+            // has usually reconnected by then, and a turn not remembered
+            // makes the next follow-up lose its context.
+            let saved = match save().await {
+                Err(e) => {
+                    tracing::debug!(error = %e, "saving the session again");
+                    save().await
+                }
+                done => done,
+            };
+            match saved {
                 Ok(Saved::Stored) => return Ok(answer),
                 Ok(Saved::Answered(earlier)) => {
                     if let Some(a) = repeated(&earlier) {
@@ -377,6 +386,9 @@ impl Engine {
                     tokio::time::sleep(Duration::from_millis(pause)).await;
                 }
                 Err(e) => {
+                    // The answer used the context, but this turn is not
+                    // remembered; it is marked like any degraded reply,
+                    // since the next follow-up may lack its context.
                     tracing::warn!(error = %e, "session not saved");
                     return Ok(Answer {
                         degraded: true,

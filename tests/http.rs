@@ -175,3 +175,34 @@ async fn odd_reader_text_never_breaks_the_service() {
         assert!(!body["text"].as_str().unwrap().is_empty(), "{text}");
     }
 }
+
+#[tokio::test]
+async fn a_wrong_method_and_a_bad_path_get_the_json_error_format() {
+    let s = Server::start(demo_engine()).await;
+    let r = s.client.get(s.url("/v1/messages")).send().await.unwrap();
+    assert_eq!(r.status(), 405);
+    assert_eq!(r.headers()["allow"], "POST");
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["error"]["code"], "method_not_allowed");
+    // %FF decodes to a byte that is not UTF-8.
+    let r = s
+        .client
+        .delete(s.url("/v1/users/chat/%FF"))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 400);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["error"]["code"], "bad_path");
+    // A message id of the wrong length is a 422, not a 500.
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&json!({"user": "r", "text": "hi", "message_id": ""}))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert_eq!(body["error"]["code"], "bad_message_id");
+}

@@ -3,8 +3,9 @@
 
 mod common;
 
-use std::io::Read;
+use std::io::{BufRead, BufReader};
 use std::process::{Child, Command, Stdio};
+use std::sync::{Arc, Mutex};
 use std::time::Duration;
 
 use common::{keys_under, redis_url, test_prefix, wait_until};
@@ -12,18 +13,17 @@ use common::{keys_under, redis_url, test_prefix, wait_until};
 struct Replica {
     child: Child,
     base: String,
+    log: Arc<Mutex<String>>,
 }
 
 impl Replica {
+    /// Starts `tidings serve` on a port the kernel picks (`--listen
+    /// 127.0.0.1:0`) and reads the bound address from its log, so two
+    /// replicas can never be handed the same port.
     fn start(prefix: &str) -> Replica {
-        let port = std::net::TcpListener::bind("127.0.0.1:0")
-            .unwrap()
-            .local_addr()
-            .unwrap()
-            .port();
-        let child = Command::new(env!("CARGO_BIN_EXE_tidings"))
+        let mut child = Command::new(env!("CARGO_BIN_EXE_tidings"))
             .arg("serve")
-            .args(["--listen", &format!("127.0.0.1:{port}")])
+            .args(["--listen", "127.0.0.1:0"])
             .args(["--redis-url", &redis_url()])
             .args(["--redis-prefix", prefix])
             .args(["--now", common::NOW])
@@ -35,20 +35,52 @@ impl Replica {
             .stderr(Stdio::piped())
             .spawn()
             .expect("tidings serve starts");
+        // Drain the log all along (a full pipe would block the server) and
+        // pick out the address it reports.
+        let log = Arc::new(Mutex::new(String::new()));
+        let (tx, rx) = std::sync::mpsc::channel::<String>();
+        let stderr = child.stderr.take().expect("stderr is piped");
+        let sink = Arc::clone(&log);
+        std::thread::spawn(move || {
+            for line in BufReader::new(stderr).lines().map_while(Result::ok) {
+                if line.contains("serving") {
+                    if let Some(addr) = line
+                        .split_whitespace()
+                        .find_map(|w| w.strip_prefix("addr="))
+                    {
+                        let _ = tx.send(addr.to_string());
+                    }
+                }
+                let mut l = sink.lock().unwrap();
+                l.push_str(&line);
+                l.push('\n');
+            }
+        });
+        let addr = rx
+            .recv_timeout(Duration::from_secs(30))
+            .unwrap_or_else(|_| {
+                panic!(
+                    "tidings serve did not report its address: {}",
+                    log.lock().unwrap()
+                )
+            });
         Replica {
             child,
-            base: format!("http://127.0.0.1:{port}"),
+            base: format!("http://{addr}"),
+            log,
         }
     }
 
     /// Stops the process and returns what it logged.
     fn stop(mut self) -> String {
+        assert!(
+            self.child.try_wait().unwrap().is_none(),
+            "replica {} exited early",
+            self.base
+        );
         let _ = self.child.kill();
         let _ = self.child.wait();
-        let mut log = String::new();
-        if let Some(mut e) = self.child.stderr.take() {
-            let _ = e.read_to_string(&mut log);
-        }
+        let log = self.log.lock().unwrap().clone();
         log
     }
 }
@@ -80,6 +112,7 @@ async fn a_conversation_alternating_between_two_replicas_keeps_its_context() {
     let prefix = test_prefix("replicas");
     let a = Replica::start(&prefix);
     let b = Replica::start(&prefix);
+    assert_ne!(a.base, b.base, "two processes, two addresses");
     let client = reqwest::Client::new();
     ready(&client, &a.base).await;
     ready(&client, &b.base).await;

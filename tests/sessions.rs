@@ -235,9 +235,9 @@ async fn a_session_in_redis_expires_after_the_configured_idle_time() {
         .query_async(&mut conn)
         .await
         .unwrap();
-    // The default idle TTL is 30 minutes; allow a second for the round trip.
+    // The default idle TTL is 30 minutes; allow five seconds for a slow machine.
     assert!(
-        (1_799_000..=1_800_000).contains(&ttl),
+        (1_795_000..=1_800_000).contains(&ttl),
         "PTTL of {key} is {ttl} ms"
     );
     // Each message renews it.
@@ -253,7 +253,7 @@ async fn a_session_in_redis_expires_after_the_configured_idle_time() {
         .query_async(&mut conn)
         .await
         .unwrap();
-    assert!(ttl > 1_799_000, "renewed: {ttl}");
+    assert!(ttl > 1_795_000, "renewed: {ttl}");
 }
 
 #[tokio::test]
@@ -266,7 +266,7 @@ async fn a_follow_up_after_the_session_expired_does_not_reuse_it() {
     let s = Server::start(engine.clone()).await;
     post_message(&s, "reader-late", "who won the men's 400 m?", None).await;
     let key = format!("{prefix}{{{}}}:s", engine.user_key("chat", "reader-late"));
-    let mut conn = redis_conn().await;
+    let conn = redis_conn().await;
     wait_until("the session to expire", Duration::from_secs(10), || {
         let mut conn = conn.clone();
         let key = key.clone();
@@ -283,7 +283,6 @@ async fn a_follow_up_after_the_session_expired_does_not_reuse_it() {
     let (_, body, _) = post_message(&s, "reader-late", "and silver?", None).await;
     assert_eq!(body["outcome"], "clarify", "{body}");
     assert!(!body["text"].as_str().unwrap().contains("Nulan Bendand"));
-    let _: i64 = redis::cmd("DBSIZE").query_async(&mut conn).await.unwrap();
 }
 
 #[tokio::test]

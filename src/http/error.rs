@@ -62,6 +62,16 @@ impl From<JsonRejection> for ApiError {
     }
 }
 
+impl From<axum::extract::rejection::PathRejection> for ApiError {
+    fn from(r: axum::extract::rejection::PathRejection) -> ApiError {
+        ApiError {
+            status: StatusCode::BAD_REQUEST,
+            code: "bad_path",
+            message: lowercase_first(&r.body_text()),
+        }
+    }
+}
+
 impl From<crate::engine::EngineError> for ApiError {
     fn from(e: crate::engine::EngineError) -> ApiError {
         use crate::engine::EngineError;

@@ -10,7 +10,9 @@ mod error;
 use std::future::Future;
 use std::time::Duration;
 
-use axum::extract::{DefaultBodyLimit, FromRequest, MatchedPath, Path, Request, State};
+use axum::extract::{
+    DefaultBodyLimit, FromRequest, FromRequestParts, MatchedPath, Path, Request, State,
+};
 use axum::http::StatusCode;
 use axum::response::IntoResponse;
 use axum::routing::{delete, get, post};
@@ -34,6 +36,12 @@ pub const MAX_TEXT: usize = 500;
 #[derive(FromRequest)]
 #[from_request(via(axum::Json), rejection(ApiError))]
 pub struct AppJson<T>(pub T);
+
+/// Path parameters, with a bad path (not UTF-8 once decoded) answered in
+/// the service's own error format.
+#[derive(FromRequestParts)]
+#[from_request(via(Path), rejection(ApiError))]
+pub struct AppPath<T>(pub T);
 
 /// A reader's message.
 #[derive(Debug, Deserialize)]
@@ -101,7 +109,7 @@ async fn messages(
 /// kept, so the answer does not reveal whether the reader ever wrote.
 async fn erase_user(
     State(engine): State<Engine>,
-    Path((channel, user)): Path<(String, String)>,
+    AppPath((channel, user)): AppPath<(String, String)>,
 ) -> Result<StatusCode, ApiError> {
     if user.is_empty() {
         return Err(ApiError::invalid("empty_user", "user must not be empty"));
@@ -144,6 +152,14 @@ async fn not_found() -> ApiError {
     }
 }
 
+async fn wrong_method() -> ApiError {
+    ApiError {
+        status: StatusCode::METHOD_NOT_ALLOWED,
+        code: "method_not_allowed",
+        message: "this endpoint does not take that method; see the allow header".into(),
+    }
+}
+
 /// The application's routes and layers.
 pub fn app(engine: Engine) -> Router {
     Router::new()
@@ -152,6 +168,7 @@ pub fn app(engine: Engine) -> Router {
         .route("/healthz", get(healthz))
         .route("/readyz", get(readyz))
         .fallback(not_found)
+        .method_not_allowed_fallback(wrong_method)
         .with_state(engine)
         // Layers run outside-in: the trace span wraps everything, then the
         // timeout (so a stuck request cannot hold shutdown forever), then the
