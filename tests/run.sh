@@ -10,6 +10,8 @@ command -v redis-server >/dev/null 2>&1 || need_pkgs+=(redis-server)
 # Unicode's NormalizationTest.txt, an external reference for the normaliser.
 [ -e /usr/share/unicode/NormalizationTest.txt ] || [ -e /usr/share/unicode/NormalizationTest.txt.bz2 ] || need_pkgs+=(unicode-data)
 command -v bzcat >/dev/null 2>&1 || need_pkgs+=(bzip2)
+# eSpeak NG renders voice replies' SSML so tests can measure the audio (tests/speech_tools.rs).
+command -v espeak-ng >/dev/null 2>&1 || need_pkgs+=(espeak-ng)
 if [ ${#need_pkgs[@]} -gt 0 ]; then
   echo "tests/run.sh: installing ${need_pkgs[*]}"
   if [ "$(id -u)" = 0 ]; then SUDO=""; else SUDO="sudo"; fi
