@@ -655,3 +655,113 @@ mod article_tests {
         }
     }
 }
+
+/// Unit symbols that running text uses after a number, with their spoken
+/// singular and plural (SI symbols; common practice for the rest).
+const UNIT_WORDS: [(&str, &str, &str); 7] = [
+    ("m", "metre", "metres"),
+    ("km", "kilometre", "kilometres"),
+    ("cm", "centimetre", "centimetres"),
+    ("s", "second", "seconds"),
+    ("kg", "kilogram", "kilograms"),
+    ("pts", "point", "points"),
+    ("%", "per cent", "per cent"),
+];
+
+/// Running text with its numbers and unit symbols in words, for a speech
+/// engine: "women's 100 m freestyle" → "women's one hundred metres
+/// freestyle", "4.5 km" → "four point five kilometres". Words that are not
+/// numbers are kept as written.
+pub fn speak_numbers(text: &str) -> String {
+    let tokens: Vec<&str> = text.split(' ').collect();
+    let mut out: Vec<String> = Vec::with_capacity(tokens.len());
+    let mut i = 0;
+    while i < tokens.len() {
+        let t = tokens[i];
+        // Keep punctuation that closes the token ("100 m," "9.93 s.").
+        let core = t.trim_end_matches([',', '.', ';', ':', '!', '?']);
+        let tail = &t[core.len()..];
+        let numeric = !core.is_empty()
+            && core.bytes().any(|b| b.is_ascii_digit())
+            && core
+                .bytes()
+                .all(|b| b.is_ascii_digit() || b == b'.' || b == b',');
+        if numeric {
+            let plain = core.replace(',', "");
+            let next_is_unit = tokens
+                .get(i + 1)
+                .map(|n| n.trim_end_matches([',', '.', ';', ':', '!', '?']))
+                .is_some_and(|u| UNIT_WORDS.iter().any(|(sym, _, _)| *sym == u));
+            let spoken = match plain.parse::<u64>() {
+                // A four-digit number with no unit and no thousands comma in
+                // a title is a year: "2027" is "twenty twenty-seven".
+                Ok(y) if (1100..=2099).contains(&y) && !next_is_unit && !core.contains(',') => {
+                    year_words(y)
+                }
+                _ => decimal_words(&plain),
+            };
+            let next = tokens.get(i + 1).map(|n| {
+                let c = n.trim_end_matches([',', '.', ';', ':', '!', '?']);
+                (c, &n[c.len()..])
+            });
+            if let Some((unit, unit_tail)) = next.filter(|(u, _)| !u.is_empty()) {
+                if let Some((_, one, many)) = UNIT_WORDS.iter().find(|(sym, _, _)| *sym == unit) {
+                    let word = if plain == "1" { one } else { many };
+                    out.push(format!("{spoken} {word}{unit_tail}"));
+                    i += 2;
+                    continue;
+                }
+            }
+            out.push(format!("{spoken}{tail}"));
+        } else {
+            out.push(t.to_string());
+        }
+        i += 1;
+    }
+    out.join(" ")
+}
+
+/// A year as it is said (common practice in British English): "nineteen
+/// ninety", "two thousand and seven", "twenty twenty-seven", "nineteen oh
+/// five".
+pub fn year_words(y: u64) -> String {
+    if (2000..=2009).contains(&y) {
+        return cardinal(y).replace(", ", " ");
+    }
+    let (hi, lo) = (y / 100, y % 100);
+    match lo {
+        0 => format!("{} hundred", cardinal(hi)),
+        1..=9 => format!("{} oh {}", cardinal(hi), cardinal(lo)),
+        _ => format!("{} {}", cardinal(hi), cardinal(lo)),
+    }
+}
+
+#[cfg(test)]
+mod speak_tests {
+    use super::speak_numbers;
+
+    #[test]
+    fn numbers_and_units_in_running_text_are_spoken() {
+        assert_eq!(
+            speak_numbers("the women's 100 m freestyle"),
+            "the women's one hundred metres freestyle"
+        );
+        assert_eq!(
+            speak_numbers("4.5 km, then 1 m."),
+            "four point five kilometres, then one metre."
+        );
+        assert_eq!(speak_numbers("heat 2"), "heat two");
+        assert_eq!(
+            speak_numbers("the 1,500 m"),
+            "the one thousand, five hundred metres"
+        );
+        assert_eq!(speak_numbers("no numbers here"), "no numbers here");
+        assert_eq!(
+            speak_numbers("The 2027 Games"),
+            "The twenty twenty-seven Games"
+        );
+        assert_eq!(super::year_words(2007), "two thousand and seven");
+        assert_eq!(super::year_words(1905), "nineteen oh five");
+        assert_eq!(super::year_words(1900), "nineteen hundred");
+    }
+}

@@ -11,7 +11,7 @@
 use std::collections::HashMap;
 use std::fmt;
 
-use crate::answers::value::{int_words, Style, Value};
+use crate::answers::value::{int_words, speakable, xml_escape, Style, Value};
 use crate::answers::words;
 
 /// A parsed template.
@@ -105,10 +105,52 @@ impl Template {
     /// text outside optional parts; the catalog check makes sure every name
     /// is one the operation can supply.
     pub fn render(&self, values: &HashMap<String, Value>, style: Style) -> String {
+        self.render_keeping(values, style, usize::MAX)
+    }
+
+    /// Renders keeping only the first `keep` optional parts (in the order
+    /// they are written; later ones are taken to matter less), so a channel
+    /// with little room can choose shorter wording instead of cutting text.
+    pub fn render_keeping(
+        &self,
+        values: &HashMap<String, Value>,
+        style: Style,
+        keep: usize,
+    ) -> String {
         let mut out = String::new();
-        render_seq(&self.pieces, values, style, &mut out);
+        let mut seen = 0;
+        render_seq(&self.pieces, values, style, keep, &mut seen, &mut out);
         let out = tidy_spaces(&out);
         words::capitalize_first(&out)
+    }
+
+    /// How many optional parts the template has, nested ones included.
+    pub fn optional_parts(&self) -> usize {
+        fn count(pieces: &[Piece]) -> usize {
+            pieces
+                .iter()
+                .map(|p| match p {
+                    Piece::Optional(inner) => 1 + count(inner),
+                    _ => 0,
+                })
+                .sum()
+        }
+        count(&self.pieces)
+    }
+
+    /// The longest rendering that `fits`: all optional parts first, then
+    /// dropping them from the last one written. `None` when even the
+    /// shortest does not fit.
+    pub fn render_fitting(
+        &self,
+        values: &HashMap<String, Value>,
+        style: Style,
+        fits: &dyn Fn(&str) -> bool,
+    ) -> Option<String> {
+        (0..=self.optional_parts())
+            .rev()
+            .map(|keep| self.render_keeping(values, style, keep))
+            .find(|t| fits(t))
     }
 }
 
@@ -227,13 +269,34 @@ fn all_present(pieces: &[Piece], values: &HashMap<String, Value>) -> bool {
     })
 }
 
-fn render_seq(pieces: &[Piece], values: &HashMap<String, Value>, style: Style, out: &mut String) {
+fn render_seq(
+    pieces: &[Piece],
+    values: &HashMap<String, Value>,
+    style: Style,
+    keep: usize,
+    seen: &mut usize,
+    out: &mut String,
+) {
     for p in pieces {
         match p {
+            Piece::Literal(s) if style == Style::Ssml => {
+                out.push_str(&xml_escape(&speakable(&words::speak_numbers(s))))
+            }
+            Piece::Literal(s) if style == Style::Spoken => out.push_str(&words::speak_numbers(s)),
             Piece::Literal(s) => out.push_str(s),
             Piece::Optional(inner) => {
-                if all_present(inner, values) {
-                    render_seq(inner, values, style, out);
+                let index = *seen;
+                *seen += 1;
+                if index < keep && all_present(inner, values) {
+                    render_seq(inner, values, style, keep, seen, out);
+                } else {
+                    // Count the nested parts skipped with it, so the
+                    // numbering does not depend on which values are there.
+                    *seen += Template {
+                        pieces: inner.clone(),
+                        source: String::new(),
+                    }
+                    .optional_parts();
                 }
             }
             Piece::Field { name, filters } => {
@@ -249,13 +312,7 @@ fn apply(v: &Value, filters: &[Filter], style: Style) -> String {
     let mut text: Option<String> = None;
     for f in filters {
         let t = match f {
-            Filter::Join(conj) => match v {
-                Value::List(items) => {
-                    let parts: Vec<String> = items.iter().map(|i| i.render(style)).collect();
-                    words::join_list(&parts, conj)
-                }
-                other => other.render(style),
-            },
+            Filter::Join(conj) => v.render_joined(style, conj),
             Filter::Count { singular, plural } => {
                 let n = v.count();
                 let noun = if n == 1 {
@@ -263,23 +320,35 @@ fn apply(v: &Value, filters: &[Filter], style: Style) -> String {
                 } else {
                     plural.clone().unwrap_or_else(|| words::plural(singular))
                 };
-                format!("{} {noun}", int_words(n, style, false))
+                let t = format!("{} {noun}", int_words(n, style, false));
+                if style == Style::Ssml {
+                    xml_escape(&t)
+                } else {
+                    t
+                }
             }
             Filter::Ordinal => words::ordinal(v.count().unsigned_abs()),
             Filter::Nth => match style {
                 Style::Text => words::ordinal_figure(v.count().unsigned_abs()),
                 Style::Spoken => words::ordinal(v.count().unsigned_abs()),
+                Style::Ssml => Value::ordinal(v.count().unsigned_abs()).render(style),
             },
             Filter::Figure => match v {
                 Value::Int(n) => int_words(*n, style, true),
                 other => other.render(style),
             },
             Filter::Verb { one, many } => {
-                if v.count() == 1 {
-                    one.clone()
+                let w = if v.count() == 1 { one } else { many };
+                if style == Style::Ssml {
+                    xml_escape(w)
                 } else {
-                    many.clone()
+                    w.clone()
                 }
+            }
+            // Case changes apply to words, never to SSML markup.
+            Filter::Upper | Filter::Lower if style == Style::Ssml => {
+                let t = text.clone().unwrap_or_else(|| v.render(Style::Spoken));
+                xml_escape(&t)
             }
             Filter::Upper => text
                 .clone()
@@ -395,5 +464,45 @@ mod tests {
     fn names_are_listed_in_order() {
         let t = Template::parse("{a} [{b|and} {c}]").unwrap();
         assert_eq!(t.names(), vec!["a", "b", "c"]);
+    }
+}
+
+#[cfg(test)]
+mod ssml_tests {
+    use super::*;
+
+    fn vals(pairs: &[(&str, Value)]) -> HashMap<String, Value> {
+        pairs
+            .iter()
+            .map(|(k, v)| (k.to_string(), v.clone()))
+            .collect()
+    }
+
+    #[test]
+    fn ssml_escapes_names_and_marks_ordinals_and_pauses() {
+        let t = Template::parse("{who|and} finished {place|nth} & won (a medal).").unwrap();
+        let who: Value = vec!["<break time=\"9s\"/> & Co".to_string(), "B".to_string()].into();
+        let out = t.render(
+            &vals(&[("who", who), ("place", Value::Int(2))]),
+            Style::Ssml,
+        );
+        assert_eq!(
+            out,
+            "&lt;break time=9s &gt; and Co<break time=\"200ms\"/> and B finished \
+             <say-as interpret-as=\"ordinal\">2</say-as> and won, a medal."
+        );
+    }
+
+    #[test]
+    fn optional_parts_are_dropped_from_the_last_written() {
+        let t = Template::parse("A[ b][ c{x}][ d].").unwrap();
+        let v = vals(&[("x", "!".into())]);
+        assert_eq!(t.optional_parts(), 3);
+        assert_eq!(t.render_keeping(&v, Style::Text, 3), "A b c! d.");
+        assert_eq!(t.render_keeping(&v, Style::Text, 2), "A b c!.");
+        assert_eq!(t.render_keeping(&v, Style::Text, 0), "A.");
+        let short = t.render_fitting(&v, Style::Text, &|s| s.len() <= 5);
+        assert_eq!(short.as_deref(), Some("A b."));
+        assert_eq!(t.render_fitting(&v, Style::Text, &|s| s.len() < 2), None);
     }
 }

@@ -1,7 +1,7 @@
 //! `best_mark`: the best mark so far in a discipline, across every contest
 //! of it (heats and finals alike), optionally for one category.
 
-use super::support::{entry_label, mark_value};
+use super::support::{entry_value, mark_value};
 use super::*;
 use crate::dataset::{mark, Better, EntryStatus, Status};
 
@@ -89,7 +89,7 @@ fn run(input: &OpInput) -> OpOutput {
     };
     let holders: Vec<Value> = tied
         .iter()
-        .map(|&(c, e)| Value::Text(entry_label(data, &data.contests[c].entries[e])))
+        .map(|&(c, e)| entry_value(data, &data.contests[c].entries[e]))
         .collect();
     let mut contests: Vec<String> = tied.iter().map(|&(c, _)| data.contest_name(c)).collect();
     contests.dedup();

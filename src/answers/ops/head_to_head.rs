@@ -3,7 +3,6 @@
 
 use super::support::{mark_value, status_phrase};
 use super::*;
-use crate::answers::words;
 use crate::dataset::{EntryStatus, Status};
 
 pub static SPEC: OpSpec = OpSpec {
@@ -59,10 +58,7 @@ pub static SPEC: OpSpec = OpSpec {
 };
 
 fn place_value(p: u32) -> Value {
-    Value::Dual {
-        text: words::ordinal_figure(p as u64),
-        spoken: words::ordinal(p as u64),
-    }
+    Value::ordinal(p as u64)
 }
 
 fn run(input: &OpInput) -> OpOutput {

@@ -92,7 +92,10 @@ fn run(input: &OpInput) -> OpOutput {
     }
     if let Some(t) = data.facts[ci].updated {
         let z = t.to_zoned_datetime(data.tz.clone());
-        f.put("updated", format!("{:02}:{:02}", z.hour(), z.minute()));
+        f.put(
+            "updated",
+            super::support::clock_value(z.hour() as u64, z.minute() as u64),
+        );
     }
     OpOutput::done("live", f, mentioned).about(subjects)
 }

@@ -188,6 +188,18 @@ impl std::fmt::Debug for OpSpec {
 }
 
 impl OpSpec {
+    /// Whether answers of this operation come from the results data (and
+    /// so may cite how fresh the data are); greetings, thanks and help do
+    /// not.
+    pub fn from_data(&self) -> bool {
+        ![
+            builtin::GREETING.name,
+            builtin::THANKS.name,
+            builtin::HELP.name,
+        ]
+        .contains(&self.name)
+    }
+
     /// The declared outcome by name.
     pub fn outcome(&self, name: &str) -> Option<&OutcomeSpec> {
         self.outcomes.iter().find(|o| o.name == name)

@@ -3,7 +3,8 @@
 
 use super::support::{medal_facts, status_phrase, when_value};
 use super::*;
-use crate::answers::words;
+use crate::answers::value::xml_escape;
+use crate::answers::words::speak_numbers;
 use crate::dataset::{EntryStatus, Status};
 
 pub static SPEC: OpSpec = OpSpec {
@@ -84,18 +85,22 @@ fn run(input: &OpInput) -> OpOutput {
             }
             Status::Final => {
                 let name = data.contest_name(ci);
-                let (text, spoken) = if e.status != EntryStatus::Ok {
-                    let s = format!("{} in the {name}", status_phrase(e.status));
-                    (s.clone(), s)
+                let value = if e.status != EntryStatus::Ok {
+                    Value::Text(format!("{} in the {name}", status_phrase(e.status)))
                 } else if let Some(p) = e.place {
-                    (
-                        format!("{} in the {name}", words::ordinal_figure(p as u64)),
-                        format!("{} in the {name}", words::ordinal(p as u64)),
-                    )
+                    let Value::Said { text, spoken, ssml } = Value::ordinal(p as u64) else {
+                        continue;
+                    };
+                    let tail = format!(" in the {name}");
+                    Value::Said {
+                        text: format!("{text}{tail}"),
+                        spoken: format!("{spoken}{tail}"),
+                        ssml: format!("{ssml}{}", xml_escape(&speak_numbers(&tail))),
+                    }
                 } else {
                     continue;
                 };
-                results.push(Value::Dual { text, spoken });
+                results.push(value);
                 if let Some(k) = e
                     .award
                     .as_ref()

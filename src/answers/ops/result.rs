@@ -2,7 +2,6 @@
 
 use super::support::{mark_value, status_phrase, when_value};
 use super::*;
-use crate::answers::words;
 use crate::dataset::{EntryStatus, Status};
 
 pub static SPEC: OpSpec = OpSpec {
@@ -100,13 +99,7 @@ fn run(input: &OpInput) -> OpOutput {
         );
     };
     f.put("place", Value::Int(place as i64));
-    f.put(
-        "place_nth",
-        Value::Dual {
-            text: words::ordinal_figure(place as u64),
-            spoken: words::ordinal(place as u64),
-        },
-    );
+    f.put("place_nth", Value::ordinal(place as u64));
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);
     }

@@ -21,6 +21,24 @@ pub fn entry_label(data: &Dataset, e: &Entry) -> String {
     }
 }
 
+/// An entry's label as a value: "Zoë Ardent (Brellmoor)" written, "Zoë
+/// Ardent of Brellmoor" spoken (brackets read oddly aloud).
+pub fn entry_value(data: &Dataset, e: &Entry) -> Value {
+    match e.competitor.as_deref().and_then(|c| data.competitor(c)) {
+        Some(ci) => {
+            let who = &data.competitors[ci];
+            match data.group(&who.group) {
+                Some(g) => Value::Dual {
+                    text: format!("{} ({})", who.name(), data.groups[g].name),
+                    spoken: format!("{} of {}", who.name(), data.groups[g].name),
+                },
+                None => Value::Text(who.name()),
+            }
+        }
+        None => Value::Text(data.entry_name(e)),
+    }
+}
+
 /// The entity an entry stands for.
 pub fn entry_entity(data: &Dataset, e: &Entry) -> Option<EntityRef> {
     if let Some(ci) = e.competitor.as_deref().and_then(|c| data.competitor(c)) {
@@ -76,7 +94,7 @@ pub fn holders(c: &Contest, award: &str) -> Vec<usize> {
 pub fn labels(data: &Dataset, c: &Contest, ix: &[usize]) -> Value {
     Value::List(
         ix.iter()
-            .map(|&i| Value::Text(entry_label(data, &c.entries[i])))
+            .map(|&i| entry_value(data, &c.entries[i]))
             .collect(),
     )
 }
@@ -110,16 +128,68 @@ pub fn day_phrase(day: Date, now: &ZonedDateTime) -> String {
 /// the clock time in words ("nineteen forty"), as the 24-hour clock is read
 /// in the newsroom's region (common practice).
 pub fn when_value(start: &ZonedDateTime, now: &ZonedDateTime) -> Value {
-    let day = day_phrase(start.date(), now);
-    let (h, m) = (start.hour() as u64, start.minute() as u64);
-    let spoken_clock = match m {
+    let date = start.date();
+    let day = day_phrase(date, now);
+    let (clock_text, clock_spoken, clock_ssml) =
+        clock_forms(start.hour() as u64, start.minute() as u64);
+    // A named day ("on Monday 16 August") is said "on Monday the sixteenth
+    // of August" and marked as a date for speech; "today" and "tomorrow"
+    // are words already.
+    let (day_spoken, day_ssml) = if day.starts_with("on ") {
+        let (d, mo) = (date.day(), date.month());
+        (
+            format!(
+                "on {} the {} of {}",
+                weekday_name(date),
+                words::ordinal(d as u64),
+                date.strftime("%B")
+            ),
+            format!(
+                "on {} <say-as interpret-as=\"date\" format=\"dm\">{d:02}-{mo:02}</say-as>",
+                weekday_name(date)
+            ),
+        )
+    } else {
+        (day.clone(), day.clone())
+    };
+    Value::Said {
+        text: format!("{day} at {clock_text}"),
+        spoken: format!("{day_spoken} at {clock_spoken}"),
+        ssml: format!("{day_ssml} at {clock_ssml}"),
+    }
+}
+
+/// A time of day on the 24-hour clock as a value: "20:50", "twenty fifty".
+pub fn clock_value(h: u64, m: u64) -> Value {
+    let (text, spoken, ssml) = clock_forms(h, m);
+    Value::Said { text, spoken, ssml }
+}
+
+/// Written, spoken and SSML forms of a time of day; the SSML marks it with
+/// `say-as` time (W3C Note "SSML 1.0 say-as attribute values").
+fn clock_forms(h: u64, m: u64) -> (String, String, String) {
+    let spoken = match m {
         0 => format!("{} hundred", words::cardinal(h)),
         1..=9 => format!("{} oh {}", words::cardinal(h), words::cardinal(m)),
         _ => format!("{} {}", words::cardinal(h), words::cardinal(m)),
     };
-    Value::Dual {
-        text: format!("{day} at {:02}:{:02}", h, m),
-        spoken: format!("{day} at {spoken_clock}"),
+    (
+        format!("{h:02}:{m:02}"),
+        spoken,
+        format!("<say-as interpret-as=\"time\" format=\"hms24\">{h:02}:{m:02}</say-as>"),
+    )
+}
+
+fn weekday_name(d: Date) -> &'static str {
+    use jiff::civil::Weekday::*;
+    match d.weekday() {
+        Monday => "Monday",
+        Tuesday => "Tuesday",
+        Wednesday => "Wednesday",
+        Thursday => "Thursday",
+        Friday => "Friday",
+        Saturday => "Saturday",
+        Sunday => "Sunday",
     }
 }
 
@@ -216,11 +286,7 @@ pub fn breakdown(data: &Dataset, counts: &[u32], zeros: bool) -> Value {
 
 /// "1st" or "joint 2nd" for a rank shared with others.
 pub fn rank_value(rank: u32, shared: bool) -> Value {
-    let prefix = if shared { "joint " } else { "" };
-    Value::Dual {
-        text: format!("{prefix}{}", words::ordinal_figure(rank as u64)),
-        spoken: format!("{prefix}{}", words::ordinal(rank as u64)),
-    }
+    Value::ordinal_with(rank as u64, if shared { "joint" } else { "" })
 }
 
 /// Name, start and venue of a contest.
