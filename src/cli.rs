@@ -80,7 +80,8 @@ pub enum Command {
     Ask {
         #[command(flatten)]
         common: Common,
-        /// Channel to phrase the answer for.
+        /// Channel to phrase the answer for (chat, sms, voice, plain, or a
+        /// profile of the intents folder's channels.yaml); voice prints SSML.
         #[arg(long, default_value = "chat")]
         channel: String,
         /// Print the whole reply as JSON.
@@ -237,7 +238,8 @@ pub async fn run(cli: Cli) -> i32 {
                     0
                 }
                 Ok(a) => {
-                    say(&a.reply.text);
+                    // A voice channel's reply is its SSML document.
+                    say(a.reply.ssml.as_deref().unwrap_or(&a.reply.text));
                     0
                 }
                 Err(e) => {

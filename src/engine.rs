@@ -12,7 +12,6 @@ use jiff::{Timestamp, ZonedDateTime};
 use serde::{Deserialize, Serialize};
 use sha2::Sha256;
 
-use crate::answers::value::Style;
 use crate::catalog::{self, Catalog};
 use crate::dataset::{self, Dataset};
 use crate::dialogue::session::SCHEMA;
@@ -124,36 +123,10 @@ pub enum Clock {
     Fixed(Timestamp),
 }
 
-/// How replies are shaped for a channel.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
-#[serde(rename_all = "snake_case")]
-pub enum Channel {
-    /// Chat bubbles: text.
-    Chat,
-    /// Text with no markup, for any other integration.
-    Plain,
-}
-
-impl Channel {
-    /// Parses a channel name.
-    pub fn parse(s: &str) -> Option<Channel> {
-        match s {
-            "chat" => Some(Channel::Chat),
-            "plain" => Some(Channel::Plain),
-            _ => None,
-        }
-    }
-    /// The channel's name.
-    pub fn name(self) -> &'static str {
-        match self {
-            Channel::Chat => "chat",
-            Channel::Plain => "plain",
-        }
-    }
-    fn style(self) -> Style {
-        Style::Text
-    }
-}
+/// The built-in channel profiles, the fallback when a data update removes
+/// a channel a reader is using.
+static BUILT_IN_CHANNELS: std::sync::LazyLock<crate::answers::channel::Channels> =
+    std::sync::LazyLock::new(crate::answers::channel::Channels::built_in);
 
 /// Engine settings.
 #[derive(Debug, Clone)]
@@ -201,8 +174,9 @@ pub struct Incoming<'a> {
 /// this, in the HTTP layer; these are the service's own problems.
 #[derive(Debug, thiserror::Error)]
 pub enum EngineError {
-    #[error("unknown channel {0:?}; channels are chat and plain")]
-    UnknownChannel(String),
+    /// The channel names no profile; the second field lists those there are.
+    #[error("unknown channel {0:?}; channels are {1}")]
+    UnknownChannel(String, String),
     /// The session store is needed (erasure) and cannot be reached.
     #[error("{0}")]
     Store(#[from] StoreError),
@@ -211,12 +185,26 @@ pub enum EngineError {
     Busy,
 }
 
+/// How an SMS reply would be sent (3GPP TS 23.038): in the GSM 7-bit
+/// alphabet (`units` septets of 160) or in UCS-2 (`units` UTF-16 code units
+/// of 70).
+#[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
+pub struct SmsFit {
+    pub encoding: String,
+    pub units: usize,
+    pub limit: usize,
+}
+
 /// A handled message with the version facts answers can cite.
 #[derive(Debug, Clone, Serialize, Deserialize)]
 pub struct Answer {
     #[serde(flatten)]
     pub reply: Reply,
-    pub channel: Channel,
+    /// The channel the reply was shaped for.
+    pub channel: String,
+    /// For a channel that must fit one SMS: how the text would be sent.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub sms: Option<SmsFit>,
     pub dataset_version: u64,
     /// RFC 3339, in the scenario's time zone.
     pub as_of: String,
@@ -321,9 +309,8 @@ impl Engine {
     /// cannot be reached the message is answered on its own, marked
     /// `degraded`.
     pub async fn handle_message(&self, m: Incoming<'_>) -> Result<Answer, EngineError> {
-        let ch = Channel::parse(m.channel)
-            .ok_or_else(|| EngineError::UnknownChannel(m.channel.to_string()))?;
-        let key = self.user_key(ch.name(), m.user);
+        let ch = self.channel(m.channel)?;
+        let key = self.user_key(ch, m.user);
         let message = m.message_id.map(|id| self.message_key(id));
         for attempt in 0..SAVE_ATTEMPTS {
             let loaded = match self.store.load(&key, message.as_deref()).await {
@@ -404,7 +391,7 @@ impl Engine {
     /// another schema, or idle past the TTL, is not used.
     fn answer(
         &self,
-        ch: Channel,
+        ch: &str,
         stored: Option<Session>,
         text: &str,
         key: &str,
@@ -415,19 +402,40 @@ impl Engine {
         let ttl = i64::try_from(self.settings.session_ttl.as_secs()).unwrap_or(i64::MAX);
         let session = stored
             .filter(|s| s.schema == SCHEMA && s.updated_at.saturating_add(ttl) >= now_s)
-            .unwrap_or_else(|| Session::new(ch.name(), now_s));
+            .unwrap_or_else(|| Session::new(ch, now_s));
+        // The channel was checked on arrival; if an update since removed
+        // its profile, the built-in one of that name (or plain) serves.
+        let profile = snap
+            .catalog
+            .channels
+            .get(ch)
+            .or_else(|| BUILT_IN_CHANNELS.get(ch))
+            .or_else(|| BUILT_IN_CHANNELS.get("plain"))
+            .expect("the built-in profiles include plain (checked by a unit test)");
         let ctx = TurnContext {
             data: &snap.data,
             catalog: &snap.catalog,
             understanding: &snap.understanding,
             now: &now,
-            style: ch.style(),
+            channel: profile,
         };
         let (reply, session) = turn(&ctx, session, text);
+        let reply_text = reply.text.clone();
         tracing::debug!(user = %key, intent = ?reply.intent, outcome = ?reply.outcome, "turn");
         let answer = Answer {
             reply,
-            channel: ch,
+            channel: ch.to_string(),
+            sms: profile.one_sms_segment.then(|| {
+                let m = crate::answers::sms::measure(&reply_text);
+                SmsFit {
+                    encoding: match m.encoding {
+                        crate::answers::sms::Encoding::Gsm7 => "gsm7".into(),
+                        crate::answers::sms::Encoding::Ucs2 => "ucs2".into(),
+                    },
+                    units: m.units,
+                    limit: m.limit,
+                }
+            }),
             dataset_version: snap.data.version,
             as_of: snap
                 .data
@@ -441,11 +449,22 @@ impl Engine {
         (answer, session)
     }
 
+    /// The channel's name, checked against the profiles in force.
+    fn channel<'a>(&self, name: &'a str) -> Result<&'a str, EngineError> {
+        let snap = self.snapshot();
+        match snap.catalog.channels.get(name) {
+            Some(_) => Ok(name),
+            None => Err(EngineError::UnknownChannel(
+                name.to_string(),
+                snap.catalog.channels.names().join(", "),
+            )),
+        }
+    }
+
     /// Removes everything kept for a reader on a channel.
     pub async fn erase(&self, channel: &str, user: &str) -> Result<u64, EngineError> {
-        let ch = Channel::parse(channel)
-            .ok_or_else(|| EngineError::UnknownChannel(channel.to_string()))?;
-        let key = self.user_key(ch.name(), user);
+        let ch = self.channel(channel)?;
+        let key = self.user_key(ch, user);
         let removed = self.store.erase(&key).await?;
         // Erasures are worth an info line; which reader only at debug.
         tracing::info!(removed, "reader's data erased");

@@ -206,3 +206,49 @@ async fn a_wrong_method_and_a_bad_path_get_the_json_error_format() {
     let body: serde_json::Value = r.json().await.unwrap();
     assert_eq!(body["error"]["code"], "bad_message_id");
 }
+
+#[tokio::test]
+async fn every_channel_is_served_over_http_with_its_own_shape() {
+    let s = Server::start(demo_engine()).await;
+    let ask = |channel: &'static str| {
+        let s = &s;
+        async move {
+            let r = s
+                .client
+                .post(s.url("/v1/messages"))
+                .json(&json!({"user": format!("r-{channel}"), "text": "who won the women's 100 m freestyle?", "channel": channel}))
+                .send()
+                .await
+                .unwrap();
+            assert_eq!(r.status(), 200, "{channel}");
+            r.json::<serde_json::Value>().await.unwrap()
+        }
+    };
+    let chat = ask("chat").await;
+    assert_eq!(chat["channel"], "chat");
+    assert!(chat["quick_replies"]
+        .as_array()
+        .is_some_and(|q| !q.is_empty()));
+    assert!(chat["markdown"]
+        .as_str()
+        .unwrap()
+        .contains("**Pevelle Cosevmont (Vastrelia)**"));
+    assert!(chat.get("ssml").is_none());
+
+    let sms = ask("sms").await;
+    assert_eq!(sms["sms"]["limit"], 160);
+    assert!(sms["sms"]["units"].as_u64().unwrap() <= 160);
+    assert!(sms.get("quick_replies").is_none());
+
+    let voice = ask("voice").await;
+    let doc = voice["ssml"].as_str().unwrap();
+    assert!(doc.contains("<speak version=\"1.1\""), "{doc}");
+    assert!(voice["text"]
+        .as_str()
+        .unwrap()
+        .contains("one hundred metres"));
+
+    let plain = ask("plain").await;
+    assert!(plain.get("ssml").is_none() && plain.get("markdown").is_none());
+    assert!(plain["text"].as_str().unwrap().contains("100 m"));
+}

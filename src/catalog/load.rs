@@ -45,10 +45,13 @@ struct IntentFile {
     #[serde(default)]
     slots: BTreeMap<String, Spanned<SlotFile>>,
     replies: Spanned<BTreeMap<String, Spanned<String>>>,
+    /// Wording for one channel, by outcome, over `replies`.
+    #[serde(default)]
+    channel_replies: BTreeMap<String, BTreeMap<String, Spanned<String>>>,
     #[serde(default)]
     settings: BTreeMap<String, String>,
     #[serde(default)]
-    suggestions: Vec<String>,
+    suggestions: Vec<Spanned<String>>,
 }
 
 #[derive(Debug, Deserialize)]
@@ -69,7 +72,13 @@ struct ServiceFile {
     reset: Spanned<String>,
     #[serde(default)]
     examples: Vec<String>,
+    /// Wording for one channel, by key (`not_understood`, `choose`, `reset`).
+    #[serde(default)]
+    channel_wording: BTreeMap<String, BTreeMap<String, Spanned<String>>>,
 }
+
+/// The file of an intents folder that adds or replaces channel profiles.
+pub const CHANNELS_FILE: &str = "channels.yaml";
 
 /// The file holding service-wide wording in an intents folder.
 pub const SERVICE_FILE: &str = "service.yaml";
@@ -112,7 +121,14 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
     let mut intents = Vec::new();
     let mut service = None;
     let mut names: HashMap<String, String> = HashMap::new();
+    let mut channels = crate::answers::channel::Channels::built_in();
+    for (file, text) in files.iter().filter(|(f, _)| f.ends_with(CHANNELS_FILE)) {
+        channels = crate::answers::channel::Channels::with_file(file, text, &mut problems);
+    }
     for (file, text) in files {
+        if file.ends_with(CHANNELS_FILE) {
+            continue;
+        }
         if file.ends_with(SERVICE_FILE) {
             match serde_saphyr::from_str::<ServiceFile>(text) {
                 Ok(s) => service = service_wording(file, s, &mut problems),
@@ -156,13 +172,20 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
     if !problems.is_empty() {
         return Err(CatalogError(problems));
     }
-    Ok(Catalog {
+    let catalog = Catalog {
         intents,
         service: service.expect("checked above"),
-    })
+        channels,
+    };
+    check_channel_names(&catalog, files, &mut problems);
+    if !problems.is_empty() {
+        return Err(CatalogError(problems));
+    }
+    Ok(catalog)
 }
 
-fn yaml_problem(file: &str, e: &serde_saphyr::Error) -> CatalogProblem {
+/// A YAML syntax or shape problem, located.
+pub fn yaml_problem(file: &str, e: &serde_saphyr::Error) -> CatalogProblem {
     let (line, column) = e
         .location()
         .map(|l| (l.line(), l.column()))
@@ -248,12 +271,97 @@ fn service_wording(
     let reset = out.pop()?;
     let choose = out.pop()?;
     let not_understood = out.pop()?;
+    let mut by_channel: HashMap<String, HashMap<String, Template>> = HashMap::new();
+    for (channel, wording) in &s.channel_wording {
+        for (key, text) in wording {
+            let names: &[&str] = match key.as_str() {
+                "not_understood" => &["examples"],
+                "choose" => &["options", "noun"],
+                "reset" => &[],
+                other => {
+                    problems.push(at(
+                        file,
+                        text,
+                        format!("channel_wording: {other:?} is not service wording; use not_understood, choose or reset"),
+                    ));
+                    continue;
+                }
+            };
+            let Some(t) = template(file, text, problems) else {
+                continue;
+            };
+            for n in t.names() {
+                if !names.contains(&n) {
+                    problems.push(at(
+                        file,
+                        text,
+                        format!(
+                            "placeholder {{{n}}} is not available here; use {}",
+                            list_or_none(names)
+                        ),
+                    ));
+                }
+            }
+            by_channel
+                .entry(channel.clone())
+                .or_default()
+                .insert(key.clone(), t);
+        }
+    }
     Some(ServiceWording {
         not_understood,
         choose,
         reset,
         examples: s.examples,
+        by_channel,
     })
+}
+
+/// Channel names in `channel_replies` and `channel_wording` must name a
+/// profile; checked once every file is read, since profiles may come from
+/// the folder's own `channels.yaml`.
+fn check_channel_names(
+    catalog: &Catalog,
+    files: &[(String, String)],
+    problems: &mut Vec<CatalogProblem>,
+) {
+    let known = catalog.channels.names().join(", ");
+    for (file, text) in files {
+        // Each channel named, with the first wording under it (for its line).
+        type Named = Vec<(String, Option<Spanned<String>>)>;
+        let first = |m: BTreeMap<String, BTreeMap<String, Spanned<String>>>| -> Named {
+            m.into_iter()
+                .map(|(k, v)| (k, v.into_values().next()))
+                .collect()
+        };
+        let (what, named) = if file.ends_with(SERVICE_FILE) {
+            match serde_saphyr::from_str::<ServiceFile>(text) {
+                Ok(s) => ("channel_wording", first(s.channel_wording)),
+                Err(_) => continue,
+            }
+        } else if file.ends_with(CHANNELS_FILE) {
+            continue;
+        } else {
+            match serde_saphyr::from_str::<IntentFile>(text) {
+                Ok(f) => ("channel_replies", first(f.channel_replies)),
+                Err(_) => continue,
+            }
+        };
+        for (name, text) in named {
+            if catalog.channels.get(&name).is_none() {
+                let message = format!("{what}: no channel {name:?}; the channels are {known}");
+                problems.push(match &text {
+                    Some(t) => at(file, t, message),
+                    None => CatalogProblem {
+                        file: file.clone(),
+                        line: 0,
+                        column: 0,
+                        message,
+                    },
+                });
+            }
+        }
+    }
 }
 
 fn list_or_none(names: &[&str]) -> String {
@@ -469,6 +577,59 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
         }
         replies.insert(outcome.clone(), t);
     }
+    let mut channel_replies: HashMap<String, HashMap<String, Template>> = HashMap::new();
+    for (channel, wording) in &f.channel_replies {
+        for (outcome, text) in wording {
+            let Some(spec) = op.outcome(outcome) else {
+                problems.push(at(
+                    file,
+                    text,
+                    format!(
+                        "channel_replies: operation {} has no outcome {outcome:?}",
+                        op.name
+                    ),
+                ));
+                continue;
+            };
+            let Some(t) = template(file, text, problems) else {
+                continue;
+            };
+            for n in t.names() {
+                if !declared.contains(n) && !spec.facts.contains(&n) {
+                    problems.push(at(
+                        file,
+                        text,
+                        format!(
+                            "placeholder {{{n}}} names no slot and no fact of outcome {outcome:?}"
+                        ),
+                    ));
+                }
+            }
+            channel_replies
+                .entry(channel.clone())
+                .or_default()
+                .insert(outcome.clone(), t);
+        }
+    }
+    // A suggestion is a question offered as a quick reply; it may name the
+    // intent's slots ("when was the {contest}?") and is left out when a
+    // slot it names has no value.
+    let mut suggestions = Vec::new();
+    for s in &f.suggestions {
+        let Some(t) = template(file, s, problems) else {
+            continue;
+        };
+        for n in t.names() {
+            if !declared.contains(n) {
+                problems.push(at(
+                    file,
+                    s,
+                    format!("placeholder {{{n}}} in a suggestion names no slot of this intent"),
+                ));
+            }
+        }
+        suggestions.push(t);
+    }
     if problems.len() > before {
         return None;
     }
@@ -479,8 +640,9 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
         phrasings,
         slots,
         replies,
+        channel_replies,
         settings: f.settings,
-        suggestions: f.suggestions,
+        suggestions,
         file: file.to_string(),
     })
 }

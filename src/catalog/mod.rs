@@ -10,7 +10,7 @@ pub mod template;
 
 use std::collections::{BTreeMap, HashMap};
 
-pub use load::{load_dir, load_texts, CatalogError, CatalogProblem};
+pub use load::{load_dir, load_texts, yaml_problem, CatalogError, CatalogProblem};
 pub use template::Template;
 
 use crate::answers::ops::{EntityKind, OpSpec};
@@ -20,6 +20,8 @@ use crate::answers::ops::{EntityKind, OpSpec};
 pub struct Catalog {
     pub intents: Vec<Intent>,
     pub service: ServiceWording,
+    /// Channel profiles: the built-in ones and the folder's own.
+    pub channels: crate::answers::channel::Channels,
 }
 
 impl Catalog {
@@ -49,10 +51,13 @@ pub struct Intent {
     pub slots: Vec<SlotDef>,
     /// Wording per outcome of the operation.
     pub replies: HashMap<String, Template>,
+    /// Wording for one channel (by channel name, then outcome) that
+    /// replaces `replies` there; other channels derive theirs.
+    pub channel_replies: HashMap<String, HashMap<String, Template>>,
     /// Operation settings (for example `rows: 5`).
     pub settings: BTreeMap<String, String>,
-    /// Follow-up questions to offer after an answer.
-    pub suggestions: Vec<String>,
+    /// Follow-up questions to offer after an answer, with slot placeholders.
+    pub suggestions: Vec<Template>,
     /// Where the intent was defined, for messages.
     pub file: String,
 }
@@ -85,4 +90,33 @@ pub struct ServiceWording {
     pub reset: Template,
     /// Example questions offered when a message is not understood.
     pub examples: Vec<String>,
+    /// Wording for one channel (by channel name, then key) over the above.
+    pub by_channel: HashMap<String, HashMap<String, Template>>,
+}
+
+impl ServiceWording {
+    /// The wording for `key` on `channel`: the channel's own, else the
+    /// default.
+    pub fn for_channel<'a>(
+        &'a self,
+        channel: &str,
+        key: &str,
+        default: &'a Template,
+    ) -> &'a Template {
+        self.by_channel
+            .get(channel)
+            .and_then(|m| m.get(key))
+            .unwrap_or(default)
+    }
+}
+
+impl Intent {
+    /// The wording of an outcome on a channel: the channel's own, else the
+    /// default.
+    pub fn reply_for(&self, channel: &str, outcome: &str) -> Option<&Template> {
+        self.channel_replies
+            .get(channel)
+            .and_then(|m| m.get(outcome))
+            .or_else(|| self.replies.get(outcome))
+    }
 }

@@ -3,15 +3,18 @@
 //! stay outside, so the logic is tested without either.
 
 use std::collections::{BTreeMap, HashMap};
+use std::sync::LazyLock;
 
 use jiff::ZonedDateTime;
 use serde::{Deserialize, Serialize};
 
 use super::context;
 use super::session::{load_entity, load_slots, store_entity, store_slots, Pending, Session};
+use crate::answers::channel::Profile;
 use crate::answers::ops::{EntityKind, OpInput, OpOutput, OutcomeClass, SlotValue, Slots};
+use crate::answers::realise::{realise, realise_text, Realised};
 use crate::answers::value::{Style, Value};
-use crate::catalog::{Catalog, Intent};
+use crate::catalog::{Catalog, Intent, Template};
 use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::Scored;
 use crate::understand::lexicon::Target;
@@ -73,6 +76,16 @@ pub struct Reply {
     pub facts: HashMap<String, Value>,
     /// The best intents and why.
     pub candidates: Vec<Scored>,
+    /// The SSML 1.1 document, on channels that speak.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub ssml: Option<String>,
+    /// The text with light emphasis (Markdown bold), on channels that show it.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub markdown: Option<String>,
+    /// Follow-up questions the reader can send as they are, on channels
+    /// that offer quick replies.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub quick_replies: Vec<String>,
 }
 
 /// Everything a turn reads that is not the session.
@@ -81,8 +94,29 @@ pub struct TurnContext<'a> {
     pub catalog: &'a Catalog,
     pub understanding: &'a Understanding,
     pub now: &'a ZonedDateTime,
-    pub style: Style,
+    /// The channel's profile: words, length, SSML, quick replies.
+    pub channel: &'a Profile,
 }
+
+impl TurnContext<'_> {
+    /// Wording realised for the channel.
+    fn say(&self, t: &Template, values: &HashMap<String, Value>) -> Realised {
+        realise(self.channel, t, values, None)
+    }
+
+    /// The service wording `key` for this channel.
+    fn service(&self, key: &str, default: &Template, values: &HashMap<String, Value>) -> Realised {
+        let t = self
+            .catalog
+            .service
+            .for_channel(&self.channel.name, key, default);
+        self.say(t, values)
+    }
+}
+
+/// The closing sentence of answers on channels that cite freshness.
+static FRESHNESS: LazyLock<Template> =
+    LazyLock::new(|| Template::parse("As of {as_of}.").expect("fixed wording parses"));
 
 const RESET: &[&str] = &[
     "start over",
@@ -109,8 +143,8 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         let mut fresh = Session::new(&channel, s.updated_at);
         fresh.turn = s.turn;
         fresh.created_at = s.created_at;
-        let text = ctx.catalog.service.reset.render(&HashMap::new(), ctx.style);
-        return (plain_reply(text, Outcome::Answered, None, 1.0, &a), fresh);
+        let said = ctx.service("reset", &ctx.catalog.service.reset, &HashMap::new());
+        return (plain_reply(said, Outcome::Answered, None, 1.0, &a), fresh);
     }
 
     if let Some(p) = s.pending.take() {
@@ -213,7 +247,7 @@ fn proceed(
                 options: vec![],
             });
             let mut r = plain_reply(
-                def.ask.clone(),
+                realise_text(ctx.channel, &def.ask),
                 Outcome::Clarify,
                 Some(intent),
                 confidence,
@@ -233,7 +267,13 @@ fn proceed(
             };
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);
-            plain_reply(text, Outcome::NoData, Some(intent), confidence, a)
+            plain_reply(
+                realise_text(ctx.channel, &text),
+                Outcome::NoData,
+                Some(intent),
+                confidence,
+                a,
+            )
         }
         None => run(ctx, s, intent, slots, confidence, a),
     }
@@ -253,9 +293,17 @@ fn ask_choice(
     let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
     let noun = options.first().map(|e| noun_for(*e)).unwrap_or("one");
     let mut values = HashMap::new();
-    values.insert("options".to_string(), Value::from(labels.clone()));
+    let spoken: Vec<Value> = options
+        .iter()
+        .zip(&labels)
+        .map(|(e, text)| Value::Dual {
+            text: text.clone(),
+            spoken: describe_spoken(ctx.data, *e),
+        })
+        .collect();
+    values.insert("options".to_string(), Value::List(spoken));
     values.insert("noun".to_string(), Value::Text(noun.to_string()));
-    let text = ctx.catalog.service.choose.render(&values, ctx.style);
+    let said = ctx.service("choose", &ctx.catalog.service.choose, &values);
     remember_asked(ctx.data, s, &slots);
     s.pending = Some(Pending {
         intent: intent.name.clone(),
@@ -263,7 +311,7 @@ fn ask_choice(
         slot: slot.to_string(),
         options: options.iter().map(|e| store_entity(ctx.data, *e)).collect(),
     });
-    let mut r = plain_reply(text, Outcome::Clarify, Some(intent), confidence, a);
+    let mut r = plain_reply(said, Outcome::Clarify, Some(intent), confidence, a);
     r.slots = slots_out(ctx.data, &slots);
     r.options = options
         .iter()
@@ -336,11 +384,15 @@ fn run(
                     .entry(k.clone())
                     .or_insert_with(|| Value::Text(v.display(ctx.data)));
             }
-            let text = intent
-                .replies
-                .get(outcome)
-                .map(|t| t.render(&values, ctx.style))
+            values.insert("as_of".into(), ctx.as_of());
+            let said = intent
+                .reply_for(&ctx.channel.name, outcome)
+                .map(|t| {
+                    let fresh = intent.operation.from_data().then_some(&*FRESHNESS);
+                    realise(ctx.channel, t, &values, fresh)
+                })
                 .unwrap_or_default();
+            let quick_replies = quick_replies(ctx, intent, &slots);
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);
             let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
@@ -350,7 +402,7 @@ fn run(
                 OutcomeClass::NoData => Outcome::NoData,
             };
             Reply {
-                text,
+                text: said.text,
                 intent: Some(intent.name.clone()),
                 slots: slots_out(ctx.data, &slots),
                 outcome: class,
@@ -359,6 +411,9 @@ fn run(
                 options: vec![],
                 facts,
                 candidates: a.scores.iter().take(3).cloned().collect(),
+                ssml: said.ssml,
+                markdown: said.markdown,
+                quick_replies,
             }
         }
     }
@@ -626,6 +681,24 @@ pub fn describe(data: &Dataset, e: EntityRef) -> String {
     }
 }
 
+/// The same label as it is said: "Zoë Quillon, the swimmer from Quessary".
+fn describe_spoken(data: &Dataset, e: EntityRef) -> String {
+    match e {
+        EntityRef::Competitor(i) => {
+            let c = &data.competitors[i];
+            let noun = data.sport(&c.sport).map(|s| data.sports[s].noun.as_str());
+            let group = data.group(&c.group).map(|g| data.groups[g].name.as_str());
+            match (noun, group) {
+                (Some(n), Some(g)) => format!("{}, the {n} from {g}", c.name()),
+                (Some(n), None) => format!("{}, the {n}", c.name()),
+                (None, Some(g)) => format!("{} from {g}", c.name()),
+                (None, None) => c.name(),
+            }
+        }
+        other => describe(data, other),
+    }
+}
+
 fn noun_for(e: EntityRef) -> &'static str {
     match e {
         EntityRef::Competitor(_) => "person",
@@ -652,14 +725,14 @@ fn slots_out(data: &Dataset, slots: &Slots) -> BTreeMap<String, SlotOut> {
 }
 
 fn plain_reply(
-    text: String,
+    said: Realised,
     outcome: Outcome,
     intent: Option<&Intent>,
     confidence: f32,
     a: &Analysis,
 ) -> Reply {
     Reply {
-        text,
+        text: said.text,
         intent: intent.map(|i| i.name.clone()),
         slots: BTreeMap::new(),
         outcome,
@@ -668,7 +741,37 @@ fn plain_reply(
         options: vec![],
         facts: HashMap::new(),
         candidates: a.scores.iter().take(3).cloned().collect(),
+        ssml: said.ssml,
+        markdown: said.markdown,
+        quick_replies: vec![],
     }
+}
+
+impl TurnContext<'_> {
+    /// When the data were last confirmed, as a time of day.
+    fn as_of(&self) -> Value {
+        let z = self.data.as_of.to_zoned_datetime(self.data.tz.clone());
+        crate::answers::ops::support::clock_value(z.hour() as u64, z.minute() as u64)
+    }
+}
+
+/// The intent's suggestions as quick replies: those whose slots all have a
+/// value, with the values filled in, as many as the channel offers.
+fn quick_replies(ctx: &TurnContext, intent: &Intent, slots: &Slots) -> Vec<String> {
+    if ctx.channel.quick_replies == 0 {
+        return vec![];
+    }
+    let values: HashMap<String, Value> = slots
+        .iter()
+        .map(|(k, v)| (k.clone(), Value::Text(v.display(ctx.data))))
+        .collect();
+    intent
+        .suggestions
+        .iter()
+        .filter(|t| t.names().iter().all(|n| values.contains_key(*n)))
+        .map(|t| t.render(&values, Style::Text))
+        .take(ctx.channel.quick_replies)
+        .collect()
 }
 
 fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
@@ -684,15 +787,15 @@ fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
                 .collect(),
         ),
     );
-    let text = ctx
-        .catalog
-        .service
-        .not_understood
-        .render(&values, ctx.style);
+    let said = ctx.service(
+        "not_understood",
+        &ctx.catalog.service.not_understood,
+        &values,
+    );
     // Confidence that no intent fits: the complement of the best score.
     let best = a.scores.first().map(|s| s.score).unwrap_or(0.0);
     plain_reply(
-        text,
+        said,
         Outcome::NotUnderstood,
         None,
         (1.0 - best).clamp(0.0, 1.0),

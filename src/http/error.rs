@@ -76,7 +76,7 @@ impl From<crate::engine::EngineError> for ApiError {
     fn from(e: crate::engine::EngineError) -> ApiError {
         use crate::engine::EngineError;
         match e {
-            EngineError::UnknownChannel(_) => ApiError::invalid("unknown_channel", e.to_string()),
+            EngineError::UnknownChannel(..) => ApiError::invalid("unknown_channel", e.to_string()),
             EngineError::Store(_) => ApiError {
                 status: StatusCode::SERVICE_UNAVAILABLE,
                 code: "store_unavailable",

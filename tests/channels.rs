@@ -1,0 +1,234 @@
+//! Every channel against the eval set's conversations and the standards:
+//! one SMS segment (3GPP TS 23.038), SSML 1.1 spoken by a real engine,
+//! readability of voice replies (Flesch 1948), quick replies that are real
+//! questions, and a snapshot of each channel's output for every intent.
+
+mod common;
+
+use std::collections::BTreeMap;
+use std::path::Path;
+
+use common::{demo_engine, speech};
+use tidings::answers::sms;
+use tidings::engine::{Answer, Engine};
+use tidings::eval::{load_set, Case};
+
+/// The eval set's conversations, each as its list of messages.
+fn conversations() -> Vec<Vec<String>> {
+    let set = load_set(Path::new(concat!(
+        env!("CARGO_MANIFEST_DIR"),
+        "/tests/eval/games.yaml"
+    )))
+    .expect("the eval set loads");
+    set.into_iter()
+        .map(|c| match c {
+            Case::Single(t) => vec![t.ask],
+            Case::Conversation { conversation, .. } => {
+                conversation.into_iter().map(|t| t.ask).collect()
+            }
+        })
+        .collect()
+}
+
+/// Every reply of the eval set on one channel, each conversation by its
+/// own reader.
+async fn replies_on(engine: &Engine, channel: &str) -> Vec<(String, Answer)> {
+    let mut out = Vec::new();
+    for (i, conv) in conversations().into_iter().enumerate() {
+        let user = format!("{channel}-reader-{i}");
+        for ask in conv {
+            let a = engine
+                .handle(&user, channel, &ask)
+                .await
+                .unwrap_or_else(|e| panic!("{channel}: {ask:?}: {e}"));
+            assert!(
+                !a.reply.text.trim().is_empty(),
+                "{channel}: {ask:?}: empty reply"
+            );
+            out.push((ask, a));
+        }
+    }
+    out
+}
+
+#[tokio::test]
+async fn every_sms_reply_fits_one_segment() {
+    let engine = demo_engine();
+    let replies = replies_on(&engine, "sms").await;
+    let mut ucs2 = 0;
+    let mut too_long = Vec::new();
+    for (ask, a) in &replies {
+        let m = sms::measure(&a.reply.text);
+        // 3GPP TS 23.038 §6.2.1 (default alphabet and extension table) and
+        // TS 23.040: one segment is 160 septets, or 70 UCS-2 characters.
+        if !m.fits_one_segment() {
+            too_long.push(format!(
+                "{ask:?} → {:?} takes {} units of {}",
+                a.reply.text, m.units, m.limit
+            ));
+        }
+        let fit = a
+            .sms
+            .as_ref()
+            .expect("the sms channel reports its encoding");
+        assert_eq!((fit.units, fit.limit), (m.units, m.limit));
+        if m.encoding == sms::Encoding::Ucs2 {
+            ucs2 += 1;
+        }
+    }
+    assert!(too_long.is_empty(), "{}", too_long.join("\n"));
+    // Shorter wording is chosen, never a cut: no reply ends mid-word.
+    for (ask, a) in &replies {
+        let t = a.reply.text.trim_end();
+        assert!(
+            t.ends_with(['.', '?', '!']),
+            "{ask:?} → {t:?} does not end a sentence"
+        );
+    }
+    eprintln!("{} sms replies, {ucs2} in UCS-2", replies.len());
+}
+
+#[tokio::test]
+async fn every_voice_reply_is_valid_ssml_and_readable() {
+    let engine = demo_engine();
+    let replies = replies_on(&engine, "voice").await;
+    let mut texts = Vec::new();
+    for (ask, a) in &replies {
+        let doc = a.reply.ssml.as_deref().expect("voice replies carry SSML");
+        if let Err(e) = speech::check_ssml(doc) {
+            panic!("{ask:?}: {e}\n{doc}");
+        }
+        // No symbol a speech engine would read oddly in the spoken text.
+        let odd: Vec<char> = a
+            .reply
+            .text
+            .chars()
+            .filter(|c| "()[]{}<>*#/\\|_~^@&%\"“”".contains(*c) || c.is_ascii_digit())
+            .collect();
+        assert!(odd.is_empty(), "{ask:?} → {:?} has {odd:?}", a.reply.text);
+        texts.push(a.reply.text.clone());
+    }
+    // Flesch Reading Ease (Flesch 1948) over all voice replies together.
+    let refs: Vec<&str> = texts.iter().map(String::as_str).collect();
+    let score = speech::flesch_reading_ease(&refs);
+    eprintln!(
+        "Flesch reading ease of {} voice replies: {score:.1}",
+        texts.len()
+    );
+    assert!(score >= 60.0, "voice replies read at {score:.1}, below 60");
+}
+
+#[tokio::test]
+async fn every_distinct_voice_reply_is_spoken_by_a_real_engine() {
+    let engine = demo_engine();
+    let mut docs: Vec<String> = replies_on(&engine, "voice")
+        .await
+        .into_iter()
+        .filter_map(|(_, a)| a.reply.ssml)
+        .collect();
+    docs.sort();
+    docs.dedup();
+    for doc in &docs {
+        let secs = speech::espeak_seconds(doc).unwrap_or_else(|e| panic!("{e}\n{doc}"));
+        assert!(secs > 0.0, "no audio for {doc}");
+    }
+    eprintln!("{} distinct voice replies spoken by espeak-ng", docs.len());
+}
+
+#[tokio::test]
+async fn quick_replies_are_questions_the_service_answers() {
+    let engine = demo_engine();
+    let mut offered = 0;
+    for (i, conv) in conversations().into_iter().enumerate() {
+        let user = format!("quick-{i}");
+        for ask in conv {
+            let a = engine.handle(&user, "chat", &ask).await.unwrap();
+            assert!(a.reply.quick_replies.len() <= 3);
+            for q in &a.reply.quick_replies {
+                // Sent by a reader of its own right after the same answer.
+                let probe = format!("{user}-probe-{offered}");
+                engine.handle(&probe, "chat", &ask).await.unwrap();
+                let b = engine.handle(&probe, "chat", q).await.unwrap();
+                let outcome = serde_json::to_value(b.reply.outcome).unwrap();
+                assert!(
+                    outcome == "answered" || outcome == "no_data",
+                    "quick reply {q:?} after {ask:?} → {outcome}: {}",
+                    b.reply.text
+                );
+                offered += 1;
+            }
+        }
+    }
+    assert!(offered > 50, "only {offered} quick replies were offered");
+}
+
+/// One question per intent, for the snapshots.
+const PER_INTENT: [(&str, &str); 18] = [
+    ("podium", "who won the women's 200 m freestyle?"),
+    ("medalist", "who got bronze in the men's 400 m?"),
+    (
+        "competitor_result",
+        "how did Zoë Quillon do in the women's 100 m freestyle?",
+    ),
+    ("competitor_profile", "tell me about Wonorin Galkace"),
+    (
+        "competitor_medals",
+        "how many medals has Hurra Brussand won?",
+    ),
+    ("competitor_next", "when does Zoë Quillon compete next?"),
+    ("delegation_medals", "how many medals has Quessary won?"),
+    ("medal_table_top", "show me the medal table"),
+    ("medal_table_leader", "who leads the medal table?"),
+    ("most_medals", "which delegation has the most medals?"),
+    ("contest_time", "when is the women's 100 m final?"),
+    ("schedule_day", "what's on tomorrow?"),
+    ("live_leader", "who is leading the men's marathon?"),
+    ("head_to_head", "did Lirust Dosavorn beat Bandan Zorvren?"),
+    ("best_mark", "what is the best long jump so far?"),
+    ("greeting", "hello"),
+    ("thanks", "thanks"),
+    ("help", "what can you do?"),
+];
+
+#[tokio::test]
+async fn each_channel_phrases_every_intent() {
+    let engine = demo_engine();
+    let mut seen = BTreeMap::new();
+    for (intent, ask) in PER_INTENT {
+        let mut shown = String::new();
+        for channel in ["chat", "sms", "voice", "plain"] {
+            let a = engine
+                .handle(&format!("snap-{intent}-{channel}"), channel, ask)
+                .await
+                .unwrap();
+            assert_eq!(
+                a.reply.intent.as_deref(),
+                Some(intent),
+                "{ask:?} on {channel}"
+            );
+            shown.push_str(&format!("[{channel}] {}\n", a.reply.text));
+            if let Some(m) = &a.reply.markdown {
+                shown.push_str(&format!("[{channel} markdown] {m}\n"));
+            }
+            if !a.reply.quick_replies.is_empty() {
+                shown.push_str(&format!(
+                    "[{channel} quick replies] {}\n",
+                    a.reply.quick_replies.join(" | ")
+                ));
+            }
+            if let Some(s) = &a.reply.ssml {
+                shown.push_str(&format!("[{channel} ssml] {s}\n"));
+            }
+            if let Some(f) = &a.sms {
+                shown.push_str(&format!(
+                    "[{channel} encoding] {} {}/{}\n",
+                    f.encoding, f.units, f.limit
+                ));
+            }
+        }
+        seen.insert(intent, shown);
+    }
+    for (intent, shown) in seen {
+        insta::assert_snapshot!(intent, shown);
+    }
+}
