@@ -44,3 +44,38 @@ fn every_yaml_example_in_the_intents_guide_loads() {
         }
     }
 }
+
+/// Blocks of the guide that show a `channels.yaml` (first line
+/// `# channels.yaml`) are valid channel profiles.
+#[test]
+fn every_channel_profile_example_in_the_guide_loads() {
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let guide = std::fs::read_to_string(root.join("docs/intents.md")).unwrap();
+    let mut found = 0;
+    let mut lines = guide.lines().enumerate().peekable();
+    while let Some((i, line)) = lines.next() {
+        if line.trim() != "```text"
+            || lines.peek().map(|(_, l)| l.trim()) != Some("# channels.yaml")
+        {
+            continue;
+        }
+        let mut text = String::new();
+        for (_, l) in lines.by_ref() {
+            if l.trim_start().starts_with("```") {
+                break;
+            }
+            text.push_str(l);
+            text.push('\n');
+        }
+        let mut problems = Vec::new();
+        let c = tidings::answers::channel::Channels::with_file("docs", &text, &mut problems);
+        assert!(
+            problems.is_empty(),
+            "docs/intents.md line {}: {problems:?}",
+            i + 2
+        );
+        assert!(c.names().len() > 4, "the example adds a channel");
+        found += 1;
+    }
+    assert!(found >= 1, "the guide shows a channels.yaml");
+}
