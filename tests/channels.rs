@@ -8,7 +8,7 @@ mod common;
 use std::collections::BTreeMap;
 use std::path::Path;
 
-use common::{demo_engine, speech};
+use common::{demo_engine, speech, Server};
 use tidings::answers::sms;
 use tidings::engine::{Answer, Engine};
 use tidings::eval::{load_set, Case};
@@ -190,17 +190,25 @@ const PER_INTENT: [(&str, &str); 18] = [
     ("help", "what can you do?"),
 ];
 
+/// Every intent on every channel through HTTP, as a client sees it.
 #[tokio::test]
 async fn each_channel_phrases_every_intent() {
-    let engine = demo_engine();
+    let server = Server::start(demo_engine()).await;
     let mut seen = BTreeMap::new();
     for (intent, ask) in PER_INTENT {
         let mut shown = String::new();
         for channel in ["chat", "sms", "voice", "plain"] {
-            let a = engine
-                .handle(&format!("snap-{intent}-{channel}"), channel, ask)
+            let r = server
+                .client
+                .post(server.url("/v1/messages"))
+                .json(&serde_json::json!({
+                    "user": format!("snap-{intent}-{channel}"), "text": ask, "channel": channel
+                }))
+                .send()
                 .await
                 .unwrap();
+            assert_eq!(r.status(), 200, "{ask:?} on {channel}");
+            let a: Answer = r.json().await.unwrap();
             assert_eq!(
                 a.reply.intent.as_deref(),
                 Some(intent),
