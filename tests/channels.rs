@@ -240,3 +240,60 @@ async fn each_channel_phrases_every_intent() {
         insta::assert_snapshot!(intent, shown);
     }
 }
+
+/// A name from the data that looks like markup is spoken as text: the
+/// winner of the men's 100 m renamed `<break time="9s"/> & Co` must not
+/// make the engine pause for nine seconds (XML 1.0 §2.4 escaping).
+#[tokio::test]
+async fn markup_in_the_data_is_escaped_in_ssml() {
+    let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+    let dir = std::env::temp_dir().join(format!(
+        "tidings-markup-{}-{:08x}",
+        std::process::id(),
+        rand::random::<u32>()
+    ));
+    std::fs::create_dir_all(&dir).unwrap();
+    for f in std::fs::read_dir(&root).unwrap().flatten() {
+        std::fs::copy(f.path(), dir.join(f.file_name())).unwrap();
+    }
+    let path = dir.join("competitors.json");
+    let mut people: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(&path).unwrap()).unwrap();
+    for p in people.as_array_mut().unwrap() {
+        if p["id"] == "p005" {
+            p["family"] = serde_json::json!("<break time=\"9s\"/> & Co");
+        }
+    }
+    std::fs::write(&path, serde_json::to_string(&people).unwrap()).unwrap();
+    let snap = tidings::engine::load(&tidings::engine::Sources {
+        data: Some(dir.clone()),
+        intents: None,
+    })
+    .expect("the renamed data loads");
+    let engine = common::engine_with(
+        std::sync::Arc::new(tidings::dialogue::MemoryStore::new()),
+        common::test_settings(),
+    );
+    engine.swap(snap);
+    let a = engine
+        .handle("markup", "voice", "who won the men's 100 m final?")
+        .await
+        .unwrap();
+    let doc = a.reply.ssml.unwrap();
+    speech::check_ssml(&doc).unwrap_or_else(|e| panic!("{e}\n{doc}"));
+    assert!(doc.contains("&lt;break time"), "{doc}");
+    assert!(!doc.contains("<break time=\"9s\""), "{doc}");
+    // Against the same reply with the original name: a pause read as
+    // markup would add nine seconds; the name read as words adds little.
+    let plain = demo_engine()
+        .handle("markup", "voice", "who won the men's 100 m final?")
+        .await
+        .unwrap();
+    let base = speech::espeak_seconds(&plain.reply.ssml.unwrap()).unwrap();
+    let secs = speech::espeak_seconds(&doc).unwrap();
+    assert!(
+        secs - base < 4.0,
+        "the name was read as a pause: {secs:.2} s against {base:.2} s"
+    );
+    let _ = std::fs::remove_dir_all(&dir);
+}
