@@ -785,61 +785,6 @@ mod tests {
         assert_eq!((hits[0].id, hits[0].score), (200, 1.0));
     }
 
-    /// Deterministic pseudo-random name lists for timing by hand:
-    /// `cargo test --release -- --ignored --nocapture timing`.
-    #[test]
-    #[ignore]
-    fn timing() {
-        let firsts = [
-            "anna", "maria", "zoe", "james", "li", "wei", "olga", "pedro", "fatima", "kofi",
-            "yuki", "sven", "amara", "diego", "ines", "tariq", "mei", "lucas", "nadia", "omar",
-            "elena", "kwame", "sofia", "raj", "chloe", "ivan", "leila", "mateo", "ewa", "hana",
-        ];
-        let rich = [
-            "ka", "ri", "mo", "zo", "e", "an", "ter", "lin", "son", "ma", "vic", "el", "do", "sa",
-            "ber", "nov", "ia", "gu", "chen", "wu", "bra", "dley", "fitz", "gor", "hol", "jak",
-            "kow", "ski", "lund", "qvist", "mur", "phy", "ng", "oy", "pat", "el", "quin", "rod",
-            "ri", "guez", "stro", "tho", "van", "der", "berg", "wat", "yam", "zak", "ash", "ford",
-        ];
-        let poor = &rich[..20];
-        for (label, syll) in [("varied", &rich[..]), ("20 syllables", poor)] {
-            let mut seed = 12345u64;
-            let mut next = || {
-                seed = seed
-                    .wrapping_mul(6364136223846793005)
-                    .wrapping_add(1442695040888963407);
-                (seed >> 33) as usize
-            };
-            let names: Vec<String> = (0..2000)
-                .map(|_| {
-                    let first = firsts[next() % firsts.len()];
-                    let n = 2 + next() % 2;
-                    let last: String = (0..n).map(|_| syll[next() % syll.len()]).collect();
-                    format!("{first} {last}")
-                })
-                .collect();
-            let idx = FuzzyIndex::new(names.iter().cloned().zip(0..));
-            let queries: Vec<String> = names
-                .iter()
-                .step_by(20)
-                .map(|n| n.replacen('a', "e", 1))
-                .chain(["who won the", "women", "final", "zoey"].map(String::from))
-                .collect();
-            let rounds = 200;
-            let start = std::time::Instant::now();
-            let mut found = 0;
-            for _ in 0..rounds {
-                for q in &queries {
-                    found += idx.lookup(q, 0.8, 5).len();
-                }
-            }
-            let per = start.elapsed() / (rounds * queries.len()) as u32;
-            println!(
-                "{label}: {} terms, {found} hits, {per:?} per lookup",
-                idx.len()
-            );
-        }
-    }
 
     fn term_strategy() -> impl Strategy<Value = String> {
         "[a-z]{2,8}( [a-z]{2,8}){0,2}"
