@@ -12,7 +12,7 @@
 use std::collections::HashMap;
 
 use super::channel::Profile;
-use super::value::{Style, Value};
+use super::value::{xml_escape, Style, Value};
 use super::{sms, ssml, words};
 use crate::catalog::Template;
 
@@ -27,6 +27,18 @@ pub struct Realised {
     pub markdown: Option<String>,
 }
 
+/// Which wording was chosen for a channel, so the text, the SSML and the
+/// emphasised copy all say the same thing.
+#[derive(Debug, Clone, Copy)]
+struct Choice {
+    /// How many optional parts are kept.
+    keep: usize,
+    /// Whether the freshness sentence is kept.
+    fresh: bool,
+    /// Whether the profile's shorter forms are used.
+    short: bool,
+}
+
 /// Realises wording with its values; `freshness` is a closing sentence
 /// ("As of 21:04.") for profiles that cite it, dropped first when room is
 /// short.
@@ -36,7 +48,6 @@ pub fn realise(
     values: &HashMap<String, Value>,
     freshness: Option<&Template>,
 ) -> Realised {
-    let style = profile.style();
     // Wording that already says when ("as of 21:02") needs no second time.
     let freshness = freshness.filter(|_| {
         profile.freshness
@@ -45,61 +56,142 @@ pub fn realise(
                 .to_lowercase()
                 .contains("as of ")
     });
-    let with_fresh = |keep: usize, fresh: bool, style: Style| {
-        let mut out = finish(template.render_keeping(values, style, keep), style);
-        if let (true, Some(f)) = (fresh, freshness) {
-            out.push(' ');
-            out.push_str(&finish(f.render(values, style), style));
-        }
-        out
+    let shortest = Choice {
+        keep: 0,
+        fresh: false,
+        short: true,
     };
-    // The longest wording that fits: everything, then without the
-    // freshness sentence, then with the channel's shorter forms, then with
-    // fewer optional parts.
-    let n = template.optional_parts();
-    let choices = std::iter::once((n, true, false)).chain(
-        (0..=n)
-            .rev()
-            .flat_map(|k| [(k, false, false), (k, false, true)]),
-    );
-    let mut chosen = None;
-    for (keep, fresh, short) in choices {
-        let mut text = for_channel(profile, &with_fresh(keep, fresh, style));
-        if short {
-            text = profile.shortened(&text);
-        }
-        if profile.fits(&text) {
-            chosen = Some((keep, fresh, text));
-            break;
+    // A wording that fits, else the shortest wording without its asides in
+    // brackets ("1. Kalvenmark, 2. Brellmoor and 2. Quessary" without their
+    // medal counts), where every item is still there.
+    let attempt = |values: &HashMap<String, Value>| {
+        realise_fitting(profile, template, values, freshness).or_else(|| {
+            let no_asides = for_channel(
+                profile,
+                &drop_asides(&render_text(profile, template, values, freshness, shortest)),
+            );
+            profile
+                .fits(&no_asides)
+                .then(|| from_text(profile, no_asides))
+        })
+    };
+    if let Some(r) = attempt(values) {
+        return r;
+    }
+    // Nothing fits with every item of the longest list: keep its first
+    // items and say how many more there are ("… and 8 more"), fewer and
+    // fewer until it fits. A list is never cut inside an item.
+    if let Some((name, items)) = values
+        .iter()
+        .filter_map(|(k, v)| match v {
+            Value::List(items) if items.len() > 1 => Some((k.clone(), items.clone())),
+            _ => None,
+        })
+        .max_by_key(|(k, items)| (items.len(), std::cmp::Reverse(k.clone())))
+    {
+        for k in (1..items.len()).rev() {
+            let mut fewer = values.clone();
+            let mut head: Vec<Value> = items[..k].to_vec();
+            head.push(Value::Text(format!("{} more", items.len() - k)));
+            fewer.insert(name.clone(), Value::List(head));
+            if let Some(r) = attempt(&fewer) {
+                return r;
+            }
         }
     }
-    let (keep, fresh, text) = match chosen {
-        Some(c) => c,
-        None => (
-            0,
-            false,
-            shorten(profile, &profile.shortened(&with_fresh(0, false, style))),
-        ),
-    };
-    let ssml = profile.ssml.then(|| {
-        let body = finish(
-            template.render_keeping(values, Style::Ssml, keep),
-            Style::Ssml,
-        );
-        let mut sentences = vec![body];
-        if let (true, Some(f)) = (fresh, freshness) {
-            sentences.push(finish(f.render(values, Style::Ssml), Style::Ssml));
-        }
-        ssml::document(&profile.language, &sentences)
-    });
-    let markdown = profile.emphasis.then(|| {
-        let bold = emphasised(values);
-        for_channel(profile, &with_fresh_values(template, &bold, keep, style))
-    });
+    // Last resort: trailing sentences of the shortest wording go.
+    let text = shorten(
+        profile,
+        &render_text(profile, template, values, freshness, shortest),
+    );
+    from_text(profile, text)
+}
+
+/// A reply made from its final text alone, when the wording had to be
+/// shortened as text: speech then says exactly the text, and the
+/// emphasised copy is the text.
+fn from_text(profile: &Profile, text: String) -> Realised {
     Realised {
+        ssml: profile
+            .ssml
+            .then(|| ssml::document(&profile.language, &[xml_escape(&text)])),
+        markdown: profile.emphasis.then(|| text.clone()),
         text,
-        ssml,
-        markdown,
+    }
+}
+
+/// The longest wording that fits, trying in order: everything; without the
+/// freshness sentence; then for each number of optional parts (dropping
+/// the last written first), as written and with the shorter forms.
+fn realise_fitting(
+    profile: &Profile,
+    template: &Template,
+    values: &HashMap<String, Value>,
+    freshness: Option<&Template>,
+) -> Option<Realised> {
+    let n = template.optional_parts();
+    let choices = std::iter::once(Choice {
+        keep: n,
+        fresh: true,
+        short: false,
+    })
+    .chain((0..=n).rev().flat_map(|keep| {
+        [false, true].map(|short| Choice {
+            keep,
+            fresh: false,
+            short,
+        })
+    }));
+    for c in choices {
+        if c.fresh && freshness.is_none() {
+            continue;
+        }
+        let text = render_text(profile, template, values, freshness, c);
+        if !profile.fits(&text) {
+            continue;
+        }
+        let ssml = profile.ssml.then(|| {
+            let mut sentences = vec![finish(
+                template.render_keeping(values, Style::Ssml, c.keep),
+                Style::Ssml,
+            )];
+            if let (true, Some(f)) = (c.fresh, freshness) {
+                sentences.push(finish(f.render(values, Style::Ssml), Style::Ssml));
+            }
+            ssml::document(&profile.language, &sentences)
+        });
+        let markdown = profile.emphasis.then(|| {
+            let bold = emphasised(values);
+            render_text(profile, template, &bold, freshness, c)
+        });
+        return Some(Realised {
+            text,
+            ssml,
+            markdown,
+        });
+    }
+    None
+}
+
+/// The channel's text for one choice of wording.
+fn render_text(
+    profile: &Profile,
+    template: &Template,
+    values: &HashMap<String, Value>,
+    freshness: Option<&Template>,
+    c: Choice,
+) -> String {
+    let style = profile.style();
+    let mut out = finish(template.render_keeping(values, style, c.keep), style);
+    if let (true, Some(f)) = (c.fresh, freshness) {
+        out.push(' ');
+        out.push_str(&finish(f.render(values, style), style));
+    }
+    let out = for_channel(profile, &out);
+    if c.short {
+        profile.shortened(&out)
+    } else {
+        out
     }
 }
 
@@ -108,15 +200,6 @@ pub fn realise_text(profile: &Profile, text: &str) -> Realised {
     let t = Template::parse(&text.replace(['{', '}', '[', ']'], ""))
         .unwrap_or_else(|_| Template::parse("").expect("empty wording parses"));
     realise(profile, &t, &HashMap::new(), None)
-}
-
-fn with_fresh_values(
-    template: &Template,
-    values: &HashMap<String, Value>,
-    keep: usize,
-    style: Style,
-) -> String {
-    finish(template.render_keeping(values, style, keep), style)
 }
 
 /// Capital first letter and a closing full stop. SSML's first character may
@@ -184,14 +267,27 @@ fn drop_asides(text: &str) -> String {
     out
 }
 
-/// Sentences, each with its closing punctuation.
+/// Sentences, each with its closing punctuation. A sentence ends at ".",
+/// "!" or "?" followed by a space and a capital letter, except the full
+/// stop of a list number ("Medal table: 1. Kalvenmark, 2. Brellmoor"): a
+/// number that opens the text or follows ": " or ", ".
 fn split_sentences(text: &str) -> Vec<String> {
     let mut out = Vec::new();
     let mut cur = String::new();
     let chars: Vec<char> = text.chars().collect();
     for (i, &c) in chars.iter().enumerate() {
         cur.push(c);
-        let end = matches!(c, '.' | '!' | '?') && chars.get(i + 1).is_none_or(|n| *n == ' ');
+        let list_number = {
+            let mut j = i;
+            while j > 0 && chars[j - 1].is_ascii_digit() {
+                j -= 1;
+            }
+            j < i
+                && (j == 0 || (j >= 2 && chars[j - 1] == ' ' && matches!(chars[j - 2], ',' | ':')))
+        };
+        let next_starts =
+            chars.get(i + 1) == Some(&' ') && chars.get(i + 2).is_some_and(|n| n.is_uppercase());
+        let end = matches!(c, '.' | '!' | '?') && !(c == '.' && list_number) && next_starts;
         if end {
             out.push(cur.trim().to_string());
             cur.clear();
@@ -289,6 +385,16 @@ mod tests {
             split_sentences("One. Two 2.5 m! Three?"),
             vec!["One.", "Two 2.5 m!", "Three?"]
         );
+        // A numbered list is one sentence; a number ending one is not a
+        // list number.
+        assert_eq!(
+            split_sentences("Table: 1. Kalvenmark, 2. Brellmoor. Next."),
+            vec!["Table: 1. Kalvenmark, 2. Brellmoor.", "Next."]
+        );
+        assert_eq!(
+            split_sentences("A won heat 1. No medals."),
+            vec!["A won heat 1.", "No medals."]
+        );
     }
 
     #[test]
@@ -303,7 +409,7 @@ mod tests {
         assert_eq!(r.text, "Zoë Quillon, Quessary, finished second.");
         let doc = r.ssml.unwrap();
         assert!(
-            doc.contains("<say-as interpret-as=\"ordinal\">2</say-as>"),
+            doc.contains("<say-as interpret-as=\"ordinal\">2nd</say-as>"),
             "{doc}"
         );
         assert!(doc.starts_with("<?xml version=\"1.0\" encoding=\"UTF-8\"?><speak version=\"1.1\""));

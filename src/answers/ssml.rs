@@ -16,7 +16,9 @@ pub fn document(language: &str, sentences: &[String]) -> String {
     let body: String = sentences
         .iter()
         .filter(|s| !s.trim().is_empty())
-        .map(|s| format!("<s>{}</s>", tidy(s)))
+        // The `s` element marks the sentence, so its closing full stop is
+        // left out: right after markup some engines read it as "dot".
+        .map(|s| format!("<s>{}</s>", tidy(s).trim_end().trim_end_matches('.')))
         .collect();
     format!(
         "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\
@@ -37,6 +39,8 @@ fn tidy(s: &str) -> String {
         (",!", "!"),
         (",:", ":"),
         (",,", ","),
+        ("?.", "?"),
+        ("!.", "!"),
     ] {
         while out.contains(from) {
             out = out.replace(from, to);
@@ -56,7 +60,7 @@ mod tests {
             d,
             "<?xml version=\"1.0\" encoding=\"UTF-8\"?><speak version=\"1.1\" \
              xmlns=\"http://www.w3.org/2001/10/synthesis\" xml:lang=\"en-GB\">\
-             <p><s>Hello.</s></p></speak>"
+             <p><s>Hello</s></p></speak>"
         );
     }
 }

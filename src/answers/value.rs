@@ -64,9 +64,13 @@ pub fn speakable(s: &str) -> String {
             c => out.push(c),
         }
     }
-    // Brackets turned to commas can leave ", ," or ",." behind.
+    // Brackets turned to commas can leave ", ," or ",." behind, and quotes
+    // taken away "?." ("… on tomorrow?”.").
     let mut tidy = String::with_capacity(out.len());
     for c in out.chars() {
+        if c == '.' && (tidy.ends_with('?') || tidy.ends_with('!')) {
+            continue;
+        }
         if matches!(c, ',' | '.' | '?' | '!' | ';' | ':') {
             while tidy.ends_with(' ') {
                 tidy.pop();
@@ -187,10 +191,14 @@ impl Value {
         Value::Said {
             text: format!("{p}{}", words::ordinal_figure(n)),
             spoken: format!("{p}{}", words::ordinal(n)),
-            // Value from the W3C Note "SSML 1.0 say-as attribute values".
+            // Value from the W3C Note "SSML 1.0 say-as attribute values";
+            // the content is written "2nd", which an engine without
+            // say-as support still reads "second" (espeak-ng does), where
+            // a bare "2" would be read "two".
             ssml: format!(
-                "{}<say-as interpret-as=\"ordinal\">{n}</say-as>",
-                xml_escape(&p)
+                "{}<say-as interpret-as=\"ordinal\">{}</say-as>",
+                xml_escape(&p),
+                words::ordinal_figure(n)
             ),
         }
     }

@@ -671,6 +671,13 @@ const UNIT_WORDS: [(&str, &str, &str); 7] = [
     ("%", "per cent", "per cent"),
 ];
 
+/// Characters that may open a token around a number.
+const OPENERS: &[char] = &['(', '[', '"', '\'', '\u{201C}', '\u{2018}'];
+/// Characters that may close a token after a number or a unit.
+const CLOSERS: &[char] = &[
+    ',', '.', ';', ':', '!', '?', ')', ']', '"', '\'', '\u{201D}', '\u{2019}',
+];
+
 /// Running text with its numbers and unit symbols in words, for a speech
 /// engine: "women's 100 m freestyle" → "women's one hundred metres
 /// freestyle", "4.5 km" → "four point five kilometres". Words that are not
@@ -681,9 +688,12 @@ pub fn speak_numbers(text: &str) -> String {
     let mut i = 0;
     while i < tokens.len() {
         let t = tokens[i];
-        // Keep punctuation that closes the token ("100 m," "9.93 s.").
-        let core = t.trim_end_matches([',', '.', ';', ':', '!', '?']);
-        let tail = &t[core.len()..];
+        // Keep brackets and quotes that open the token and punctuation that
+        // closes it ("(9.96 s)", "100 m,", "“who won the 100 m?”").
+        let body = t.trim_start_matches(OPENERS);
+        let lead = &t[..t.len() - body.len()];
+        let core = body.trim_end_matches(CLOSERS);
+        let tail = &body[core.len()..];
         let numeric = !core.is_empty()
             && core.bytes().any(|b| b.is_ascii_digit())
             && core
@@ -693,7 +703,7 @@ pub fn speak_numbers(text: &str) -> String {
             let plain = core.replace(',', "");
             let next_is_unit = tokens
                 .get(i + 1)
-                .map(|n| n.trim_end_matches([',', '.', ';', ':', '!', '?']))
+                .map(|n| n.trim_end_matches(CLOSERS))
                 .is_some_and(|u| UNIT_WORDS.iter().any(|(sym, _, _)| *sym == u));
             let spoken = match plain.parse::<u64>() {
                 // A four-digit number with no unit and no thousands comma in
@@ -701,21 +711,32 @@ pub fn speak_numbers(text: &str) -> String {
                 Ok(y) if (1100..=2099).contains(&y) && !next_is_unit && !core.contains(',') => {
                     year_words(y)
                 }
+                // A distance in whole hundreds is said in hundreds, as
+                // announcers do: "1500 m" is "fifteen hundred metres".
+                Ok(d)
+                    if next_is_unit
+                        && (1100..=9900).contains(&d)
+                        && d % 100 == 0
+                        && d % 1000 != 0
+                        && !core.contains(',') =>
+                {
+                    format!("{} hundred", cardinal(d / 100))
+                }
                 _ => decimal_words(&plain),
             };
             let next = tokens.get(i + 1).map(|n| {
-                let c = n.trim_end_matches([',', '.', ';', ':', '!', '?']);
+                let c = n.trim_end_matches(CLOSERS);
                 (c, &n[c.len()..])
             });
             if let Some((unit, unit_tail)) = next.filter(|(u, _)| !u.is_empty()) {
                 if let Some((_, one, many)) = UNIT_WORDS.iter().find(|(sym, _, _)| *sym == unit) {
                     let word = if plain == "1" { one } else { many };
-                    out.push(format!("{spoken} {word}{unit_tail}"));
+                    out.push(format!("{lead}{spoken} {word}{unit_tail}"));
                     i += 2;
                     continue;
                 }
             }
-            out.push(format!("{spoken}{tail}"));
+            out.push(format!("{lead}{spoken}{tail}"));
         } else {
             out.push(t.to_string());
         }
@@ -759,6 +780,12 @@ mod speak_tests {
             "the one thousand, five hundred metres"
         );
         assert_eq!(speak_numbers("no numbers here"), "no numbers here");
+        assert_eq!(speak_numbers("the 1500 m"), "the fifteen hundred metres");
+        assert_eq!(speak_numbers("the 3000 m"), "the three thousand metres");
+        assert_eq!(
+            speak_numbers("(9.96 s) or “the 100 m?”"),
+            "(nine point nine six seconds) or “the one hundred metres?”"
+        );
         assert_eq!(
             speak_numbers("The 2027 Games"),
             "The twenty twenty-seven Games"

@@ -345,10 +345,11 @@ fn apply(v: &Value, filters: &[Filter], style: Style) -> String {
                     w.clone()
                 }
             }
-            // Case changes apply to words, never to SSML markup.
-            Filter::Upper | Filter::Lower if style == Style::Ssml => {
-                let t = text.clone().unwrap_or_else(|| v.render(Style::Spoken));
-                xml_escape(&t)
+            // Capitals are for the eye: spoken, a word is the same word
+            // (and an engine may spell out a word in capitals), so case
+            // filters leave spoken text and SSML as they are.
+            Filter::Upper | Filter::Lower if style.is_spoken() => {
+                text.clone().unwrap_or_else(|| v.render(style))
             }
             Filter::Upper => text
                 .clone()
@@ -489,7 +490,7 @@ mod ssml_tests {
         assert_eq!(
             out,
             "&lt;break time=9s &gt; and Co<break time=\"200ms\"/> and B finished \
-             <say-as interpret-as=\"ordinal\">2</say-as> and won, a medal."
+             <say-as interpret-as=\"ordinal\">2nd</say-as> and won, a medal."
         );
     }
 

@@ -785,7 +785,6 @@ mod tests {
         assert_eq!((hits[0].id, hits[0].score), (200, 1.0));
     }
 
-
     fn term_strategy() -> impl Strategy<Value = String> {
         "[a-z]{2,8}( [a-z]{2,8}){0,2}"
     }

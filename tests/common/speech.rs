@@ -630,3 +630,48 @@ pub fn flesch_reading_ease(texts: &[&str]) -> f64 {
     }
     flesch_counts(words, sentences, syll)
 }
+
+/// The phonemes espeak-ng would speak, as its `-x` output with stress
+/// marks, pauses and spacing left out, so two inputs that say the same
+/// words compare equal. `ssml` selects SSML input (`-m`) or plain text.
+pub fn espeak_phonemes(input: &str, ssml: bool) -> Result<String, String> {
+    let mut cmd = Command::new("espeak-ng");
+    cmd.args(["-q", "-x", "--stdin"]);
+    if ssml {
+        cmd.arg("-m");
+    }
+    let mut child = cmd
+        .stdin(Stdio::piped())
+        .stdout(Stdio::piped())
+        .stderr(Stdio::piped())
+        .spawn()
+        .map_err(|e| {
+            if e.kind() == std::io::ErrorKind::NotFound {
+                "espeak-ng is not installed: install the Debian package espeak-ng \
+                 (apt-get install espeak-ng), or run `bash tests/run.sh`, which installs it"
+                    .to_string()
+            } else {
+                format!("could not start espeak-ng: {e}")
+            }
+        })?;
+    child
+        .stdin
+        .take()
+        .expect("stdin is piped")
+        .write_all(input.as_bytes())
+        .map_err(|e| format!("could not write to espeak-ng: {e}"))?;
+    let out = child
+        .wait_with_output()
+        .map_err(|e| format!("espeak-ng did not finish: {e}"))?;
+    if !out.status.success() {
+        return Err(format!("espeak-ng failed ({})", out.status));
+    }
+    // A pause stops an "r" linking two words ("Brellmoor and" is said
+    // "Brellmoor-r-and" without one): the linking marker is not a word
+    // difference.
+    let phonemes: String = String::from_utf8_lossy(&out.stdout)
+        .chars()
+        .filter(|c| !c.is_whitespace() && !matches!(c, '\'' | ',' | '_' | ':' | '|' | '!'))
+        .collect();
+    Ok(phonemes.replace("r-", ""))
+}

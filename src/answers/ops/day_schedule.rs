@@ -1,7 +1,7 @@
 //! `day_schedule`: what is on for a day, optionally for one sport. Times are
 //! given in the scenario's time zone.
 
-use super::support::{day_phrase, when_value};
+use super::support::when_value;
 use super::*;
 
 pub static SPEC: OpSpec = OpSpec {
@@ -37,7 +37,7 @@ fn run(input: &OpInput) -> OpOutput {
         Some(EntityRef::Sport(s)) => Some(s),
         _ => None,
     };
-    let mut f = Facts::new().set("day", day_phrase(day, now));
+    let mut f = Facts::new().set("day", super::support::day_value(day, now));
     if let Some(s) = sport {
         f.put("sport_name", data.sports[s].name.as_str());
     }

@@ -128,34 +128,47 @@ pub fn day_phrase(day: Date, now: &ZonedDateTime) -> String {
 /// the clock time in words ("nineteen forty"), as the 24-hour clock is read
 /// in the newsroom's region (common practice).
 pub fn when_value(start: &ZonedDateTime, now: &ZonedDateTime) -> Value {
-    let date = start.date();
-    let day = day_phrase(date, now);
     let (clock_text, clock_spoken, clock_ssml) =
         clock_forms(start.hour() as u64, start.minute() as u64);
-    // A named day ("on Monday 16 August") is said "on Monday the sixteenth
-    // of August" and marked as a date for speech; "today" and "tomorrow"
-    // are words already.
-    let (day_spoken, day_ssml) = if day.starts_with("on ") {
-        let (d, mo) = (date.day(), date.month());
-        (
-            format!(
-                "on {} the {} of {}",
-                weekday_name(date),
-                words::ordinal(d as u64),
-                date.strftime("%B")
-            ),
-            format!(
-                "on {} <say-as interpret-as=\"date\" format=\"dm\">{d:02}-{mo:02}</say-as>",
-                weekday_name(date)
-            ),
-        )
-    } else {
-        (day.clone(), day.clone())
+    let Value::Said { text, spoken, ssml } = day_value(start.date(), now) else {
+        return Value::Text(format!("{} at {clock_text}", day_phrase(start.date(), now)));
     };
     Value::Said {
-        text: format!("{day} at {clock_text}"),
-        spoken: format!("{day_spoken} at {clock_spoken}"),
-        ssml: format!("{day_ssml} at {clock_ssml}"),
+        text: format!("{text} at {clock_text}"),
+        spoken: format!("{spoken} at {clock_spoken}"),
+        ssml: format!("{ssml} at {clock_ssml}"),
+    }
+}
+
+/// A day relative to now as a value. A named day ("on Monday 16 August")
+/// is said "on Monday the sixteenth of August", and in SSML its day of the
+/// month is marked as a date (`format="d"`, W3C say-as Note) with the
+/// ordinal written "16th", which engines with and without `say-as`
+/// support both read as "sixteenth"; "today" and "tomorrow" are words
+/// already.
+pub fn day_value(date: Date, now: &ZonedDateTime) -> Value {
+    let day = day_phrase(date, now);
+    if !day.starts_with("on ") {
+        return Value::Said {
+            text: day.clone(),
+            spoken: day.clone(),
+            ssml: day,
+        };
+    }
+    let d = date.day() as u64;
+    let month = date.strftime("%B").to_string();
+    Value::Said {
+        spoken: format!(
+            "on {} the {} of {month}",
+            weekday_name(date),
+            words::ordinal(d)
+        ),
+        ssml: format!(
+            "on {} the <say-as interpret-as=\"date\" format=\"d\">{}</say-as> of {month}",
+            weekday_name(date),
+            words::ordinal_figure(d)
+        ),
+        text: day,
     }
 }
 
@@ -165,19 +178,18 @@ pub fn clock_value(h: u64, m: u64) -> Value {
     Value::Said { text, spoken, ssml }
 }
 
-/// Written, spoken and SSML forms of a time of day; the SSML marks it with
-/// `say-as` time (W3C Note "SSML 1.0 say-as attribute values").
+/// Written, spoken and SSML forms of a time of day. The SSML says the time
+/// in words, as the text does: `say-as` time is read digit by digit by
+/// some engines ("twenty-one zero four"), which is not how the newsroom
+/// says it.
 fn clock_forms(h: u64, m: u64) -> (String, String, String) {
     let spoken = match m {
         0 => format!("{} hundred", words::cardinal(h)),
         1..=9 => format!("{} oh {}", words::cardinal(h), words::cardinal(m)),
         _ => format!("{} {}", words::cardinal(h), words::cardinal(m)),
     };
-    (
-        format!("{h:02}:{m:02}"),
-        spoken,
-        format!("<say-as interpret-as=\"time\" format=\"hms24\">{h:02}:{m:02}</say-as>"),
-    )
+    let ssml = crate::answers::value::xml_escape(&spoken);
+    (format!("{h:02}:{m:02}"), spoken, ssml)
 }
 
 fn weekday_name(d: Date) -> &'static str {
