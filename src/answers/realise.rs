@@ -341,12 +341,7 @@ mod tests {
     use super::*;
     use crate::answers::channel::Channels;
 
-    fn vals(pairs: &[(&str, Value)]) -> HashMap<String, Value> {
-        pairs
-            .iter()
-            .map(|(k, v)| (k.to_string(), v.clone()))
-            .collect()
-    }
+    use crate::answers::value::values_of as vals;
 
     #[test]
     fn an_sms_drops_optional_parts_before_anything_else() {

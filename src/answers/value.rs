@@ -204,6 +204,15 @@ impl Value {
     }
 }
 
+/// Named values from pairs, for tests of wording.
+#[cfg(test)]
+pub(crate) fn values_of(pairs: &[(&str, Value)]) -> std::collections::HashMap<String, Value> {
+    pairs
+        .iter()
+        .map(|(k, v)| (k.to_string(), v.clone()))
+        .collect()
+}
+
 /// The pause after each item of a spoken list.
 pub const LIST_PAUSE: &str = "<break time=\"200ms\"/>";
 

@@ -364,6 +364,36 @@ fn check_channel_names(
     }
 }
 
+/// Every placeholder of an outcome's wording must name a slot or a fact
+/// of that outcome.
+fn check_names(
+    file: &str,
+    text: &Spanned<String>,
+    t: &Template,
+    outcome: &str,
+    declared: &HashSet<&str>,
+    facts: &[&str],
+    problems: &mut Vec<CatalogProblem>,
+) {
+    for n in t.names() {
+        if !declared.contains(n) && !facts.contains(&n) {
+            let available: Vec<&str> = declared
+                .iter()
+                .copied()
+                .chain(facts.iter().copied())
+                .collect();
+            problems.push(at(
+                file,
+                text,
+                format!(
+                    "placeholder {{{n}}} names no slot and no fact of outcome {outcome:?}; available: {}",
+                    list_or_none(&available)
+                ),
+            ));
+        }
+    }
+}
+
 fn list_or_none(names: &[&str]) -> String {
     if names.is_empty() {
         "no placeholders".into()
@@ -563,18 +593,7 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
         let Some(t) = template(file, text, problems) else {
             continue;
         };
-        for n in t.names() {
-            if !declared.contains(n) && !spec.facts.contains(&n) {
-                problems.push(at(
-                    file,
-                    text,
-                    format!(
-                        "placeholder {{{n}}} names no slot and no fact of outcome {outcome:?}; available: {}",
-                        list_or_none(&declared.iter().copied().chain(spec.facts.iter().copied()).collect::<Vec<_>>())
-                    ),
-                ));
-            }
-        }
+        check_names(file, text, &t, outcome, &declared, spec.facts, problems);
         replies.insert(outcome.clone(), t);
     }
     let mut channel_replies: HashMap<String, HashMap<String, Template>> = HashMap::new();
@@ -594,17 +613,7 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
             let Some(t) = template(file, text, problems) else {
                 continue;
             };
-            for n in t.names() {
-                if !declared.contains(n) && !spec.facts.contains(&n) {
-                    problems.push(at(
-                        file,
-                        text,
-                        format!(
-                            "placeholder {{{n}}} names no slot and no fact of outcome {outcome:?}"
-                        ),
-                    ));
-                }
-            }
+            check_names(file, text, &t, outcome, &declared, spec.facts, problems);
             channel_replies
                 .entry(channel.clone())
                 .or_default()

@@ -389,12 +389,7 @@ fn tidy_spaces(s: &str) -> String {
 mod tests {
     use super::*;
 
-    fn vals(pairs: &[(&str, Value)]) -> HashMap<String, Value> {
-        pairs
-            .iter()
-            .map(|(k, v)| (k.to_string(), v.clone()))
-            .collect()
-    }
+    use crate::answers::value::values_of as vals;
 
     #[test]
     fn optional_parts_drop_when_a_value_is_missing() {
@@ -465,18 +460,6 @@ mod tests {
     fn names_are_listed_in_order() {
         let t = Template::parse("{a} [{b|and} {c}]").unwrap();
         assert_eq!(t.names(), vec!["a", "b", "c"]);
-    }
-}
-
-#[cfg(test)]
-mod ssml_tests {
-    use super::*;
-
-    fn vals(pairs: &[(&str, Value)]) -> HashMap<String, Value> {
-        pairs
-            .iter()
-            .map(|(k, v)| (k.to_string(), v.clone()))
-            .collect()
     }
 
     #[test]

@@ -406,41 +406,8 @@ pub fn espeak_seconds(ssml: &str) -> Result<f64, String> {
     ));
     let _cleanup = RemoveOnDrop(path.clone());
 
-    let mut child = Command::new("espeak-ng")
-        .arg("-m")
-        .arg("--stdin")
-        .arg("-w")
-        .arg(&path)
-        .stdin(Stdio::piped())
-        .stdout(Stdio::null())
-        .stderr(Stdio::piped())
-        .spawn()
-        .map_err(|e| {
-            if e.kind() == std::io::ErrorKind::NotFound {
-                "espeak-ng is not installed: install the Debian package espeak-ng \
-                 (apt-get install espeak-ng), or run `bash tests/run.sh`, which installs it"
-                    .to_string()
-            } else {
-                format!("could not start espeak-ng: {e}")
-            }
-        })?;
-    child
-        .stdin
-        .take()
-        .expect("stdin is piped")
-        .write_all(ssml.as_bytes())
-        .map_err(|e| format!("could not write the SSML to espeak-ng: {e}"))?;
-    // stdin is dropped above, closing it, so espeak-ng sees the end.
-    let out = child
-        .wait_with_output()
-        .map_err(|e| format!("espeak-ng did not finish: {e}"))?;
-    if !out.status.success() {
-        return Err(format!(
-            "espeak-ng failed ({}): {}",
-            out.status,
-            String::from_utf8_lossy(&out.stderr).trim()
-        ));
-    }
+    let path_arg = path.display().to_string();
+    run_espeak(&["-m", "--stdin", "-w", &path_arg], ssml)?;
     let bytes = std::fs::read(&path)
         .map_err(|e| format!("espeak-ng wrote no WAV file at {}: {e}", path.display()))?;
     wav_seconds(&bytes)
@@ -635,12 +602,27 @@ pub fn flesch_reading_ease(texts: &[&str]) -> f64 {
 /// marks, pauses and spacing left out, so two inputs that say the same
 /// words compare equal. `ssml` selects SSML input (`-m`) or plain text.
 pub fn espeak_phonemes(input: &str, ssml: bool) -> Result<String, String> {
-    let mut cmd = Command::new("espeak-ng");
-    cmd.args(["-q", "-x", "--stdin"]);
-    if ssml {
-        cmd.arg("-m");
-    }
-    let mut child = cmd
+    let args: &[&str] = if ssml {
+        &["-q", "-x", "--stdin", "-m"]
+    } else {
+        &["-q", "-x", "--stdin"]
+    };
+    let out = run_espeak(args, input)?;
+    // A pause stops an "r" linking two words ("Brellmoor and" is said
+    // "Brellmoor-r-and" without one): the linking marker is not a word
+    // difference.
+    let phonemes: String = String::from_utf8_lossy(&out)
+        .chars()
+        .filter(|c| !c.is_whitespace() && !matches!(c, '\'' | ',' | '_' | ':' | '|' | '!'))
+        .collect();
+    Ok(phonemes.replace("r-", ""))
+}
+
+/// Runs espeak-ng with `args`, `input` on its standard input; returns what
+/// it printed. Errs with a message naming the fix when it is not installed.
+fn run_espeak(args: &[&str], input: &str) -> Result<Vec<u8>, String> {
+    let mut child = Command::new("espeak-ng")
+        .args(args)
         .stdin(Stdio::piped())
         .stdout(Stdio::piped())
         .stderr(Stdio::piped())
@@ -660,18 +642,16 @@ pub fn espeak_phonemes(input: &str, ssml: bool) -> Result<String, String> {
         .expect("stdin is piped")
         .write_all(input.as_bytes())
         .map_err(|e| format!("could not write to espeak-ng: {e}"))?;
+    // stdin is dropped above, closing it, so espeak-ng sees the end.
     let out = child
         .wait_with_output()
         .map_err(|e| format!("espeak-ng did not finish: {e}"))?;
     if !out.status.success() {
-        return Err(format!("espeak-ng failed ({})", out.status));
+        return Err(format!(
+            "espeak-ng failed ({}): {}",
+            out.status,
+            String::from_utf8_lossy(&out.stderr).trim()
+        ));
     }
-    // A pause stops an "r" linking two words ("Brellmoor and" is said
-    // "Brellmoor-r-and" without one): the linking marker is not a word
-    // difference.
-    let phonemes: String = String::from_utf8_lossy(&out.stdout)
-        .chars()
-        .filter(|c| !c.is_whitespace() && !matches!(c, '\'' | ',' | '_' | ':' | '|' | '!'))
-        .collect();
-    Ok(phonemes.replace("r-", ""))
+    Ok(out.stdout)
 }
