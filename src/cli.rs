@@ -50,6 +50,10 @@ pub struct SessionOptions {
     /// How long a message id is remembered for retries, in seconds.
     #[arg(long, env = "TIDINGS_RETRY_WINDOW", default_value_t = 600)]
     pub retry_window: u64,
+    /// Bearer token for the admin API (/v1/admin/...); without one the
+    /// admin API is off.
+    #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
+    pub admin_token: Option<String>,
 }
 
 impl SessionOptions {
@@ -60,6 +64,7 @@ impl SessionOptions {
             redis_prefix: String::new(),
             session_ttl,
             retry_window: 600,
+            admin_token: None,
         }
     }
 }
@@ -151,6 +156,12 @@ pub fn id_secret() -> Vec<u8> {
 
 /// Builds an engine: the scenario, the clock and the session store.
 pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
+    if o.admin_token
+        .as_deref()
+        .is_some_and(|t| !t.is_empty() && t.len() < 16)
+    {
+        return Err("--admin-token must be at least 16 characters: use a long random value".into());
+    }
     if o.redis_url.is_some() && configured_secret().is_none() {
         // With a random key per process, replicas would not find each
         // other's sessions, and after a restart an erasure would miss the
@@ -163,6 +174,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         session_ttl: Duration::from_secs(o.session_ttl.max(1)),
         retry_window: Duration::from_secs(o.retry_window.max(1)),
         id_secret: id_secret(),
+        admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
     };
     let store: Arc<dyn SessionStore> = match &o.redis_url {
         Some(url) => Arc::new(RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?),

@@ -13,7 +13,8 @@ use serde::{Deserialize, Serialize};
 use sha2::Sha256;
 
 use crate::catalog::{self, Catalog};
-use crate::dataset::{self, Dataset};
+use crate::dataset::changes::{self, Batch, Records};
+use crate::dataset::{self, DataProblem, Dataset, LoadError};
 use crate::dialogue::session::SCHEMA;
 use crate::dialogue::turn::{turn, Reply, TurnContext};
 use crate::dialogue::{KeepReply, Saved, Session, SessionStore, StoreError};
@@ -123,6 +124,11 @@ pub enum Clock {
     Fixed(Timestamp),
 }
 
+/// An RFC 3339 time with its offset, as replies and the admin API show it.
+fn rfc3339(t: &ZonedDateTime) -> String {
+    t.strftime("%Y-%m-%dT%H:%M:%S%:z").to_string()
+}
+
 /// The built-in channel profiles, the fallback when a data update removes
 /// a channel a reader is using.
 static BUILT_IN_CHANNELS: std::sync::LazyLock<crate::answers::channel::Channels> =
@@ -139,6 +145,8 @@ pub struct Settings {
     pub retry_window: Duration,
     /// Key for hashing user ids; never logged.
     pub id_secret: Vec<u8>,
+    /// The admin API's bearer token; `None` turns the admin API off.
+    pub admin_token: Option<String>,
 }
 
 impl Settings {
@@ -150,6 +158,7 @@ impl Settings {
             session_ttl: Duration::from_secs(1800),
             retry_window: Duration::from_secs(600),
             id_secret,
+            admin_token: None,
         }
     }
 }
@@ -225,6 +234,10 @@ pub struct Engine {
     snapshot: Arc<ArcSwap<Snapshot>>,
     store: Arc<dyn SessionStore>,
     settings: Arc<Settings>,
+    // An async mutex: changes to the data are read-modify-swap, and two
+    // batches applied at once must not both start from the same version
+    // (the second would drop the first's changes). Readers never take it.
+    writes: Arc<tokio::sync::Mutex<()>>,
 }
 
 impl std::fmt::Debug for Engine {
@@ -242,6 +255,7 @@ impl Engine {
             snapshot: Arc::new(ArcSwap::from_pointee(snapshot)),
             store,
             settings: Arc::new(settings),
+            writes: Arc::new(tokio::sync::Mutex::new(())),
         }
     }
 
@@ -447,6 +461,75 @@ impl Engine {
             repeated: false,
         };
         (answer, session)
+    }
+
+    /// Applies a batch of changes all or nothing: the new dataset version,
+    /// or every problem found (and nothing changed). Questions under way
+    /// finish on the version they started with.
+    pub async fn apply_batch(&self, batch: &Batch) -> Result<u64, Vec<DataProblem>> {
+        let _one_at_a_time = self.writes.lock().await;
+        let snap = self.snapshot();
+        let now = rfc3339(&self.now(&snap.data));
+        let data = changes::apply(&snap.data, batch, &now)?;
+        Ok(self.install(data, &snap))
+    }
+
+    /// Replaces the whole dataset with checked records; the version moves
+    /// on from the current one.
+    pub async fn replace_records(&self, records: Records) -> Result<u64, LoadError> {
+        let _one_at_a_time = self.writes.lock().await;
+        let snap = self.snapshot();
+        let data = records.build(snap.data.version + 1)?;
+        Ok(self.install(data, &snap))
+    }
+
+    /// Builds the understanding for new data with the current catalog and
+    /// swaps it in.
+    fn install(&self, data: Dataset, current: &Snapshot) -> u64 {
+        let version = data.version;
+        self.swap(Snapshot::new(data, current.catalog.clone()));
+        tracing::info!(version, "dataset updated");
+        version
+    }
+
+    /// What the admin status reports.
+    pub async fn status(&self) -> serde_json::Value {
+        let snap = self.snapshot();
+        let now = self.now(&snap.data);
+        let age = now.timestamp().as_second() - snap.data.as_of.as_second();
+        let (store, sessions) = self.store_status().await;
+        serde_json::json!({
+            "scenario": snap.data.scenario.title,
+            "dataset_version": snap.data.version,
+            "as_of": rfc3339(&snap.data.as_of.to_zoned_datetime(snap.data.tz.clone())),
+            "age_seconds": age,
+            "intents": snap.catalog.intents.iter().map(|i| i.name.as_str()).collect::<Vec<_>>(),
+            "channels": snap.catalog.channels.names(),
+            "sessions": { "store": store, "status": match sessions {
+                Ok(()) => "ok".to_string(),
+                Err(e) => e.to_string(),
+            }},
+        })
+    }
+
+    /// Whether `token` is the admin token. Both are hashed first and the
+    /// digests compared in constant time, so neither the token's content
+    /// nor its length shows in how long a wrong guess takes.
+    pub fn admin_allows(&self, token: &str) -> Option<bool> {
+        let want = self.settings.admin_token.as_deref()?;
+        let digest = |s: &str| {
+            let mut mac = Hmac::<Sha256>::new_from_slice(b"tidings admin token")
+                .expect("HMAC takes keys of any length");
+            mac.update(s.as_bytes());
+            mac.finalize().into_bytes()
+        };
+        let (a, b) = (digest(want), digest(token));
+        Some(
+            a.iter()
+                .zip(b.iter())
+                .fold(0u8, |acc, (x, y)| acc | (x ^ y))
+                == 0,
+        )
     }
 
     /// The channel's name, checked against the profiles in force.

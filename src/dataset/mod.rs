@@ -1,6 +1,8 @@
-//! The results dataset: the model, loading and validating it, and the handle
-//! through which every request reads one consistent version of it.
+//! The results dataset: the model, loading and validating it, live changes
+//! to it (`changes`), and the handle through which every request reads one
+//! consistent version of it.
 
+pub mod changes;
 pub mod load;
 pub mod mark;
 pub mod model;

@@ -1,10 +1,11 @@
 //! The HTTP API: `POST /v1/messages`, `DELETE /v1/users/{channel}/{user}`,
 //! `GET /healthz` (the process is up) and `GET /readyz` (and its session
-//! store answers).
+//! store answers); the admin API ([`admin`]) under `/v1/admin/`.
 //!
 //! Errors come back as `{"error": {"code", "message"}}`; a reader's mistake
 //! is never a 500.
 
+mod admin;
 mod error;
 
 use std::future::Future;
@@ -167,6 +168,7 @@ pub fn app(engine: Engine) -> Router {
         .route("/v1/users/{channel}/{user}", delete(erase_user))
         .route("/healthz", get(healthz))
         .route("/readyz", get(readyz))
+        .merge(admin::routes())
         .fallback(not_found)
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)

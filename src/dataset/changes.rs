@@ -1,0 +1,320 @@
+//! Live changes to the results: a batch of changes applied all or nothing.
+//!
+//! A batch is applied to a copy of the current records and the copy is
+//! checked exactly as a scenario's files are at start-up ([`super::load::build`]).
+//! Only a copy that passes every check becomes the next version; otherwise
+//! every problem is reported and the current version stays as it was.
+
+use serde::{Deserialize, Serialize};
+
+use super::load::{build, DataProblem, LoadError};
+use super::model::{Competitor, Contest, Entry, Group, Id, Scenario, Sport, Status};
+use super::Dataset;
+
+/// A batch of changes, as posted by the newsroom's results feed or an
+/// editor.
+#[derive(Debug, Clone, Deserialize, Serialize)]
+#[serde(deny_unknown_fields)]
+pub struct Batch {
+    /// When the newsroom confirmed these results (RFC 3339); by default the
+    /// time the batch is applied.
+    #[serde(default)]
+    pub as_of: Option<String>,
+    pub changes: Vec<Change>,
+}
+
+/// One change.
+#[derive(Debug, Clone, Deserialize, Serialize)]
+#[serde(tag = "change", rename_all = "snake_case", deny_unknown_fields)]
+pub enum Change {
+    /// New or corrected results of a contest, and its status (scheduled →
+    /// live → final, or a race called). Entries, when given, replace the
+    /// contest's entries whole.
+    Results {
+        contest: Id,
+        #[serde(default)]
+        status: Option<Status>,
+        #[serde(default)]
+        entries: Option<Vec<Entry>>,
+        /// When these results were last updated (RFC 3339).
+        #[serde(default)]
+        updated: Option<String>,
+        /// Share of the expected count that is in, from 0 to 1.
+        #[serde(default)]
+        counted: Option<f64>,
+    },
+    /// A new start time or venue.
+    Schedule {
+        contest: Id,
+        #[serde(default)]
+        start: Option<String>,
+        #[serde(default)]
+        venue: Option<String>,
+    },
+    /// A contest added to the programme.
+    AddContest { contest: Box<Contest> },
+    /// A competitor added to the data.
+    AddCompetitor { competitor: Competitor },
+    /// Names readers use, added to a record.
+    Aliases {
+        /// `competitor`, `group`, `contest` or `sport`.
+        of: String,
+        id: Id,
+        add: Vec<String>,
+    },
+}
+
+/// The records of a whole scenario, as its five files hold them.
+#[derive(Debug, Clone, Deserialize, Serialize)]
+#[serde(deny_unknown_fields)]
+pub struct Records {
+    pub scenario: Scenario,
+    pub sports: Vec<Sport>,
+    pub groups: Vec<Group>,
+    pub competitors: Vec<Competitor>,
+    pub contests: Vec<Contest>,
+}
+
+impl Records {
+    /// The records of a loaded dataset.
+    pub fn of(data: &Dataset) -> Records {
+        Records {
+            scenario: data.scenario.clone(),
+            sports: data.sports.clone(),
+            groups: data.groups.clone(),
+            competitors: data.competitors.clone(),
+            contests: data.contests.clone(),
+        }
+    }
+
+    /// Checks the records and builds them as `version`.
+    pub fn build(self, version: u64) -> Result<Dataset, LoadError> {
+        build(
+            self.scenario,
+            self.sports,
+            self.groups,
+            self.competitors,
+            self.contests,
+            version,
+        )
+    }
+}
+
+/// Applies a batch to `data`: the next version, or every problem found.
+/// `now` (RFC 3339) is the `as_of` when the batch gives none.
+pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<DataProblem>> {
+    let mut r = Records::of(data);
+    let mut problems = Vec::new();
+    if batch.changes.is_empty() {
+        problems.push(problem(0, "changes", "a batch needs at least one change"));
+    }
+    for (i, change) in batch.changes.iter().enumerate() {
+        let n = i + 1;
+        if let Err(p) = apply_one(&mut r, change, n) {
+            problems.push(p);
+        }
+    }
+    if !problems.is_empty() {
+        return Err(problems);
+    }
+    r.scenario.as_of = batch.as_of.clone().unwrap_or_else(|| now.to_string());
+    r.build(data.version + 1).map_err(|e| match e {
+        LoadError::Invalid(p) => p,
+        LoadError::File(m) => vec![problem(0, "batch", &m)],
+    })
+}
+
+fn problem(n: usize, field: &str, message: &str) -> DataProblem {
+    DataProblem {
+        file: "batch".into(),
+        record: if n == 0 {
+            String::new()
+        } else {
+            format!("change {n}")
+        },
+        field: field.into(),
+        message: message.into(),
+    }
+}
+
+fn contest_mut<'a>(r: &'a mut Records, id: &str, n: usize) -> Result<&'a mut Contest, DataProblem> {
+    r.contests
+        .iter_mut()
+        .find(|c| c.id == id)
+        .ok_or_else(|| problem(n, "contest", &format!("no contest {id:?}")))
+}
+
+fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProblem> {
+    match change {
+        Change::Results {
+            contest,
+            status,
+            entries,
+            updated,
+            counted,
+        } => {
+            let c = contest_mut(r, contest, n)?;
+            if let Some(s) = status {
+                c.status = *s;
+            }
+            if let Some(e) = entries {
+                c.entries = e.clone();
+            }
+            if updated.is_some() {
+                c.updated = updated.clone();
+            }
+            if let Some(share) = counted {
+                if !(0.0..=1.0).contains(share) {
+                    return Err(problem(n, "counted", "counted is a share from 0 to 1"));
+                }
+                c.counted = Some(*share);
+            }
+        }
+        Change::Schedule {
+            contest,
+            start,
+            venue,
+        } => {
+            let c = contest_mut(r, contest, n)?;
+            if let Some(s) = start {
+                c.start = s.clone();
+            }
+            if venue.is_some() {
+                c.venue = venue.clone();
+            }
+        }
+        Change::AddContest { contest } => {
+            if r.contests.iter().any(|c| c.id == contest.id) {
+                return Err(problem(
+                    n,
+                    "contest",
+                    &format!(
+                        "contest {:?} exists already; change it with results or schedule",
+                        contest.id
+                    ),
+                ));
+            }
+            r.contests.push((**contest).clone());
+        }
+        Change::AddCompetitor { competitor } => {
+            if r.competitors.iter().any(|c| c.id == competitor.id) {
+                return Err(problem(
+                    n,
+                    "competitor",
+                    &format!("competitor {:?} exists already", competitor.id),
+                ));
+            }
+            r.competitors.push(competitor.clone());
+        }
+        Change::Aliases { of, id, add } => {
+            let list = match of.as_str() {
+                "competitor" => r
+                    .competitors
+                    .iter_mut()
+                    .find(|c| c.id == *id)
+                    .map(|c| &mut c.aliases),
+                "group" => r
+                    .groups
+                    .iter_mut()
+                    .find(|g| g.id == *id)
+                    .map(|g| &mut g.aliases),
+                "contest" => r
+                    .contests
+                    .iter_mut()
+                    .find(|c| c.id == *id)
+                    .map(|c| &mut c.aliases),
+                "sport" => r
+                    .sports
+                    .iter_mut()
+                    .find(|s| s.id == *id)
+                    .map(|s| &mut s.aliases),
+                other => {
+                    return Err(problem(
+                        n,
+                        "of",
+                        &format!("aliases of {other:?}: use competitor, group, contest or sport"),
+                    ))
+                }
+            };
+            let Some(list) = list else {
+                return Err(problem(n, "id", &format!("no {of} {id:?}")));
+            };
+            for a in add {
+                if a.trim().is_empty() {
+                    return Err(problem(n, "add", "an alias must not be empty"));
+                }
+                if !list.contains(a) {
+                    list.push(a.clone());
+                }
+            }
+        }
+    }
+    Ok(())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn demo() -> Dataset {
+        crate::engine::load(&crate::engine::Sources::default())
+            .expect("the demo loads")
+            .data
+    }
+
+    fn batch(json: &str) -> Batch {
+        serde_json::from_str(json).expect("the batch parses")
+    }
+
+    #[test]
+    fn a_valid_batch_makes_the_next_version() {
+        let d = demo();
+        let b = batch(
+            r#"{"as_of": "2027-08-14T21:30:00+01:00", "changes": [
+                {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
+                    {"competitor": "p036", "place": 1, "mark": "2:05:31", "award": "gold"}
+                ]},
+                {"change": "aliases", "of": "competitor", "id": "p036", "add": ["the Harbour Hare"]}
+            ]}"#,
+        );
+        let next = apply(&d, &b, "2027-08-14T21:31:00+01:00").unwrap();
+        assert_eq!(next.version, d.version + 1);
+        assert_eq!(next.scenario.as_of, "2027-08-14T21:30:00+01:00");
+        let ci = next.contest("ath-m-marathon-final").unwrap();
+        assert_eq!(next.contests[ci].status, Status::Final);
+        let pi = next.competitor("p036").unwrap();
+        assert!(next.competitors[pi]
+            .aliases
+            .contains(&"the Harbour Hare".to_string()));
+    }
+
+    #[test]
+    fn an_invalid_batch_lists_every_problem_and_changes_nothing() {
+        let d = demo();
+        let b = batch(
+            r#"{"changes": [
+                {"change": "results", "contest": "no-such-race", "status": "final"},
+                {"change": "aliases", "of": "venue", "id": "x", "add": ["y"]}
+            ]}"#,
+        );
+        let problems = apply(&d, &b, "2027-08-14T21:31:00+01:00").unwrap_err();
+        assert_eq!(problems.len(), 2, "{problems:?}");
+        assert!(
+            problems[0].to_string().contains("change 1"),
+            "{}",
+            problems[0]
+        );
+        assert!(
+            problems[1].to_string().contains("change 2"),
+            "{}",
+            problems[1]
+        );
+        // Checked as the files are: a final with an award on the wrong place.
+        let b = batch(
+            r#"{"changes": [{"change": "results", "contest": "ath-m-marathon-final", "status": "final",
+                "entries": [{"competitor": "p036", "place": 1, "mark": "2:05:31", "award": "silver"}]}]}"#,
+        );
+        let problems = apply(&d, &b, "2027-08-14T21:31:00+01:00").unwrap_err();
+        assert!(problems.iter().any(|p| p.field == "award"), "{problems:?}");
+    }
+}

@@ -1,0 +1,111 @@
+//! The admin API under `/v1/admin/`: live changes to the results and the
+//! service's status, for the newsroom's feed and its editors.
+//!
+//! Every route needs `Authorization: Bearer <token>` with the token the
+//! service was started with (`--admin-token`); without one configured the
+//! admin API is off and answers 403, never open.
+
+use axum::extract::{DefaultBodyLimit, FromRequestParts, State};
+use axum::http::request::Parts;
+use axum::http::{header, StatusCode};
+use axum::response::IntoResponse;
+use axum::routing::{get, post, put};
+use axum::{Json, Router};
+use serde_json::json;
+
+use super::{ApiError, AppJson};
+use crate::dataset::changes::{Batch, Records};
+use crate::dataset::LoadError;
+use crate::engine::Engine;
+
+/// Largest admin request body: a whole scenario fits with room to spare.
+pub const MAX_ADMIN_BODY: usize = 32 * 1024 * 1024;
+
+/// Proof that the request carries the admin token.
+pub struct Admin;
+
+impl FromRequestParts<Engine> for Admin {
+    type Rejection = ApiError;
+
+    async fn from_request_parts(parts: &mut Parts, engine: &Engine) -> Result<Admin, ApiError> {
+        let token = parts
+            .headers
+            .get(header::AUTHORIZATION)
+            .and_then(|v| v.to_str().ok())
+            .and_then(|v| v.strip_prefix("Bearer "))
+            .unwrap_or("");
+        match engine.admin_allows(token) {
+            None => Err(ApiError {
+                status: StatusCode::FORBIDDEN,
+                code: "admin_off",
+                message: "the admin API is off: start the service with --admin-token".into(),
+            }),
+            Some(true) => Ok(Admin),
+            Some(false) => Err(ApiError {
+                status: StatusCode::UNAUTHORIZED,
+                code: "unauthorized",
+                message: "send the admin token as Authorization: Bearer <token>".into(),
+            }),
+        }
+    }
+}
+
+async fn apply_batch(
+    _: Admin,
+    State(engine): State<Engine>,
+    AppJson(batch): AppJson<Batch>,
+) -> Result<impl IntoResponse, ApiError> {
+    match engine.apply_batch(&batch).await {
+        Ok(version) => Ok(Json(json!({
+            "dataset_version": version,
+            "applied": batch.changes.len(),
+        }))),
+        Err(problems) => Err(ApiError::invalid(
+            "invalid_batch",
+            format!(
+                "the batch was not applied: {}",
+                problems
+                    .iter()
+                    .map(|p| p.to_string())
+                    .collect::<Vec<_>>()
+                    .join("; ")
+            ),
+        )),
+    }
+}
+
+async fn replace_dataset(
+    _: Admin,
+    State(engine): State<Engine>,
+    AppJson(records): AppJson<Records>,
+) -> Result<impl IntoResponse, ApiError> {
+    match engine.replace_records(records).await {
+        Ok(version) => Ok(Json(json!({ "dataset_version": version }))),
+        Err(LoadError::Invalid(problems)) => Err(ApiError::invalid(
+            "invalid_dataset",
+            format!(
+                "the dataset was not replaced: {}",
+                problems
+                    .iter()
+                    .map(|p| p.to_string())
+                    .collect::<Vec<_>>()
+                    .join("; ")
+            ),
+        )),
+        Err(e) => Err(ApiError::invalid("invalid_dataset", e.to_string())),
+    }
+}
+
+async fn status(_: Admin, State(engine): State<Engine>) -> impl IntoResponse {
+    Json(engine.status().await)
+}
+
+/// The admin routes, with a body limit of their own (a whole scenario is
+/// larger than any reader's message).
+pub fn routes() -> Router<Engine> {
+    Router::new()
+        .route("/v1/admin/batches", post(apply_batch))
+        .route("/v1/admin/dataset", put(replace_dataset))
+        .route("/v1/admin/status", get(status))
+        .layer(DefaultBodyLimit::max(MAX_ADMIN_BODY))
+}

@@ -1,0 +1,224 @@
+//! The admin API through HTTP: live batches applied all or nothing, a whole
+//! dataset replaced, the status, and the token that guards them.
+
+mod common;
+
+use std::sync::Arc;
+
+use common::{engine_with, test_settings, Server};
+use serde_json::{json, Value};
+use tidings::dialogue::MemoryStore;
+
+const TOKEN: &str = "admin-token-for-tests-0123456789";
+
+fn admin_server_engine() -> tidings::engine::Engine {
+    let mut settings = test_settings();
+    settings.admin_token = Some(TOKEN.into());
+    engine_with(Arc::new(MemoryStore::new()), settings)
+}
+
+async fn admin(s: &Server, method: &str, path: &str, body: Option<Value>) -> (u16, Value) {
+    let mut req = match method {
+        "GET" => s.client.get(s.url(path)),
+        "PUT" => s.client.put(s.url(path)),
+        _ => s.client.post(s.url(path)),
+    }
+    .bearer_auth(TOKEN);
+    if let Some(b) = body {
+        req = req.json(&b);
+    }
+    let r = req.send().await.unwrap();
+    (r.status().as_u16(), r.json().await.unwrap())
+}
+
+/// The marathon called: live until now in the demo.
+fn marathon_final() -> Value {
+    json!({"as_of": "2027-08-14T21:30:00+01:00", "changes": [
+        {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
+            {"competitor": "p036", "place": 1, "mark": "2:05:31", "award": "gold"}
+        ]}
+    ]})
+}
+
+#[tokio::test]
+async fn without_a_token_configured_the_admin_api_is_off() {
+    let s = Server::start(common::demo_engine()).await;
+    let (status, body) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(status, 403);
+    assert_eq!(body["error"]["code"], "admin_off");
+    let (status, _) = admin(&s, "POST", "/v1/admin/batches", Some(marathon_final())).await;
+    assert_eq!(status, 403);
+}
+
+#[tokio::test]
+async fn a_wrong_or_missing_token_is_refused() {
+    let s = Server::start(admin_server_engine()).await;
+    for auth in [None, Some("Bearer nope"), Some(TOKEN)] {
+        let mut req = s.client.get(s.url("/v1/admin/status"));
+        if let Some(a) = auth {
+            req = req.header("authorization", a);
+        }
+        let r = req.send().await.unwrap();
+        assert_eq!(r.status(), 401, "{auth:?}");
+        let body: Value = r.json().await.unwrap();
+        assert_eq!(body["error"]["code"], "unauthorized");
+    }
+    let (status, body) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(status, 200);
+    assert_eq!(body["dataset_version"], 1);
+    assert!(body["intents"].as_array().unwrap().len() >= 18);
+    assert_eq!(body["as_of"], "2027-08-14T21:04:00+01:00");
+    // The demo clock is 21:10, six minutes after the data's as_of.
+    assert_eq!(body["age_seconds"], 360);
+}
+
+#[tokio::test]
+async fn a_batch_is_applied_and_answers_change() {
+    let s = Server::start(admin_server_engine()).await;
+    let (_, before) = s.ask("reader-live", "who won the men's marathon?").await;
+    assert_eq!(before["detail"], "live", "{before}");
+    let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(marathon_final())).await;
+    assert_eq!(status, 200, "{body}");
+    assert_eq!(body["dataset_version"], 2);
+    let (_, after) = s.ask("reader-live-2", "who won the men's marathon?").await;
+    assert_eq!(after["dataset_version"], 2);
+    assert_eq!(after["as_of"], "2027-08-14T21:30:00+01:00");
+    assert!(
+        after["text"]
+            .as_str()
+            .unwrap()
+            .starts_with("Banel Morressi (Kalvenmark) won the men's marathon"),
+        "{after}"
+    );
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 2);
+}
+
+#[tokio::test]
+async fn an_invalid_batch_changes_nothing_and_lists_every_problem() {
+    let s = Server::start(admin_server_engine()).await;
+    let bad = json!({"changes": [
+        {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
+            {"competitor": "p036", "place": 1, "mark": "not a time", "award": "gold"}
+        ]},
+        {"change": "schedule", "contest": "no-such-race", "start": "2027-08-15T10:00"}
+    ]});
+    let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(bad)).await;
+    assert_eq!(status, 422, "{body}");
+    assert_eq!(body["error"]["code"], "invalid_batch");
+    let msg = body["error"]["message"].as_str().unwrap();
+    assert!(
+        msg.contains("change 2") && msg.contains("no-such-race"),
+        "{msg}"
+    );
+    // All or nothing: the marathon is still live, the version unchanged.
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 1);
+    let (_, a) = s.ask("reader-still", "who won the men's marathon?").await;
+    assert_eq!(a["detail"], "live");
+    // A batch whose records contradict each other is checked like files.
+    let bad = json!({"changes": [
+        {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
+            {"competitor": "p036", "place": 1, "mark": "not a time", "award": "gold"}
+        ]}
+    ]});
+    let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(bad)).await;
+    assert_eq!(status, 422);
+    assert!(
+        body["error"]["message"].as_str().unwrap().contains("mark"),
+        "{body}"
+    );
+    // Malformed JSON is a 400 in the usual format.
+    let r = s
+        .client
+        .post(s.url("/v1/admin/batches"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body("{\"changes\": [")
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 400);
+}
+
+#[tokio::test]
+async fn a_whole_dataset_is_replaced_and_its_version_moves_on() {
+    let s = Server::start(admin_server_engine()).await;
+    let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+    let read = |f: &str| -> Value {
+        serde_json::from_str(&std::fs::read_to_string(dir.join(f)).unwrap()).unwrap()
+    };
+    let mut scenario = read("scenario.json");
+    scenario["as_of"] = json!("2027-08-14T22:00:00+01:00");
+    let records = json!({
+        "scenario": scenario,
+        "sports": read("sports.json"),
+        "groups": read("groups.json"),
+        "competitors": read("competitors.json"),
+        "contests": read("contests.json"),
+    });
+    assert!(
+        records.to_string().len() > 64 * 1024,
+        "bigger than a reader's message limit"
+    );
+    let (status, body) = admin(&s, "PUT", "/v1/admin/dataset", Some(records.clone())).await;
+    assert_eq!(status, 200, "{body}");
+    assert_eq!(body["dataset_version"], 2);
+    let (_, a) = s.ask("reader-replaced", "medal table").await;
+    assert_eq!(a["as_of"], "2027-08-14T22:00:00+01:00");
+    // Records that do not agree are refused whole.
+    let mut broken = records;
+    broken["competitors"][0]["group"] = json!("atlantis");
+    let (status, body) = admin(&s, "PUT", "/v1/admin/dataset", Some(broken)).await;
+    assert_eq!(status, 422);
+    assert!(
+        body["error"]["message"]
+            .as_str()
+            .unwrap()
+            .contains("atlantis"),
+        "{body}"
+    );
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 2);
+}
+
+/// Readers keep asking while batches land: no request fails, and each
+/// answer comes from one whole version (versions only go up).
+#[tokio::test(flavor = "multi_thread", worker_threads = 4)]
+async fn questions_are_answered_while_batches_are_applied() {
+    let s = Arc::new(Server::start(admin_server_engine()).await);
+    let asker = {
+        let s = s.clone();
+        tokio::spawn(async move {
+            let mut last = 0;
+            let mut asked = 0;
+            for i in 0..300 {
+                let (status, a) = s
+                    .ask(
+                        &format!("reader-{}", i % 7),
+                        "who is leading the men's marathon?",
+                    )
+                    .await;
+                assert_eq!(status, 200, "{a}");
+                let v = a["dataset_version"].as_u64().unwrap();
+                assert!(v >= last, "version went back from {last} to {v}");
+                last = v;
+                asked += 1;
+            }
+            (asked, last)
+        })
+    };
+    for k in 0..20 {
+        let batch = json!({"changes": [
+            {"change": "results", "contest": "ath-m-marathon-final",
+             "updated": format!("2027-08-14T21:{:02}:00+01:00", 10 + k)}
+        ]});
+        let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(batch)).await;
+        assert_eq!(status, 200, "{body}");
+    }
+    let (asked, last) = asker.await.unwrap();
+    assert_eq!(asked, 300);
+    assert!(last >= 1);
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 21);
+}
