@@ -9,7 +9,12 @@ use std::time::Duration;
 
 use clap::{Args, Parser, Subcommand};
 
+use crate::dataset::shared::SharedData;
 use crate::dialogue::{MemoryStore, RedisStore, SessionStore};
+
+/// How often a replica checks the shared dataset for a newer version: a
+/// change reaches every replica within this plus one fetch.
+const SHARED_POLL_MS: u64 = 200;
 use crate::engine::{self, Clock, Engine, Settings, Sources};
 
 /// Answers readers' questions about results data.
@@ -180,7 +185,15 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         Some(url) => Arc::new(RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?),
         None => Arc::new(MemoryStore::new()),
     };
-    Ok(Engine::new(snap, store, settings))
+    let engine = Engine::new(snap, store, settings);
+    // With Redis, replicas also share the dataset, so a change posted to
+    // one is served by all.
+    Ok(match &o.redis_url {
+        Some(url) => {
+            engine.with_shared(SharedData::new(url, &o.redis_prefix).map_err(|e| e.to_string())?)
+        }
+        None => engine,
+    })
 }
 
 /// Builds an engine with in-memory sessions.
@@ -203,6 +216,18 @@ pub async fn run(cli: Cli) -> i32 {
                     return 1;
                 }
             };
+            if sessions.redis_url.is_some() {
+                // Start from the newest shared data, then keep in step.
+                if let Err(e) = engine.catch_up().await {
+                    tracing::warn!(error = %e, "cannot read the shared dataset; starting from the files");
+                }
+                let follower = engine.clone();
+                tokio::spawn(async move {
+                    follower
+                        .follow_shared(Duration::from_millis(SHARED_POLL_MS))
+                        .await
+                });
+            }
             let listener = match tokio::net::TcpListener::bind(listen).await {
                 Ok(l) => l,
                 Err(e) => {

@@ -14,11 +14,13 @@ use sha2::Sha256;
 
 use crate::catalog::{self, Catalog};
 use crate::dataset::changes::{self, Batch, Records};
+use crate::dataset::shared::{SharedData, SharedError};
 use crate::dataset::{self, DataProblem, Dataset, LoadError};
 use crate::dialogue::session::SCHEMA;
 use crate::dialogue::turn::{turn, Reply, TurnContext};
 use crate::dialogue::{KeepReply, Saved, Session, SessionStore, StoreError};
 use crate::understand::Understanding;
+use std::sync::atomic::{AtomicU64, Ordering};
 
 /// One consistent version of everything a turn reads. A request holds an
 /// `Arc` to one snapshot from start to finish, so a swap never mixes
@@ -238,6 +240,26 @@ pub struct Engine {
     // batches applied at once must not both start from the same version
     // (the second would drop the first's changes). Readers never take it.
     writes: Arc<tokio::sync::Mutex<()>>,
+    /// The dataset shared with other replicas, when there are any.
+    shared: Option<Arc<SharedData>>,
+    // The shared version last seen, read and written under `writes`; an
+    // atomic only so the handle stays cheap to clone.
+    shared_seen: Arc<AtomicU64>,
+}
+
+/// Why a change to the data was not applied.
+#[derive(Debug, thiserror::Error)]
+pub enum ChangeError {
+    /// The change does not check out; nothing changed.
+    #[error("{} problem(s): {}", .0.len(), .0.iter().map(|p| p.to_string()).collect::<Vec<_>>().join("; "))]
+    Invalid(Vec<DataProblem>),
+    /// The change could not be shared with the other replicas, so it was
+    /// not applied here either (replicas must not drift apart).
+    #[error("{0}")]
+    Shared(#[from] SharedError),
+    /// Other replicas kept changing the data meanwhile.
+    #[error("the data kept changing on other replicas; send the change again")]
+    Busy,
 }
 
 impl std::fmt::Debug for Engine {
@@ -256,7 +278,57 @@ impl Engine {
             store,
             settings: Arc::new(settings),
             writes: Arc::new(tokio::sync::Mutex::new(())),
+            shared: None,
+            shared_seen: Arc::new(AtomicU64::new(0)),
         }
+    }
+
+    /// The same engine sharing its dataset with other replicas through
+    /// `shared`.
+    pub fn with_shared(mut self, shared: SharedData) -> Engine {
+        self.shared = Some(Arc::new(shared));
+        self
+    }
+
+    /// Adopts the shared dataset if it is newer than this replica's.
+    pub async fn catch_up(&self) -> Result<(), SharedError> {
+        let _one_at_a_time = self.writes.lock().await;
+        self.catch_up_locked().await
+    }
+
+    /// Keeps this replica's data in step with the shared dataset, checking
+    /// every `every`, until the process ends.
+    pub async fn follow_shared(&self, every: Duration) {
+        let mut failing = false;
+        loop {
+            tokio::time::sleep(every).await;
+            match self.catch_up().await {
+                Ok(()) => failing = false,
+                Err(e) if !failing => {
+                    tracing::warn!(error = %e, "cannot check the shared dataset; serving the last version");
+                    failing = true;
+                }
+                Err(_) => {}
+            }
+        }
+    }
+
+    async fn catch_up_locked(&self) -> Result<(), SharedError> {
+        let Some(shared) = &self.shared else {
+            return Ok(());
+        };
+        let v = shared.version().await?;
+        let snap = self.snapshot();
+        if v > snap.data.version {
+            if let Some((v, records)) = shared.fetch().await? {
+                let data = records
+                    .build(v)
+                    .map_err(|e| SharedError::Corrupt(e.to_string()))?;
+                self.install(data, &snap);
+            }
+        }
+        self.shared_seen.store(v, Ordering::Relaxed);
+        Ok(())
     }
 
     /// The current snapshot.
@@ -466,21 +538,58 @@ impl Engine {
     /// Applies a batch of changes all or nothing: the new dataset version,
     /// or every problem found (and nothing changed). Questions under way
     /// finish on the version they started with.
-    pub async fn apply_batch(&self, batch: &Batch) -> Result<u64, Vec<DataProblem>> {
-        let _one_at_a_time = self.writes.lock().await;
-        let snap = self.snapshot();
-        let now = rfc3339(&self.now(&snap.data));
-        let data = changes::apply(&snap.data, batch, &now)?;
-        Ok(self.install(data, &snap))
+    pub async fn apply_batch(&self, batch: &Batch) -> Result<u64, ChangeError> {
+        self.change(|data, now| changes::apply(data, batch, now))
+            .await
     }
 
     /// Replaces the whole dataset with checked records; the version moves
     /// on from the current one.
-    pub async fn replace_records(&self, records: Records) -> Result<u64, LoadError> {
+    pub async fn replace_records(&self, records: Records) -> Result<u64, ChangeError> {
+        self.change(|data, _| {
+            records
+                .clone()
+                .build(data.version + 1)
+                .map_err(|e| match e {
+                    LoadError::Invalid(p) => p,
+                    LoadError::File(m) => vec![DataProblem {
+                        file: "dataset".into(),
+                        record: String::new(),
+                        field: String::new(),
+                        message: m,
+                    }],
+                })
+        })
+        .await
+    }
+
+    /// One change to the data: made on the latest version, shared with the
+    /// other replicas first (compare-and-set on the shared version, redone
+    /// on the newer data if another replica changed it meanwhile), then
+    /// swapped in here.
+    async fn change(
+        &self,
+        make: impl Fn(&Dataset, &str) -> Result<Dataset, Vec<DataProblem>>,
+    ) -> Result<u64, ChangeError> {
         let _one_at_a_time = self.writes.lock().await;
-        let snap = self.snapshot();
-        let data = records.build(snap.data.version + 1)?;
-        Ok(self.install(data, &snap))
+        for _ in 0..5 {
+            self.catch_up_locked().await?;
+            let snap = self.snapshot();
+            let now = rfc3339(&self.now(&snap.data));
+            let data = make(&snap.data, &now).map_err(ChangeError::Invalid)?;
+            if let Some(shared) = &self.shared {
+                let expected = self.shared_seen.load(Ordering::Relaxed);
+                if !shared
+                    .publish(expected, data.version, &Records::of(&data))
+                    .await?
+                {
+                    continue;
+                }
+                self.shared_seen.store(data.version, Ordering::Relaxed);
+            }
+            return Ok(self.install(data, &snap));
+        }
+        Err(ChangeError::Busy)
     }
 
     /// Builds the understanding for new data with the current catalog and

@@ -10,6 +10,8 @@ use std::time::Duration;
 
 use common::{keys_under, redis_url, test_prefix, wait_until};
 
+const ADMIN_TOKEN: &str = "replica-admin-token-0123456789";
+
 struct Replica {
     child: Child,
     base: String,
@@ -30,6 +32,7 @@ impl Replica {
             // Both replicas hash user ids with the same secret, as a
             // deployment must; debug logging to prove ids stay hashed.
             .env("TIDINGS_ID_SECRET", "replica-test-secret")
+            .env("TIDINGS_ADMIN_TOKEN", ADMIN_TOKEN)
             .env("TIDINGS_LOG", "tidings=debug,tower_http=debug")
             .stdout(Stdio::null())
             .stderr(Stdio::piped())
@@ -178,4 +181,78 @@ async fn a_conversation_alternating_between_two_replicas_keeps_its_context() {
     let logs = a.stop() + &b.stop();
     assert!(logs.contains("turn"), "debug logging was on: {logs}");
     assert!(!logs.contains("7700"), "a raw user id was logged:\n{logs}");
+}
+
+async fn ask(client: &reqwest::Client, base: &str, user: &str, text: &str) -> serde_json::Value {
+    client
+        .post(format!("{base}/v1/messages"))
+        .json(&serde_json::json!({"user": user, "text": text}))
+        .send()
+        .await
+        .unwrap()
+        .json()
+        .await
+        .unwrap()
+}
+
+/// A batch posted to one replica is served by the other within a second,
+/// and a replica started later begins from the shared version.
+#[tokio::test]
+async fn a_change_posted_to_one_replica_is_served_by_all() {
+    let prefix = test_prefix("shared-data");
+    let a = Replica::start(&prefix);
+    let b = Replica::start(&prefix);
+    let client = reqwest::Client::new();
+    ready(&client, &a.base).await;
+    ready(&client, &b.base).await;
+    let q = "who won the men's marathon?";
+    assert_eq!(ask(&client, &b.base, "r1", q).await["detail"], "live");
+
+    let batch = serde_json::json!({"as_of": "2027-08-14T21:30:00+01:00", "changes": [
+        {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
+            {"competitor": "p036", "place": 1, "mark": "2:05:31", "award": "gold"}
+        ]}
+    ]});
+    let r = client
+        .post(format!("{}/v1/admin/batches", a.base))
+        .bearer_auth(ADMIN_TOKEN)
+        .json(&batch)
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 200);
+    let posted = std::time::Instant::now();
+    let v: serde_json::Value = r.json().await.unwrap();
+    let version = v["dataset_version"].as_u64().unwrap();
+
+    // The other replica serves it within one second.
+    wait_until(
+        "the other replica to serve the change",
+        Duration::from_secs(1),
+        || {
+            let client = client.clone();
+            let base = b.base.clone();
+            async move {
+                let a = ask(&client, &base, "r2", q).await;
+                a["dataset_version"] == version && a["detail"] == "answered"
+            }
+        },
+    )
+    .await;
+    eprintln!("served by the other replica after {:?}", posted.elapsed());
+    let answer = ask(&client, &b.base, "r3", q).await;
+    assert!(
+        answer["text"]
+            .as_str()
+            .unwrap()
+            .starts_with("Banel Morressi (Kalvenmark) won the men's marathon"),
+        "{answer}"
+    );
+
+    // A replica that was not running catches up by version at start.
+    let c = Replica::start(&prefix);
+    ready(&client, &c.base).await;
+    let answer = ask(&client, &c.base, "r4", q).await;
+    assert_eq!(answer["dataset_version"], version, "{answer}");
+    let _ = (a.stop(), b.stop(), c.stop());
 }

@@ -6,6 +6,7 @@ pub mod changes;
 pub mod load;
 pub mod mark;
 pub mod model;
+pub mod shared;
 
 use std::collections::HashMap;
 

@@ -15,8 +15,7 @@ use serde_json::json;
 
 use super::{ApiError, AppJson};
 use crate::dataset::changes::{Batch, Records};
-use crate::dataset::LoadError;
-use crate::engine::Engine;
+use crate::engine::{ChangeError, Engine};
 
 /// Largest admin request body: a whole scenario fits with room to spare.
 pub const MAX_ADMIN_BODY: usize = 32 * 1024 * 1024;
@@ -60,16 +59,10 @@ async fn apply_batch(
             "dataset_version": version,
             "applied": batch.changes.len(),
         }))),
-        Err(problems) => Err(ApiError::invalid(
+        Err(e) => Err(change_error(
             "invalid_batch",
-            format!(
-                "the batch was not applied: {}",
-                problems
-                    .iter()
-                    .map(|p| p.to_string())
-                    .collect::<Vec<_>>()
-                    .join("; ")
-            ),
+            "the batch was not applied",
+            e,
         )),
     }
 }
@@ -81,18 +74,41 @@ async fn replace_dataset(
 ) -> Result<impl IntoResponse, ApiError> {
     match engine.replace_records(records).await {
         Ok(version) => Ok(Json(json!({ "dataset_version": version }))),
-        Err(LoadError::Invalid(problems)) => Err(ApiError::invalid(
+        Err(e) => Err(change_error(
             "invalid_dataset",
+            "the dataset was not replaced",
+            e,
+        )),
+    }
+}
+
+/// A change that was refused: 422 with every problem when it does not
+/// check out, 503 when it could not be shared with the other replicas.
+fn change_error(code: &'static str, what: &str, e: ChangeError) -> ApiError {
+    match e {
+        ChangeError::Invalid(problems) => ApiError::invalid(
+            code,
             format!(
-                "the dataset was not replaced: {}",
+                "{what}: {}",
                 problems
                     .iter()
                     .map(|p| p.to_string())
                     .collect::<Vec<_>>()
                     .join("; ")
             ),
-        )),
-        Err(e) => Err(ApiError::invalid("invalid_dataset", e.to_string())),
+        ),
+        ChangeError::Shared(e) => ApiError {
+            status: StatusCode::SERVICE_UNAVAILABLE,
+            code: "not_shared",
+            message: format!(
+                "{what}: it could not be shared with the other replicas ({e}); nothing changed"
+            ),
+        },
+        ChangeError::Busy => ApiError {
+            status: StatusCode::SERVICE_UNAVAILABLE,
+            code: "busy",
+            message: format!("{what}: {}", ChangeError::Busy),
+        },
     }
 }
 
