@@ -112,6 +112,14 @@ pub enum Command {
         #[command(flatten)]
         common: Common,
     },
+    /// Run conversation scripts: every turn must show what it says it will.
+    Test {
+        #[command(flatten)]
+        common: Common,
+        /// Script files or folders of them (default: tests/scripts).
+        #[arg(default_value = "tests/scripts")]
+        paths: Vec<PathBuf>,
+    },
     /// Measure understanding and answers against a labelled question set.
     Eval {
         #[command(flatten)]
@@ -340,6 +348,7 @@ pub async fn run(cli: Cli) -> i32 {
             verbose,
             json,
         } => crate::eval::run_cli(&common, &set, verbose, json).await,
+        Command::Test { common, paths } => crate::scripts::run(&common, &paths).await,
     }
 }
 

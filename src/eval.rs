@@ -108,16 +108,42 @@ pub fn load_set(path: &Path) -> Result<Vec<Case>, String> {
     let text = std::fs::read_to_string(path)
         .map_err(|e| format!("{}: cannot read: {e}", path.display()))?;
     serde_saphyr::from_str(&text).map_err(|e| {
-        let (l, c) = e
-            .location()
-            .map(|l| (l.line(), l.column()))
-            .unwrap_or((0, 0));
+        // A case is a question or a conversation, so a mistake inside one
+        // only shows as "matches neither" at the case's start. Reading the
+        // file as all questions and as all conversations says what is
+        // wrong, and where: the reading that got furthest is reported.
+        let at = |e: &serde_saphyr::Error| {
+            e.location()
+                .map(|l| (l.line(), l.column()))
+                .unwrap_or((0, 0))
+        };
+        let mut best = (at(&e), e.to_string());
+        let tries = [
+            serde_saphyr::from_str::<Vec<Turn>>(&text).err(),
+            serde_saphyr::from_str::<Vec<ConversationCase>>(&text).err(),
+        ];
+        for t in tries.into_iter().flatten() {
+            if at(&t) > best.0 {
+                best = (at(&t), t.to_string());
+            }
+        }
+        let ((l, c), message) = best;
         format!(
             "{}:{l}:{c}: {}",
             path.display(),
-            e.to_string().lines().next().unwrap_or("invalid YAML")
+            message.lines().next().unwrap_or("invalid YAML")
         )
     })
+}
+
+/// A conversation on its own, to locate mistakes inside one.
+#[derive(Debug, Deserialize)]
+#[serde(deny_unknown_fields)]
+#[allow(dead_code)] // read only for its error messages
+struct ConversationCase {
+    conversation: Vec<Turn>,
+    #[serde(default)]
+    tags: Vec<String>,
 }
 
 /// Runs every case through the engine; each case is a fresh reader.

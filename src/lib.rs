@@ -4,18 +4,21 @@
 //! # Module map
 //!
 //! - [`dataset`]: the results model (contests, competitors, groups,
-//!   results), loading and validating a scenario's files.
+//!   results), loading and validating a scenario's files, live batches of
+//!   changes and the copy replicas share.
 //! - [`catalog`]: the intents editors write in YAML and their reply wording
 //!   ([`catalog::template`]).
 //! - [`understand`]: normalising text, finding names (exact and fuzzy),
 //!   scoring intents, filling slots.
-//! - [`answers`]: the closed set of data operations ([`answers::ops`]) and
-//!   the values and words they are phrased with.
+//! - [`answers`]: the closed set of data operations ([`answers::ops`]), the
+//!   values and words they are phrased with, and the channels (chat, SMS,
+//!   voice, plain) replies are shaped for.
 //! - [`dialogue`]: sessions, their stores and one turn of a conversation.
 //! - [`engine`]: the current snapshot, the store and the clock behind one
 //!   entry point, [`engine::Engine::handle`].
-//! - [`http`]: the HTTP API. [`cli`]: the command line. [`eval`]: measuring
-//!   quality on a labelled question set.
+//! - [`http`]: the HTTP API, including the admin API. [`cli`]: the command
+//!   line. [`eval`]: measuring quality on a labelled question set.
+//!   [`scripts`]: editors' conversation scripts (`tidings test`).
 //!
 //! # Quick example
 //!
@@ -43,4 +46,5 @@ pub mod dialogue;
 pub mod engine;
 pub mod eval;
 pub mod http;
+pub mod scripts;
 pub mod understand;
