@@ -55,6 +55,10 @@ pub struct SessionOptions {
     /// How long a message id is remembered for retries, in seconds.
     #[arg(long, env = "TIDINGS_RETRY_WINDOW", default_value_t = 600)]
     pub retry_window: u64,
+    /// After how long without an update a live contest's figures are said
+    /// to be old in answers, in seconds.
+    #[arg(long, env = "TIDINGS_STALE_AFTER", default_value_t = 600)]
+    pub stale_after: u64,
     /// Bearer token for the admin API (/v1/admin/...); without one the
     /// admin API is off.
     #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
@@ -69,6 +73,7 @@ impl SessionOptions {
             redis_prefix: String::new(),
             session_ttl,
             retry_window: 600,
+            stale_after: 600,
             admin_token: None,
         }
     }
@@ -188,6 +193,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         retry_window: Duration::from_secs(o.retry_window.max(1)),
         id_secret: id_secret(),
         admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
+        stale_after: Duration::from_secs(o.stale_after),
     };
     let store: Arc<dyn SessionStore> = match &o.redis_url {
         Some(url) => Arc::new(RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?),

@@ -149,6 +149,9 @@ pub struct Settings {
     pub id_secret: Vec<u8>,
     /// The admin API's bearer token; `None` turns the admin API off.
     pub admin_token: Option<String>,
+    /// After how long without an update a live contest's figures are said
+    /// to be old.
+    pub stale_after: Duration,
 }
 
 impl Settings {
@@ -161,6 +164,7 @@ impl Settings {
             retry_window: Duration::from_secs(600),
             id_secret,
             admin_token: None,
+            stale_after: Duration::from_secs(600),
         }
     }
 }
@@ -504,6 +508,7 @@ impl Engine {
             understanding: &snap.understanding,
             now: &now,
             channel: profile,
+            stale_after: self.settings.stale_after,
         };
         let (reply, session) = turn(&ctx, session, text);
         let reply_text = reply.text.clone();

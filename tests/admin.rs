@@ -222,3 +222,53 @@ async fn questions_are_answered_while_batches_are_applied() {
     let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
     assert_eq!(st["dataset_version"], 21);
 }
+
+/// A live figure not updated for longer than the configured time says how
+/// old it is; a fresh one does not.
+#[tokio::test]
+async fn an_old_live_figure_says_how_old_it_is() {
+    let at = |now: &str, stale_secs: u64| {
+        let mut settings = test_settings();
+        settings.clock = tidings::engine::Clock::Fixed(now.parse().unwrap());
+        settings.stale_after = std::time::Duration::from_secs(stale_secs);
+        engine_with(Arc::new(MemoryStore::new()), settings)
+    };
+    let q = "who is leading the men's marathon?";
+    // The marathon was last updated at 21:02.
+    let fresh = at("2027-08-14T21:10:00+01:00", 600)
+        .handle("r", "chat", q)
+        .await
+        .unwrap();
+    assert!(!fresh.reply.text.contains("ago"), "{}", fresh.reply.text);
+    let old = at("2027-08-14T21:45:00+01:00", 600)
+        .handle("r", "chat", q)
+        .await
+        .unwrap();
+    assert!(
+        old.reply.text.contains("(as of 21:02, 43 minutes ago)"),
+        "{}",
+        old.reply.text
+    );
+    let spoken = at("2027-08-14T21:45:00+01:00", 600)
+        .handle("r", "voice", "who won the men's marathon?")
+        .await
+        .unwrap();
+    assert!(
+        spoken
+            .reply
+            .text
+            .contains("last updated forty-three minutes ago"),
+        "{}",
+        spoken.reply.text
+    );
+    // A longer threshold: the same figure is not yet old.
+    let patient = at("2027-08-14T21:45:00+01:00", 3600)
+        .handle("r", "chat", q)
+        .await
+        .unwrap();
+    assert!(
+        !patient.reply.text.contains("ago"),
+        "{}",
+        patient.reply.text
+    );
+}

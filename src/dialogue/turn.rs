@@ -96,6 +96,8 @@ pub struct TurnContext<'a> {
     pub now: &'a ZonedDateTime,
     /// The channel's profile: words, length, SSML, quick replies.
     pub channel: &'a Profile,
+    /// After how long without an update live figures are said to be old.
+    pub stale_after: std::time::Duration,
 }
 
 impl TurnContext<'_> {
@@ -352,6 +354,7 @@ fn run(
         now: ctx.now,
         settings: &intent.settings,
         topics: &topics,
+        stale_after: ctx.stale_after,
     };
     match (intent.operation.run)(&input) {
         OpOutput::Choose { slot, options } if options.is_empty() => proceed(

@@ -22,6 +22,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "second",
                 "margin",
                 "updated",
+                "stale",
             ],
         ),
         answered("tied", &["contest_name", "leader", "mark"]),
@@ -89,6 +90,9 @@ fn run(input: &OpInput) -> OpOutput {
     }
     if c.status == Status::Final {
         return OpOutput::done("final", f, mentioned).about(subjects);
+    }
+    if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
+        f.put("stale", s);
     }
     if let Some(t) = data.facts[ci].updated {
         let z = t.to_zoned_datetime(data.tz.clone());

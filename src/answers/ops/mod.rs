@@ -220,6 +220,9 @@ pub struct OpInput<'a> {
     pub settings: &'a BTreeMap<String, String>,
     /// One line per question the service can answer, for help replies.
     pub topics: &'a [String],
+    /// After how long without an update a live contest's figures are said
+    /// to be old ("last updated 38 minutes ago").
+    pub stale_after: std::time::Duration,
 }
 
 impl OpInput<'_> {

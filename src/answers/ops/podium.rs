@@ -42,7 +42,7 @@ pub static SPEC: OpSpec = OpSpec {
         // An award asked for in a round that gives none.
         answered("no_awards", &[]),
         // Still under way: who leads now.
-        no_data("live", &["leader", "mark"]),
+        no_data("live", &["leader", "mark", "stale"]),
         no_data("scheduled", &["start"]),
         no_data("no_result", &[]),
     ],
@@ -77,6 +77,9 @@ fn run(input: &OpInput) -> OpOutput {
             let mut f = Facts::new().set("leader", labels(data, c, &leaders));
             if let Some(m) = super::support::mark_value(data, ci, first) {
                 f.put("mark", m);
+            }
+            if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
+                f.put("stale", s);
             }
             let who = entities(data, c, &leaders);
             let mentioned = std::iter::once(me).chain(who.iter().copied()).collect();

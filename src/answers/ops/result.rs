@@ -34,7 +34,14 @@ pub static SPEC: OpSpec = OpSpec {
         answered("did_not_finish", &["name", "status", "contest_name"]),
         no_data(
             "live",
-            &["name", "place", "place_nth", "mark", "contest_name"],
+            &[
+                "name",
+                "place",
+                "place_nth",
+                "mark",
+                "contest_name",
+                "stale",
+            ],
         ),
         no_data("scheduled", &["name", "start", "contest_name"]),
         no_data("not_entered", &["name", "contest_name"]),
@@ -104,6 +111,9 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("mark", m);
     }
     if c.status == Status::Live {
+        if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
+            f.put("stale", s);
+        }
         return OpOutput::done("live", f, mentioned);
     }
     if let Some(a) = &e.award {

@@ -301,6 +301,44 @@ pub fn rank_value(rank: u32, shared: bool) -> Value {
     Value::ordinal_with(rank as u64, if shared { "joint" } else { "" })
 }
 
+/// How old a live contest's figures are, when older than `stale_after`:
+/// "38 minutes ago" (from its last update, or the data's `as_of` when it
+/// has none). `None` while they are fresh, or when the contest is not live.
+pub fn staleness(
+    data: &Dataset,
+    ci: usize,
+    now: &ZonedDateTime,
+    stale_after: std::time::Duration,
+) -> Option<Value> {
+    if data.contests[ci].status != Status::Live {
+        return None;
+    }
+    let updated = data.facts[ci].updated.unwrap_or(data.as_of);
+    let age = now.timestamp().as_second() - updated.as_second();
+    if age < 0 || (age as u64) < stale_after.as_secs() {
+        return None;
+    }
+    let minutes = (age / 60) as u64;
+    let phrase = |style: Style| {
+        let (n, unit) = if minutes < 120 {
+            (minutes, "minute")
+        } else {
+            (minutes / 60, "hour")
+        };
+        let num = int_words(n as i64, style, false);
+        let unit = if n == 1 {
+            unit.to_string()
+        } else {
+            words::plural(unit)
+        };
+        format!("{num} {unit} ago")
+    };
+    Some(Value::Dual {
+        text: phrase(Style::Text),
+        spoken: phrase(Style::Spoken),
+    })
+}
+
 /// Name, start and venue of a contest.
 pub fn contest_facts(data: &Dataset, ci: usize, now: &ZonedDateTime, f: &mut super::Facts) {
     f.put("contest_name", data.contest_name(ci));
