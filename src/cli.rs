@@ -15,6 +15,9 @@ use crate::dialogue::{MemoryStore, RedisStore, SessionStore};
 /// How often a replica checks the shared dataset for a newer version: a
 /// change reaches every replica within this plus one fetch.
 const SHARED_POLL_MS: u64 = 200;
+
+/// How often `--watch` looks at the files.
+const WATCH_POLL_MS: u64 = 500;
 use crate::engine::{self, Clock, Engine, Settings, Sources};
 
 /// Answers readers' questions about results data.
@@ -90,6 +93,10 @@ pub enum Command {
         listen: SocketAddr,
         #[command(flatten)]
         sessions: SessionOptions,
+        /// Read the --data and --intents folders again when their files
+        /// change; a broken file keeps the last good version serving.
+        #[arg(long, env = "TIDINGS_WATCH")]
+        watch: bool,
     },
     /// Answer one question and exit.
     Ask {
@@ -222,7 +229,12 @@ pub async fn run(cli: Cli) -> i32 {
             common,
             listen,
             sessions,
+            watch,
         } => {
+            if watch && common.data.is_none() && common.intents.is_none() {
+                eprintln!("--watch needs --data or --intents: the built-in demo does not change");
+                return 2;
+            }
             let engine = match build_engine(&common, &sessions) {
                 Ok(e) => e,
                 Err(e) => {
@@ -230,6 +242,13 @@ pub async fn run(cli: Cli) -> i32 {
                     return 1;
                 }
             };
+            if watch {
+                let watcher = engine.clone();
+                let src = sources(&common);
+                tokio::spawn(async move {
+                    crate::watch::watch(watcher, src, Duration::from_millis(WATCH_POLL_MS)).await
+                });
+            }
             if sessions.redis_url.is_some() {
                 // Start from the newest shared data, then keep in step.
                 if let Err(e) = engine.catch_up().await {

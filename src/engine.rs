@@ -249,6 +249,9 @@ pub struct Engine {
     // The shared version last seen, read and written under `writes`; an
     // atomic only so the handle stays cheap to clone.
     shared_seen: Arc<AtomicU64>,
+    // The last reload problem, for the admin status. A std mutex: it is set
+    // and read in one short step, never across an await.
+    reload_error: Arc<std::sync::Mutex<Option<String>>>,
 }
 
 /// Why a change to the data was not applied.
@@ -284,6 +287,7 @@ impl Engine {
             writes: Arc::new(tokio::sync::Mutex::new(())),
             shared: None,
             shared_seen: Arc::new(AtomicU64::new(0)),
+            reload_error: Arc::new(std::sync::Mutex::new(None)),
         }
     }
 
@@ -338,6 +342,24 @@ impl Engine {
     /// The current snapshot.
     pub fn snapshot(&self) -> Arc<Snapshot> {
         self.snapshot.load_full()
+    }
+
+    /// Serves a new catalog (intents, wording, channels) with the current
+    /// data; questions under way finish on the old one.
+    pub async fn replace_catalog(&self, catalog: Catalog) {
+        let _one_at_a_time = self.writes.lock().await;
+        let snap = self.snapshot();
+        self.swap(Snapshot::new(snap.data.clone(), catalog));
+        tracing::info!(
+            intents = self.snapshot().catalog.intents.len(),
+            "intents reloaded"
+        );
+    }
+
+    /// Records the outcome of a reload from files: `Some(problem)` keeps
+    /// the last good version serving and shows the problem in the status.
+    pub fn set_reload_error(&self, problem: Option<String>) {
+        *self.reload_error.lock().unwrap_or_else(|p| p.into_inner()) = problem;
     }
 
     /// Replaces the snapshot; requests under way finish on the old one.
@@ -623,6 +645,7 @@ impl Engine {
                 Ok(()) => "ok".to_string(),
                 Err(e) => e.to_string(),
             }},
+            "reload_error": self.reload_error.lock().unwrap_or_else(|p| p.into_inner()).clone(),
         })
     }
 

@@ -19,6 +19,7 @@
 //! - [`http`]: the HTTP API, including the admin API. [`cli`]: the command
 //!   line. [`eval`]: measuring quality on a labelled question set.
 //!   [`scripts`]: editors' conversation scripts (`tidings test`).
+//!   [`watch`]: reloading changed files while serving.
 //!
 //! # Quick example
 //!
@@ -48,3 +49,4 @@ pub mod eval;
 pub mod http;
 pub mod scripts;
 pub mod understand;
+pub mod watch;

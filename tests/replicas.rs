@@ -3,88 +3,36 @@
 
 mod common;
 
-use std::io::{BufRead, BufReader};
-use std::process::{Child, Command, Stdio};
-use std::sync::{Arc, Mutex};
 use std::time::Duration;
 
-use common::{keys_under, redis_url, test_prefix, wait_until};
+use common::{keys_under, redis_url, test_prefix, wait_until, ServeProcess};
 
 const ADMIN_TOKEN: &str = "replica-admin-token-0123456789";
 
-struct Replica {
-    child: Child,
-    base: String,
-    log: Arc<Mutex<String>>,
-}
+/// A replica: `tidings serve` on the shared Redis under `prefix`. Every
+/// replica hashes user ids with the same secret, as a deployment must, and
+/// logs at debug level to prove ids stay hashed.
+struct Replica;
 
 impl Replica {
-    /// Starts `tidings serve` on a port the kernel picks (`--listen
-    /// 127.0.0.1:0`) and reads the bound address from its log, so two
-    /// replicas can never be handed the same port.
-    fn start(prefix: &str) -> Replica {
-        let mut child = Command::new(env!("CARGO_BIN_EXE_tidings"))
-            .arg("serve")
-            .args(["--listen", "127.0.0.1:0"])
-            .args(["--redis-url", &redis_url()])
-            .args(["--redis-prefix", prefix])
-            .args(["--now", common::NOW])
-            // Both replicas hash user ids with the same secret, as a
-            // deployment must; debug logging to prove ids stay hashed.
-            .env("TIDINGS_ID_SECRET", "replica-test-secret")
-            .env("TIDINGS_ADMIN_TOKEN", ADMIN_TOKEN)
-            .env("TIDINGS_LOG", "tidings=debug,tower_http=debug")
-            .stdout(Stdio::null())
-            .stderr(Stdio::piped())
-            .spawn()
-            .expect("tidings serve starts");
-        // Drain the log all along (a full pipe would block the server) and
-        // pick out the address it reports.
-        let log = Arc::new(Mutex::new(String::new()));
-        let (tx, rx) = std::sync::mpsc::channel::<String>();
-        let stderr = child.stderr.take().expect("stderr is piped");
-        let sink = Arc::clone(&log);
-        std::thread::spawn(move || {
-            for line in BufReader::new(stderr).lines().map_while(Result::ok) {
-                if line.contains("serving") {
-                    if let Some(addr) = line
-                        .split_whitespace()
-                        .find_map(|w| w.strip_prefix("addr="))
-                    {
-                        let _ = tx.send(addr.to_string());
-                    }
-                }
-                let mut l = sink.lock().unwrap();
-                l.push_str(&line);
-                l.push('\n');
-            }
-        });
-        let addr = rx
-            .recv_timeout(Duration::from_secs(30))
-            .unwrap_or_else(|_| {
-                panic!(
-                    "tidings serve did not report its address: {}",
-                    log.lock().unwrap()
-                )
-            });
-        Replica {
-            child,
-            base: format!("http://{addr}"),
-            log,
-        }
-    }
-
-    /// Stops the process and returns what it logged.
-    fn stop(mut self) -> String {
-        assert!(
-            self.child.try_wait().unwrap().is_none(),
-            "replica {} exited early",
-            self.base
-        );
-        let _ = self.child.kill();
-        let _ = self.child.wait();
-        let log = self.log.lock().unwrap().clone();
-        log
+    fn start(prefix: &str) -> ServeProcess {
+        let url = redis_url();
+        ServeProcess::start(
+            env!("CARGO_BIN_EXE_tidings"),
+            &[
+                "--redis-url",
+                &url,
+                "--redis-prefix",
+                prefix,
+                "--now",
+                common::NOW,
+            ],
+            &[
+                ("TIDINGS_ID_SECRET", "replica-test-secret"),
+                ("TIDINGS_ADMIN_TOKEN", ADMIN_TOKEN),
+                ("TIDINGS_LOG", "tidings=debug,tower_http=debug"),
+            ],
+        )
     }
 }
 

@@ -4,8 +4,11 @@
 
 pub mod speech;
 
+use std::io::{BufRead, BufReader};
 use std::net::SocketAddr;
+use std::process::{Child, Command, Stdio};
 use std::sync::Arc;
+use std::sync::Mutex;
 use std::time::Duration;
 
 use tidings::dialogue::MemoryStore;
@@ -176,5 +179,78 @@ where
             panic!("timed out waiting for {what}");
         }
         tokio::time::sleep(Duration::from_millis(25)).await;
+    }
+}
+
+/// A `tidings serve` process of the test's own.
+pub struct ServeProcess {
+    child: Child,
+    pub base: String,
+    log: Arc<Mutex<String>>,
+}
+
+impl ServeProcess {
+    /// Starts `bin serve` (the test's own `tidings`, passed as
+    /// `env!("CARGO_BIN_EXE_tidings")`) with `args` and `envs`, on a port
+    /// the kernel picks (`--listen 127.0.0.1:0`), and reads the bound
+    /// address from its log, so two processes can never be handed the
+    /// same port.
+    pub fn start(bin: &str, args: &[&str], envs: &[(&str, &str)]) -> ServeProcess {
+        let mut child = Command::new(bin)
+            .arg("serve")
+            .args(["--listen", "127.0.0.1:0"])
+            .args(args)
+            .envs(envs.iter().copied())
+            .stdout(Stdio::null())
+            .stderr(Stdio::piped())
+            .spawn()
+            .expect("tidings serve starts");
+        // Drain the log all along (a full pipe would block the server) and
+        // pick out the address it reports.
+        let log = Arc::new(Mutex::new(String::new()));
+        let (tx, rx) = std::sync::mpsc::channel::<String>();
+        let stderr = child.stderr.take().expect("stderr is piped");
+        let sink = Arc::clone(&log);
+        std::thread::spawn(move || {
+            for line in BufReader::new(stderr).lines().map_while(Result::ok) {
+                if line.contains("serving") {
+                    if let Some(addr) = line
+                        .split_whitespace()
+                        .find_map(|w| w.strip_prefix("addr="))
+                    {
+                        let _ = tx.send(addr.to_string());
+                    }
+                }
+                let mut l = sink.lock().unwrap();
+                l.push_str(&line);
+                l.push('\n');
+            }
+        });
+        let addr = rx
+            .recv_timeout(Duration::from_secs(30))
+            .unwrap_or_else(|_| {
+                panic!(
+                    "tidings serve did not report its address: {}",
+                    log.lock().unwrap()
+                )
+            });
+        ServeProcess {
+            child,
+            base: format!("http://{addr}"),
+            log,
+        }
+    }
+
+    /// Stops the process and returns what it logged.
+    pub fn stop(mut self) -> String {
+        assert!(
+            self.child.try_wait().unwrap().is_none(),
+            "replica {} exited early",
+            self.base
+        );
+        let _ = self.child.kill();
+        let _ = self.child.wait();
+        let log = self.log.lock().unwrap().clone();
+        log
     }
 }
