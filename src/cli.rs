@@ -124,6 +124,19 @@ pub enum Command {
         #[command(flatten)]
         common: Common,
     },
+    /// List the questions readers asked that got no answer, most frequent
+    /// first, from the Redis the service keeps them in.
+    Unanswered {
+        /// The service's Redis URL.
+        #[arg(long, env = "TIDINGS_REDIS_URL")]
+        redis_url: String,
+        /// The service's key prefix.
+        #[arg(long, env = "TIDINGS_REDIS_PREFIX", default_value = "tidings:")]
+        redis_prefix: String,
+        /// How many to list.
+        #[arg(long, default_value_t = 50)]
+        limit: usize,
+    },
     /// Run conversation scripts: every turn must show what it says it will.
     Test {
         #[command(flatten)]
@@ -374,6 +387,36 @@ pub async fn run(cli: Cli) -> i32 {
             json,
         } => crate::eval::run_cli(&common, &set, verbose, json).await,
         Command::Test { common, paths } => crate::scripts::run(&common, &paths).await,
+        Command::Unanswered {
+            redis_url,
+            redis_prefix,
+            limit,
+        } => {
+            let store = match RedisStore::new(&redis_url, &redis_prefix) {
+                Ok(s) => s,
+                Err(e) => {
+                    eprintln!("{e}");
+                    return 1;
+                }
+            };
+            match store.unanswered(limit).await {
+                Ok(rows) if rows.is_empty() => {
+                    say("no unanswered questions kept");
+                    0
+                }
+                Ok(rows) => {
+                    say(&format!("{:>6}  {:<15}  question", "times", "kind"));
+                    for r in rows {
+                        say(&format!("{:>6}  {:<15}  {}", r.count, r.kind, r.text));
+                    }
+                    0
+                }
+                Err(e) => {
+                    eprintln!("{e}");
+                    1
+                }
+            }
+        }
     }
 }
 

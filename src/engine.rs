@@ -18,7 +18,7 @@ use crate::dataset::shared::{SharedData, SharedError};
 use crate::dataset::{self, DataProblem, Dataset, LoadError};
 use crate::dialogue::session::SCHEMA;
 use crate::dialogue::turn::{turn, Reply, TurnContext};
-use crate::dialogue::{KeepReply, Saved, Session, SessionStore, StoreError};
+use crate::dialogue::{KeepReply, Saved, Session, SessionStore, StoreError, Unanswered};
 use crate::understand::Understanding;
 use std::sync::atomic::{AtomicU64, Ordering};
 
@@ -430,6 +430,7 @@ impl Engine {
                 Err(e) => {
                     tracing::warn!(error = %e, "session store unavailable; answering without context");
                     let (answer, _) = self.answer(ch, None, m.text, &key);
+                    self.note_unanswered(&answer.reply).await;
                     return Ok(Answer {
                         degraded: true,
                         ..answer
@@ -471,7 +472,10 @@ impl Engine {
                 done => done,
             };
             match saved {
-                Ok(Saved::Stored) => return Ok(answer),
+                Ok(Saved::Stored) => {
+                    self.note_unanswered(&answer.reply).await;
+                    return Ok(answer);
+                }
                 Ok(Saved::Answered(earlier)) => {
                     if let Some(a) = repeated(&earlier) {
                         return Ok(a);
@@ -497,6 +501,21 @@ impl Engine {
             }
         }
         Err(EngineError::Busy)
+    }
+
+    /// Adds what a turn left unanswered to the editors' list. The list is
+    /// a help, not a record: a failure is logged and the reply goes out.
+    async fn note_unanswered(&self, reply: &Reply) {
+        for (text, kind) in &reply.unanswered {
+            if let Err(e) = self.store.note_unanswered(text, kind).await {
+                tracing::debug!(error = %e, "unanswered question not noted");
+            }
+        }
+    }
+
+    /// The most asked questions that got no answer, most frequent first.
+    pub async fn unanswered(&self, limit: usize) -> Result<Vec<Unanswered>, StoreError> {
+        self.store.unanswered(limit).await
     }
 
     /// Runs one turn against the current snapshot. A stored session from

@@ -272,3 +272,67 @@ async fn an_old_live_figure_says_how_old_it_is() {
         patient.reply.text
     );
 }
+
+/// Questions that got no answer are listed for editors, most frequent
+/// first, grouped by normalised text, with no reader ids; `tidings
+/// unanswered` lists the same from Redis.
+#[tokio::test]
+async fn the_unanswered_list_counts_questions_without_readers() {
+    let prefix = common::test_prefix("unanswered");
+    let mut settings = test_settings();
+    settings.admin_token = Some(TOKEN.into());
+    let store =
+        Arc::new(tidings::dialogue::RedisStore::new(&common::redis_url(), &prefix).unwrap());
+    let s = Server::start(engine_with(store, settings)).await;
+    for (user, text) in [
+        ("+44 7700 900001", "What is the weather like?"),
+        ("+44 7700 900002", "what is the WEATHER like"),
+        ("+44 7700 900003", "translate this into Spanish please"),
+    ] {
+        s.ask(user, text).await;
+    }
+    // Asked back about, then left for another question.
+    s.ask("+44 7700 900004", "when does Zoe compete next?")
+        .await;
+    s.ask("+44 7700 900004", "who leads the medal table?").await;
+    // Asked back about and answered: not on the list.
+    s.ask("+44 7700 900005", "how did Zoe do?").await;
+    s.ask("+44 7700 900005", "the rower").await;
+
+    let (status, body) = admin(&s, "GET", "/v1/admin/unanswered?limit=10", None).await;
+    assert_eq!(status, 200, "{body}");
+    let rows = body["unanswered"].as_array().unwrap();
+    assert_eq!(rows[0]["text"], "what is the weather like");
+    assert_eq!(rows[0]["count"], 2);
+    assert_eq!(rows[0]["kind"], "not_understood");
+    assert!(
+        rows.iter()
+            .any(|r| r["kind"] == "abandoned" && r["text"] == "when does zoe compete next"),
+        "{body}"
+    );
+    assert!(
+        !rows
+            .iter()
+            .any(|r| r["text"].as_str().unwrap().contains("how did zoe")),
+        "{body}"
+    );
+    assert!(!body.to_string().contains("7700"), "no reader ids: {body}");
+
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_tidings"))
+        .args([
+            "unanswered",
+            "--redis-url",
+            &common::redis_url(),
+            "--redis-prefix",
+            &prefix,
+        ])
+        .output()
+        .unwrap();
+    assert!(out.status.success());
+    let text = String::from_utf8_lossy(&out.stdout);
+    let first = text.lines().nth(1).unwrap_or_default();
+    assert!(
+        first.contains("2") && first.contains("what is the weather like"),
+        "{text}"
+    );
+}

@@ -166,6 +166,19 @@ impl SessionStore for Paused {
     fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>> {
         self.0.erase(reader)
     }
+    fn note_unanswered<'a>(
+        &'a self,
+        text: &'a str,
+        kind: &'a str,
+    ) -> BoxFuture<'a, Result<(), StoreError>> {
+        self.0.note_unanswered(text, kind)
+    }
+    fn unanswered(
+        &self,
+        limit: usize,
+    ) -> BoxFuture<'_, Result<Vec<tidings::dialogue::Unanswered>, StoreError>> {
+        self.0.unanswered(limit)
+    }
     fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>> {
         self.0.ping()
     }

@@ -336,6 +336,39 @@ async fn concurrent_updates_of_one_reader_are_never_lost(store: Arc<dyn SessionS
     assert_eq!(loaded.session.map(|s| s.turn), Some(TASKS));
 }
 
+async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn SessionStore>) {
+    use tidings::dialogue::store::UNANSWERED_CAP;
+    for _ in 0..3 {
+        store
+            .note_unanswered("what is the weather", "not_understood")
+            .await
+            .unwrap();
+    }
+    store.note_unanswered("who won", "abandoned").await.unwrap();
+    store
+        .note_unanswered("what is the weather", "abandoned")
+        .await
+        .unwrap();
+    let top = store.unanswered(2).await.unwrap();
+    assert_eq!(top.len(), 2);
+    assert_eq!(
+        (top[0].text.as_str(), top[0].kind.as_str(), top[0].count),
+        ("what is the weather", "not_understood", 3)
+    );
+    assert_eq!(top[1].count, 1);
+    // Capped: the least asked go first; the most asked stay.
+    for i in 0..UNANSWERED_CAP + 5 {
+        store
+            .note_unanswered(&format!("filler {i}"), "not_understood")
+            .await
+            .unwrap();
+    }
+    let all = store.unanswered(UNANSWERED_CAP * 2).await.unwrap();
+    assert_eq!(all.len(), UNANSWERED_CAP);
+    assert_eq!(all[0].text, "what is the weather");
+    assert_eq!(all[0].count, 3);
+}
+
 /// One test per backend for each check: `memory_store::<check>` and
 /// `redis_store::<check>`. Multi-threaded, so the concurrency check runs
 /// really concurrently.
@@ -370,6 +403,7 @@ contract!(
     sessions_and_replies_expire_after_their_ttl,
     erase_removes_a_readers_session_and_replies_and_nobody_elses,
     concurrent_updates_of_one_reader_are_never_lost,
+    unanswered_questions_are_counted_grouped_and_capped,
 );
 
 // ---------------------------------------------------------------------------

@@ -16,5 +16,5 @@ pub mod turn;
 
 pub use redis_store::RedisStore;
 pub use session::Session;
-pub use store::{KeepReply, Loaded, MemoryStore, Saved, SessionStore, StoreError};
+pub use store::{KeepReply, Loaded, MemoryStore, Saved, SessionStore, StoreError, Unanswered};
 pub use turn::{Outcome, Reply};

@@ -30,7 +30,9 @@ use redis::{RedisResult, Script};
 use tokio::sync::OnceCell;
 
 use super::session::{Session, SCHEMA};
-use super::store::{BoxFuture, KeepReply, Loaded, Saved, SessionStore, StoreError};
+use super::store::{
+    BoxFuture, KeepReply, Loaded, Saved, SessionStore, StoreError, Unanswered, UNANSWERED_CAP,
+};
 
 /// The longest one store call may take, connecting included. A reader
 /// waits for it on every message, so it is short: past it, answering
@@ -251,6 +253,15 @@ fn check_prefix(prefix: &str) -> Result<(), StoreError> {
 
 /// The session hash of a reader. `reader` must not be empty (an empty tag
 /// `{}` is no tag in Redis Cluster); reader keys never are.
+/// The sorted set of unanswered questions: member `kind\ttext`, score the
+/// times asked. Not a reader's key: it holds no reader id.
+fn unanswered_key(prefix: &str) -> String {
+    format!("{prefix}unanswered")
+}
+
+/// How long the unanswered list lives after its last entry: 30 days.
+const UNANSWERED_TTL_SECS: u64 = 30 * 24 * 3600;
+
 fn session_key(prefix: &str, reader: &str) -> String {
     format!("{prefix}{{{reader}}}:s")
 }
@@ -418,6 +429,72 @@ impl SessionStore for RedisStore {
                 invocation.invoke_async(&mut con).await
             })
             .await
+        })
+    }
+
+    fn note_unanswered<'a>(
+        &'a self,
+        text: &'a str,
+        kind: &'a str,
+    ) -> BoxFuture<'a, Result<(), StoreError>> {
+        Box::pin(async move {
+            let key = unanswered_key(&self.prefix);
+            let member = format!("{kind}\t{text}");
+            let mut pipe = redis::pipe();
+            pipe.atomic()
+                .cmd("ZINCRBY")
+                .arg(&key)
+                .arg(1)
+                .arg(member)
+                .ignore()
+                // Keep the most asked only: the list is capped.
+                .cmd("ZREMRANGEBYRANK")
+                .arg(&key)
+                .arg(0)
+                .arg(-(UNANSWERED_CAP as i64) - 1)
+                .ignore()
+                // Questions are readers' words: they are not kept forever.
+                .cmd("EXPIRE")
+                .arg(&key)
+                .arg(UNANSWERED_TTL_SECS)
+                .ignore();
+            self.call("note unanswered", |mut con| async move {
+                pipe.query_async::<()>(&mut con).await
+            })
+            .await
+        })
+    }
+
+    fn unanswered(&self, limit: usize) -> BoxFuture<'_, Result<Vec<Unanswered>, StoreError>> {
+        Box::pin(async move {
+            if limit == 0 {
+                return Ok(vec![]);
+            }
+            let key = unanswered_key(&self.prefix);
+            let rows: Vec<(String, f64)> = self
+                .call("unanswered", |mut con| async move {
+                    redis::cmd("ZREVRANGE")
+                        .arg(&key)
+                        .arg(0)
+                        .arg(limit as i64 - 1)
+                        .arg("WITHSCORES")
+                        .query_async(&mut con)
+                        .await
+                })
+                .await?;
+            Ok(rows
+                .into_iter()
+                .map(|(member, score)| {
+                    let (kind, text) = member
+                        .split_once('\t')
+                        .unwrap_or(("not_understood", &member));
+                    Unanswered {
+                        text: text.to_string(),
+                        kind: kind.to_string(),
+                        count: score as u64,
+                    }
+                })
+                .collect())
         })
     }
 

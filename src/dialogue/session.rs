@@ -13,7 +13,7 @@ use crate::dataset::{Dataset, EntityRef};
 
 /// Bumped whenever the stored shape changes, so older sessions are dropped
 /// instead of misread.
-pub const SCHEMA: u32 = 2;
+pub const SCHEMA: u32 = 3;
 
 /// An entity by kind and id: ids survive dataset updates, indexes do not.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
@@ -44,6 +44,11 @@ pub struct Pending {
     /// The options offered, when the question was "which one?".
     #[serde(default)]
     pub options: Vec<StoredEntity>,
+    /// The reader's question that was asked back about, normalised: if the
+    /// reader leaves it unanswered it goes on the unanswered list (with no
+    /// reader id). Kept only as long as the session.
+    #[serde(default)]
+    pub asked: String,
 }
 
 /// One reader's conversation state.

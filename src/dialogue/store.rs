@@ -77,6 +77,23 @@ pub enum Saved {
     Answered(String),
 }
 
+/// A question readers asked that got no answer, with how often it was
+/// asked. No reader is named: only the normalised text is kept.
+#[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
+pub struct Unanswered {
+    /// The question, normalised (case, accents and punctuation folded), so
+    /// the same question asked differently is counted once.
+    pub text: String,
+    /// `not_understood`, or `abandoned` (a question asked back about and
+    /// never answered).
+    pub kind: String,
+    pub count: u64,
+}
+
+/// At most this many distinct unanswered questions are kept; the least
+/// asked go first.
+pub const UNANSWERED_CAP: usize = 1000;
+
 /// Session storage keyed by an opaque reader key (already hashed).
 pub trait SessionStore: Send + Sync + 'static {
     /// The reader's session and version, and the reply kept under
@@ -102,6 +119,16 @@ pub trait SessionStore: Send + Sync + 'static {
     /// Removes everything kept for the reader: session and remembered
     /// replies. Returns how many records were removed.
     fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>>;
+
+    /// Counts one more unanswered `text` of `kind`.
+    fn note_unanswered<'a>(
+        &'a self,
+        text: &'a str,
+        kind: &'a str,
+    ) -> BoxFuture<'a, Result<(), StoreError>>;
+
+    /// The most asked unanswered questions, most frequent first.
+    fn unanswered(&self, limit: usize) -> BoxFuture<'_, Result<Vec<Unanswered>, StoreError>>;
 
     /// Whether the store answers right now.
     fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>>;
@@ -130,6 +157,8 @@ pub struct MemoryStore {
 
 #[derive(Debug, Default)]
 struct Maps {
+    /// (kind, normalised text) → times asked.
+    unanswered: HashMap<(String, String), u64>,
     sessions: HashMap<String, Kept>,
     /// (reader, message) → reply.
     replies: HashMap<(String, String), (String, Instant)>,
@@ -250,6 +279,50 @@ impl SessionStore for MemoryStore {
             maps.replies.retain(|(r, _), _| r != reader);
             removed += (before - maps.replies.len()) as u64;
             Ok(removed)
+        })
+    }
+
+    fn note_unanswered<'a>(
+        &'a self,
+        text: &'a str,
+        kind: &'a str,
+    ) -> BoxFuture<'a, Result<(), StoreError>> {
+        Box::pin(async move {
+            let mut maps = self.lock();
+            *maps
+                .unanswered
+                .entry((kind.to_string(), text.to_string()))
+                .or_insert(0) += 1;
+            if maps.unanswered.len() > UNANSWERED_CAP {
+                // Drop the least asked (of those, the first in order).
+                if let Some(k) = maps
+                    .unanswered
+                    .iter()
+                    .min_by(|a, b| a.1.cmp(b.1).then_with(|| a.0.cmp(b.0)))
+                    .map(|(k, _)| k.clone())
+                {
+                    maps.unanswered.remove(&k);
+                }
+            }
+            Ok(())
+        })
+    }
+
+    fn unanswered(&self, limit: usize) -> BoxFuture<'_, Result<Vec<Unanswered>, StoreError>> {
+        Box::pin(async move {
+            let maps = self.lock();
+            let mut all: Vec<Unanswered> = maps
+                .unanswered
+                .iter()
+                .map(|((kind, text), count)| Unanswered {
+                    text: text.clone(),
+                    kind: kind.clone(),
+                    count: *count,
+                })
+                .collect();
+            all.sort_by(|a, b| b.count.cmp(&a.count).then_with(|| a.text.cmp(&b.text)));
+            all.truncate(limit);
+            Ok(all)
         })
     }
 

@@ -86,6 +86,10 @@ pub struct Reply {
     /// that offer quick replies.
     #[serde(default, skip_serializing_if = "Vec::is_empty")]
     pub quick_replies: Vec<String>,
+    /// Questions this turn leaves unanswered, as (normalised text, kind),
+    /// for the editors' unanswered list; never sent to the client.
+    #[serde(skip)]
+    pub unanswered: Vec<(String, &'static str)>,
 }
 
 /// Everything a turn reads that is not the session.
@@ -130,8 +134,31 @@ const RESET: &[&str] = &[
     "cancel",
 ];
 
-/// Handles one message. Returns the reply and the session to store.
+/// Handles one message. Returns the reply and the session to store. The
+/// reply lists what the turn leaves unanswered: the message itself when no
+/// intent fits, and a question asked back about that the reader left.
 pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session) {
+    let before = session.pending.clone();
+    let (mut reply, mut s, answered_pending) = turn_inner(ctx, session, text);
+    let asked = crate::understand::normalize::normalize(text);
+    if let Some(p) = s.pending.as_mut().filter(|p| p.asked.is_empty()) {
+        // A question asked back while answering another is still about the
+        // first question.
+        p.asked = match &before {
+            Some(b) if answered_pending => b.asked.clone(),
+            _ => asked.clone(),
+        };
+    }
+    if let Some(b) = before.filter(|b| !answered_pending && !b.asked.is_empty()) {
+        reply.unanswered.push((b.asked, "abandoned"));
+    }
+    if reply.outcome == Outcome::NotUnderstood && !asked.is_empty() {
+        reply.unanswered.push((asked, "not_understood"));
+    }
+    (reply, s)
+}
+
+fn turn_inner(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session, bool) {
     let mut s = session;
     s.turn += 1;
     s.updated_at = ctx.now.timestamp().as_second();
@@ -146,12 +173,16 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         fresh.turn = s.turn;
         fresh.created_at = s.created_at;
         let said = ctx.service("reset", &ctx.catalog.service.reset, &HashMap::new());
-        return (plain_reply(said, Outcome::Answered, None, 1.0, &a), fresh);
+        return (
+            plain_reply(said, Outcome::Answered, None, 1.0, &a),
+            fresh,
+            false,
+        );
     }
 
     if let Some(p) = s.pending.take() {
         if let Some(reply) = answer_pending(ctx, &mut s, &p, &a) {
-            return (reply, s);
+            return (reply, s, true);
         }
     }
 
@@ -166,17 +197,17 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         (intent, filled, confidence)
     } else {
         let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
-            return (not_understood(ctx, &a), s);
+            return (not_understood(ctx, &a), s, false);
         };
         let Some(intent) = ctx.catalog.intent(&best.intent) else {
-            return (not_understood(ctx, &a), s);
+            return (not_understood(ctx, &a), s, false);
         };
         let filled = fill_in_context(ctx, &s, intent, &a);
         if matches!(filled.need, Some(Need::Missing { .. }))
             && best.score < MIN_SCORE_TO_ASK
             && a.mentions.is_empty()
         {
-            return (not_understood(ctx, &a), s);
+            return (not_understood(ctx, &a), s, false);
         }
         let confidence = best.score.min(1.0) * filled.certainty;
         (intent, filled, confidence)
@@ -190,7 +221,7 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         confidence,
         &a,
     );
-    (reply, s)
+    (reply, s, false)
 }
 
 /// Fills the intent's slots from the message, then from the conversation:
@@ -247,6 +278,7 @@ fn proceed(
                 slots: store_slots(ctx.data, &slots),
                 slot,
                 options: vec![],
+                asked: String::new(),
             });
             let mut r = plain_reply(
                 realise_text(ctx.channel, &def.ask),
@@ -312,6 +344,7 @@ fn ask_choice(
         slots: store_slots(ctx.data, &slots),
         slot: slot.to_string(),
         options: options.iter().map(|e| store_entity(ctx.data, *e)).collect(),
+        asked: String::new(),
     });
     let mut r = plain_reply(said, Outcome::Clarify, Some(intent), confidence, a);
     r.slots = slots_out(ctx.data, &slots);
@@ -417,6 +450,7 @@ fn run(
                 ssml: said.ssml,
                 markdown: said.markdown,
                 quick_replies,
+                unanswered: vec![],
             }
         }
     }
@@ -747,6 +781,7 @@ fn plain_reply(
         ssml: said.ssml,
         markdown: said.markdown,
         quick_replies: vec![],
+        unanswered: vec![],
     }
 }
 

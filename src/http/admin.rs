@@ -5,7 +5,7 @@
 //! service was started with (`--admin-token`); without one configured the
 //! admin API is off and answers 403, never open.
 
-use axum::extract::{DefaultBodyLimit, FromRequestParts, State};
+use axum::extract::{DefaultBodyLimit, FromRequestParts, Query, State};
 use axum::http::request::Parts;
 use axum::http::{header, StatusCode};
 use axum::response::IntoResponse;
@@ -116,6 +116,29 @@ async fn status(_: Admin, State(engine): State<Engine>) -> impl IntoResponse {
     Json(engine.status().await)
 }
 
+#[derive(Debug, serde::Deserialize)]
+struct ListQuery {
+    #[serde(default = "default_limit")]
+    limit: usize,
+}
+
+fn default_limit() -> usize {
+    50
+}
+
+/// The questions readers asked that got no answer, most frequent first.
+async fn unanswered(
+    _: Admin,
+    State(engine): State<Engine>,
+    Query(q): Query<ListQuery>,
+) -> Result<impl IntoResponse, ApiError> {
+    let rows = engine
+        .unanswered(q.limit.min(crate::dialogue::store::UNANSWERED_CAP))
+        .await
+        .map_err(crate::engine::EngineError::Store)?;
+    Ok(Json(json!({ "unanswered": rows })))
+}
+
 /// The admin routes, with a body limit of their own (a whole scenario is
 /// larger than any reader's message).
 pub fn routes() -> Router<Engine> {
@@ -123,5 +146,6 @@ pub fn routes() -> Router<Engine> {
         .route("/v1/admin/batches", post(apply_batch))
         .route("/v1/admin/dataset", put(replace_dataset))
         .route("/v1/admin/status", get(status))
+        .route("/v1/admin/unanswered", get(unanswered))
         .layer(DefaultBodyLimit::max(MAX_ADMIN_BODY))
 }
