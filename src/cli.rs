@@ -123,6 +123,10 @@ pub enum Command {
     Check {
         #[command(flatten)]
         common: Common,
+        /// Folders or files to check: a scenario folder (with scenario.json),
+        /// an intents folder, an intent file or a channels.yaml. Without
+        /// paths, --data and --intents (or the built-in demo) are checked.
+        paths: Vec<PathBuf>,
     },
     /// List the questions readers asked that got no answer, most frequent
     /// first, from the Redis the service keeps them in.
@@ -364,7 +368,8 @@ pub async fn run(cli: Cli) -> i32 {
             }
             0
         }
-        Command::Check { common } => match engine::load(&sources(&common)) {
+        Command::Check { paths, .. } if !paths.is_empty() => crate::check::run(&paths),
+        Command::Check { common, .. } => match engine::load(&sources(&common)) {
             Ok(s) => {
                 println!(
                     "ok: {} ({} competitors, {} contests), {} intents",

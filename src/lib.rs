@@ -19,7 +19,8 @@
 //! - [`http`]: the HTTP API, including the admin API. [`cli`]: the command
 //!   line. [`eval`]: measuring quality on a labelled question set.
 //!   [`scripts`]: editors' conversation scripts (`tidings test`).
-//!   [`watch`]: reloading changed files while serving.
+//!   [`watch`]: reloading changed files while serving. [`check`]:
+//!   checking editors' files (`tidings check PATHS`).
 //!
 //! # Quick example
 //!
@@ -41,6 +42,7 @@
 
 pub mod answers;
 pub mod catalog;
+pub mod check;
 pub mod cli;
 pub mod dataset;
 pub mod dialogue;

@@ -260,3 +260,50 @@ fn json_syntax_errors_have_line_and_column() {
     assert_eq!(code, 1);
     assert!(out.contains("groups.json:3:1:"), "{out}");
 }
+
+#[test]
+fn paths_are_checked_with_every_problem_located() {
+    // The shipped files, given as paths, check clean.
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let (code, out) = check(&[
+        demo_intents().to_str().unwrap(),
+        demo_data().to_str().unwrap(),
+        root.join("src/answers/channels.yaml").to_str().unwrap(),
+    ]);
+    assert_eq!(code, 0, "{out}");
+
+    // A broken intent, a broken channel profile and inconsistent data at
+    // once: every problem, each with file:line:column.
+    let intents = intents_with("extra.yaml", "intent: broken\noperation: podium\nphrasings: [who won]\nreplies: {answered: \"{nobody}\"}\n");
+    let channels = intents.path().join("channels.yaml");
+    std::fs::write(&channels, "kiosk:\n  words: shouted\n").unwrap();
+    let data = data_with("competitors.json", |mut v| {
+        v[3]["group"] = serde_json::json!("atlantis");
+        v
+    });
+    let (code, out) = check(&[
+        intents.path().to_str().unwrap(),
+        channels.to_str().unwrap(),
+        data.path().to_str().unwrap(),
+    ]);
+    assert_eq!(code, 1, "{out}");
+    assert!(
+        out.contains("channels.yaml:2:10: channel kiosk: words must be written or spoken"),
+        "{out}"
+    );
+    assert!(
+        out.lines()
+            .any(|l| l.contains("extra.yaml:") && l.contains(":")),
+        "{out}"
+    );
+    let data_line = out
+        .lines()
+        .find(|l| l.contains("competitors.json:") && l.contains("atlantis"))
+        .unwrap_or_else(|| panic!("{out}"));
+    // The line is where the record's id stands, not the top of the file.
+    let loc: Vec<&str> = data_line.splitn(4, ':').collect();
+    assert!(loc[1].parse::<u32>().unwrap() > 1, "{data_line}");
+    let (code, out) = check(&["no/such/place"]);
+    assert_eq!(code, 1);
+    assert!(out.contains("no such file or folder"), "{out}");
+}
