@@ -2,7 +2,10 @@
 //! when their files change, without a restart.
 //!
 //! A changed folder is loaded and checked whole; only a version that loads
-//! is served. A broken file keeps the last good version serving, and its
+//! is served. A changed data folder replaces the data served, including
+//! changes posted through the admin API since the files were last read: the
+//! files are the editors' source of truth, and a warning says how many
+//! versions were replaced. A broken file keeps the last good version serving, and its
 //! problem (with file:line:column) is logged and shown by
 //! `GET /v1/admin/status` until a later change loads.
 
@@ -40,6 +43,9 @@ pub async fn watch(engine: Engine, sources: Sources, every: Duration) {
     let data_dir = sources.data.clone();
     let intents_dir = sources.intents.clone();
     let mut data_seen = data_dir.as_deref().map(fingerprint);
+    // The version the files were last served as, to tell when a reload
+    // replaces changes posted through the admin API.
+    let mut files_version = engine.snapshot().data.version;
     let mut intents_seen = intents_dir.as_deref().map(fingerprint);
     loop {
         tokio::time::sleep(every).await;
@@ -52,8 +58,16 @@ pub async fn watch(engine: Engine, sources: Sources, every: Duration) {
                 changed = true;
                 match dataset::load_dir(dir) {
                     Ok(data) => {
-                        if let Err(e) = engine.replace_records(Records::of(&data)).await {
-                            problems.push(e.to_string());
+                        let served = engine.snapshot().data.version;
+                        if served > files_version {
+                            tracing::warn!(
+                                replaced = served - files_version,
+                                "the changed data files replace versions posted through the admin API"
+                            );
+                        }
+                        match engine.replace_records(Records::of(&data)).await {
+                            Ok(v) => files_version = v,
+                            Err(e) => problems.push(e.to_string()),
                         }
                     }
                     Err(e) => problems.push(e.to_string()),
