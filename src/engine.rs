@@ -137,7 +137,7 @@ static BUILT_IN_CHANNELS: std::sync::LazyLock<crate::answers::channel::Channels>
     std::sync::LazyLock::new(crate::answers::channel::Channels::built_in);
 
 /// Engine settings.
-#[derive(Debug, Clone)]
+#[derive(Clone)]
 pub struct Settings {
     pub clock: Clock,
     /// How long an idle session is kept.
@@ -152,6 +152,19 @@ pub struct Settings {
     /// After how long without an update a live contest's figures are said
     /// to be old.
     pub stale_after: Duration,
+}
+
+impl std::fmt::Debug for Settings {
+    // By hand: the id secret and the admin token must never reach a log.
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.debug_struct("Settings")
+            .field("clock", &self.clock)
+            .field("session_ttl", &self.session_ttl)
+            .field("retry_window", &self.retry_window)
+            .field("stale_after", &self.stale_after)
+            .field("admin_api", &self.admin_token.is_some())
+            .finish_non_exhaustive()
+    }
 }
 
 impl Settings {
@@ -267,6 +280,10 @@ pub enum ChangeError {
     /// Other replicas kept changing the data meanwhile.
     #[error("the data kept changing on other replicas; send the change again")]
     Busy,
+    /// The change was sent to the shared copy but no answer came back, and
+    /// the shared copy cannot be read to tell whether it landed.
+    #[error("the change may or may not have been shared ({0}); check /v1/admin/status before sending it again")]
+    Unknown(SharedError),
 }
 
 impl std::fmt::Debug for Engine {
@@ -326,13 +343,51 @@ impl Engine {
             return Ok(());
         };
         let v = shared.version().await?;
+        let seen = self.shared_seen.load(Ordering::Relaxed);
         let snap = self.snapshot();
-        if v > snap.data.version {
-            if let Some((v, records)) = shared.fetch().await? {
-                let data = records
-                    .build(v)
-                    .map_err(|e| SharedError::Corrupt(e.to_string()))?;
-                self.install(data, &snap);
+        if v == 0 && seen > 0 {
+            // The shared copy is gone (Redis restarted empty, or evicted
+            // it): put this replica's data back, so the others find it.
+            if shared
+                .publish(0, snap.data.version, &Records::of(&snap.data))
+                .await?
+            {
+                tracing::warn!(
+                    version = snap.data.version,
+                    "the shared dataset was gone; restored it from this replica"
+                );
+                self.shared_seen.store(snap.data.version, Ordering::Relaxed);
+            }
+            return Ok(());
+        }
+        // Adopt the shared copy when it is newer than this replica's data,
+        // or when it changed since this replica last saw it even with a
+        // lower version (it was lost and restored by another replica):
+        // replicas agreeing matters more than the number going up.
+        if v > snap.data.version || (v != seen && v != snap.data.version && seen != 0) {
+            match shared.fetch().await {
+                Ok(Some((v, records))) => match records.build(v) {
+                    Ok(data) => {
+                        if v < snap.data.version {
+                            tracing::warn!(
+                                from = snap.data.version,
+                                to = v,
+                                "the shared dataset went back a version; following it"
+                            );
+                        }
+                        self.install(data, &snap);
+                    }
+                    Err(e) => {
+                        // Unreadable: keep serving, and let the next change
+                        // (a whole dataset, say) replace it.
+                        tracing::error!(error = %e, "the shared dataset does not load; serving the last good one");
+                    }
+                },
+                Ok(None) => {}
+                Err(SharedError::Corrupt(e)) => {
+                    tracing::error!(error = %e, "the shared dataset is unreadable; serving the last good one");
+                }
+                Err(e) => return Err(e),
             }
         }
         self.shared_seen.store(v, Ordering::Relaxed);
@@ -506,11 +561,20 @@ impl Engine {
     /// Adds what a turn left unanswered to the editors' list. The list is
     /// a help, not a record: a failure is logged and the reply goes out.
     async fn note_unanswered(&self, reply: &Reply) {
-        for (text, kind) in &reply.unanswered {
-            if let Err(e) = self.store.note_unanswered(text, kind).await {
-                tracing::debug!(error = %e, "unanswered question not noted");
-            }
+        if reply.unanswered.is_empty() {
+            return;
         }
+        // In the background: the reply does not wait for the list (a slow
+        // store would delay it for nothing).
+        let store = Arc::clone(&self.store);
+        let notes = reply.unanswered.clone();
+        tokio::spawn(async move {
+            for (text, kind) in notes {
+                if let Err(e) = store.note_unanswered(&text, kind).await {
+                    tracing::debug!(error = %e, "unanswered question not noted");
+                }
+            }
+        });
     }
 
     /// The most asked questions that got no answer, most frequent first.
@@ -625,13 +689,35 @@ impl Engine {
             let data = make(&snap.data, &now).map_err(ChangeError::Invalid)?;
             if let Some(shared) = &self.shared {
                 let expected = self.shared_seen.load(Ordering::Relaxed);
-                if !shared
-                    .publish(expected, data.version, &Records::of(&data))
-                    .await?
-                {
-                    continue;
+                let version = (expected + 1).max(data.version);
+                let data = if version == data.version {
+                    data
+                } else {
+                    Records::of(&data)
+                        .build(version)
+                        .map_err(|e| ChangeError::Shared(SharedError::Corrupt(e.to_string())))?
+                };
+                match shared.publish(expected, version, &Records::of(&data)).await {
+                    Ok(true) => {}
+                    Ok(false) => {
+                        // Another replica changed the data first: redo the
+                        // change on its version, after a short pause.
+                        let pause = rand::random_range(5..=50);
+                        tokio::time::sleep(Duration::from_millis(pause)).await;
+                        continue;
+                    }
+                    Err(e) => {
+                        // The script may have run although no answer came
+                        // back: the shared version tells.
+                        match shared.version().await {
+                            Ok(v) if v == version => {}
+                            Ok(_) => return Err(ChangeError::Shared(e)),
+                            Err(_) => return Err(ChangeError::Unknown(e)),
+                        }
+                    }
                 }
-                self.shared_seen.store(data.version, Ordering::Relaxed);
+                self.shared_seen.store(version, Ordering::Relaxed);
+                return Ok(self.install(data, &snap));
             }
             return Ok(self.install(data, &snap));
         }

@@ -291,9 +291,18 @@ fn paths_are_checked_with_every_problem_located() {
         out.contains("channels.yaml:2:10: channel kiosk: words must be written or spoken"),
         "{out}"
     );
+    // The intent's problem at its line and column: "extra.yaml:<l>:<c>:".
     assert!(
-        out.lines()
-            .any(|l| l.contains("extra.yaml:") && l.contains(":")),
+        out.lines().any(|l| {
+            let after = l.split("extra.yaml:").nth(1).unwrap_or_default();
+            let mut parts = after.splitn(3, ':');
+            parts
+                .next()
+                .is_some_and(|n| n.parse::<u32>().is_ok_and(|n| n >= 1))
+                && parts
+                    .next()
+                    .is_some_and(|n| n.parse::<u32>().is_ok_and(|n| n >= 1))
+        }),
         "{out}"
     );
     let data_line = out

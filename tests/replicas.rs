@@ -173,10 +173,11 @@ async fn a_change_posted_to_one_replica_is_served_by_all() {
     let v: serde_json::Value = r.json().await.unwrap();
     let version = v["dataset_version"].as_u64().unwrap();
 
-    // The other replica serves it within one second.
+    // The other replica serves it (within a second on an idle machine; the
+    // time is logged, and the deadline leaves room for a loaded one).
     wait_until(
         "the other replica to serve the change",
-        Duration::from_secs(1),
+        Duration::from_secs(5),
         || {
             let client = client.clone();
             let base = b.base.clone();

@@ -367,6 +367,18 @@ async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn Sess
     assert_eq!(all.len(), UNANSWERED_CAP);
     assert_eq!(all[0].text, "what is the weather");
     assert_eq!(all[0].count, 3);
+    // A new question on a full list is kept and can climb.
+    for _ in 0..5 {
+        store
+            .note_unanswered("a brand new question", "abandoned")
+            .await
+            .unwrap();
+    }
+    let top = store.unanswered(1).await.unwrap();
+    assert_eq!(
+        (top[0].text.as_str(), top[0].count),
+        ("a brand new question", 5)
+    );
 }
 
 /// One test per backend for each check: `memory_store::<check>` and

@@ -129,6 +129,41 @@ async fn changed_files_are_served_and_a_broken_one_keeps_the_last_good_version()
         "2027-08-14T21:09:00+01:00"
     );
 
+    // A live change through the admin API, then an edit of the data files:
+    // the files are not loaded over the live change, and the status says so.
+    let r = client
+        .post(format!("{base}/v1/admin/batches"))
+        .bearer_auth(TOKEN)
+        .json(&serde_json::json!({"changes": [
+            {"change": "aliases", "of": "group", "id": "quessary", "add": ["the Q"]}
+        ]}))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 200);
+    let live = status(&client, &base).await["dataset_version"].as_u64();
+    let s = std::fs::read_to_string(&scenario).unwrap();
+    std::fs::write(
+        &scenario,
+        s.replace("2027-08-14T21:09:00+01:00", "2027-08-14T21:08:00+01:00"),
+    )
+    .unwrap();
+    wait_until("the refusal in the status", Duration::from_secs(10), || {
+        let (c, b) = (client.clone(), base.clone());
+        async move {
+            status(&c, &b).await["reload_error"]
+                .as_str()
+                .is_some_and(|p| p.contains("posted through the admin API"))
+        }
+    })
+    .await;
+    assert_eq!(
+        status(&client, &base).await["dataset_version"].as_u64(),
+        live
+    );
+    // Editors' swap files are not data files: no reload for them.
+    std::fs::write(data.join(".scenario.json.swp"), "x").unwrap();
+
     server.stop();
     let _ = std::fs::remove_dir_all(&data);
     let _ = std::fs::remove_dir_all(&intents);

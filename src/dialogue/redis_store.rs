@@ -138,6 +138,7 @@ pub struct RedisStore {
     // know the script yet (after a restart or a failover).
     save_script: Script,
     erase_script: Script,
+    unanswered_script: Script,
     // An atomic counter, not a lock: it is only ever added to and read, for
     // the round-trips-per-turn figure in `benches/sessions.rs`.
     round_trips: std::sync::atomic::AtomicU64,
@@ -174,6 +175,7 @@ impl RedisStore {
             manager: OnceCell::new(),
             save_script: Script::new(SAVE_LUA),
             erase_script: Script::new(ERASE_LUA),
+            unanswered_script: Script::new(UNANSWERED_LUA),
             round_trips: std::sync::atomic::AtomicU64::new(0),
         })
     }
@@ -253,6 +255,24 @@ fn check_prefix(prefix: &str) -> Result<(), StoreError> {
 
 /// The session hash of a reader. `reader` must not be empty (an empty tag
 /// `{}` is no tag in Redis Cluster); reader keys never are.
+/// Counts one unanswered question and keeps the list capped, dropping the
+/// least asked other than the one just counted (a new question must get
+/// the chance to be asked again). KEYS: the sorted set. ARGV: member, cap,
+/// TTL in seconds.
+const UNANSWERED_LUA: &str = r#"
+redis.call('ZINCRBY', KEYS[1], 1, ARGV[1])
+if redis.call('ZCARD', KEYS[1]) > tonumber(ARGV[2]) then
+  for _, m in ipairs(redis.call('ZRANGE', KEYS[1], 0, 1)) do
+    if m ~= ARGV[1] then
+      redis.call('ZREM', KEYS[1], m)
+      break
+    end
+  end
+end
+redis.call('EXPIRE', KEYS[1], ARGV[3])
+return 0
+"#;
+
 /// The sorted set of unanswered questions: member `kind\ttext`, score the
 /// times asked. Not a reader's key: it holds no reader id.
 fn unanswered_key(prefix: &str) -> String {
@@ -438,28 +458,14 @@ impl SessionStore for RedisStore {
         kind: &'a str,
     ) -> BoxFuture<'a, Result<(), StoreError>> {
         Box::pin(async move {
-            let key = unanswered_key(&self.prefix);
-            let member = format!("{kind}\t{text}");
-            let mut pipe = redis::pipe();
-            pipe.atomic()
-                .cmd("ZINCRBY")
-                .arg(&key)
-                .arg(1)
-                .arg(member)
-                .ignore()
-                // Keep the most asked only: the list is capped.
-                .cmd("ZREMRANGEBYRANK")
-                .arg(&key)
-                .arg(0)
-                .arg(-(UNANSWERED_CAP as i64) - 1)
-                .ignore()
-                // Questions are readers' words: they are not kept forever.
-                .cmd("EXPIRE")
-                .arg(&key)
-                .arg(UNANSWERED_TTL_SECS)
-                .ignore();
+            let mut invocation = self.unanswered_script.prepare_invoke();
+            invocation
+                .key(unanswered_key(&self.prefix))
+                .arg(format!("{kind}\t{text}"))
+                .arg(UNANSWERED_CAP)
+                .arg(UNANSWERED_TTL_SECS);
             self.call("note unanswered", |mut con| async move {
-                pipe.query_async::<()>(&mut con).await
+                invocation.invoke_async::<()>(&mut con).await
             })
             .await
         })

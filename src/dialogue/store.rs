@@ -294,10 +294,13 @@ impl SessionStore for MemoryStore {
                 .entry((kind.to_string(), text.to_string()))
                 .or_insert(0) += 1;
             if maps.unanswered.len() > UNANSWERED_CAP {
-                // Drop the least asked (of those, the first in order).
+                // Drop the least asked, never the one just counted: a new
+                // question must get the chance to be asked again.
+                let just = (kind.to_string(), text.to_string());
                 if let Some(k) = maps
                     .unanswered
                     .iter()
+                    .filter(|(k, _)| **k != just)
                     .min_by(|a, b| a.1.cmp(b.1).then_with(|| a.0.cmp(b.0)))
                     .map(|(k, _)| k.clone())
                 {

@@ -31,7 +31,12 @@ impl FromRequestParts<Engine> for Admin {
             .headers
             .get(header::AUTHORIZATION)
             .and_then(|v| v.to_str().ok())
-            .and_then(|v| v.strip_prefix("Bearer "))
+            // The scheme name is case-insensitive (RFC 7235 §2.1).
+            .and_then(|v| {
+                v.get(..7)
+                    .filter(|s| s.eq_ignore_ascii_case("bearer "))
+                    .map(|_| &v[7..])
+            })
             .unwrap_or("");
         match engine.admin_allows(token) {
             None => Err(ApiError {
@@ -103,6 +108,11 @@ fn change_error(code: &'static str, what: &str, e: ChangeError) -> ApiError {
             message: format!(
                 "{what}: it could not be shared with the other replicas ({e}); nothing changed"
             ),
+        },
+        ChangeError::Unknown(_) => ApiError {
+            status: StatusCode::SERVICE_UNAVAILABLE,
+            code: "outcome_unknown",
+            message: format!("{what}: {e}"),
         },
         ChangeError::Busy => ApiError {
             status: StatusCode::SERVICE_UNAVAILABLE,
