@@ -65,6 +65,14 @@ pub async fn run(common: &Common, paths: &[PathBuf]) -> i32 {
                 continue;
             }
         };
+        if cases.is_empty() {
+            println!(
+                "{}: no cases: a script needs at least one question",
+                shown(file)
+            );
+            broken += 1;
+            continue;
+        }
         let r = evaluate(&engine, &cases).await;
         turns += r.turns;
         failing += r.failures.len();

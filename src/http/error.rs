@@ -45,7 +45,8 @@ impl From<JsonRejection> for ApiError {
         let (code, message) = match status {
             StatusCode::PAYLOAD_TOO_LARGE => (
                 "body_too_large",
-                "the request body is larger than 16 KiB".to_string(),
+                "the request body is larger than this endpoint accepts (16 KiB for messages)"
+                    .to_string(),
             ),
             StatusCode::UNSUPPORTED_MEDIA_TYPE => (
                 "unsupported_media_type",
