@@ -113,7 +113,7 @@ mod tests {
     fn a_record_is_found_by_its_id() {
         let t = "[\n  {\"id\": \"p1\"},\n  {\n    \"id\": \"p2\", \"group\": \"p1\"\n  }\n]";
         assert_eq!(locate_record(t, "p2"), Some((4, 11)));
-        assert_eq!(locate_record(t, "p1"), Some((2, 11)));
+        assert_eq!(locate_record(t, "p1"), Some((2, 10)));
         assert_eq!(locate_record(t, "nobody"), None);
     }
 }
