@@ -343,6 +343,11 @@ async fn the_unanswered_list_counts_questions_without_readers() {
     .await;
     let (status, body) = admin(&s, "GET", "/v1/admin/unanswered?limit=10", None).await;
     assert_eq!(status, 200, "{body}");
+    let (status, bad) = admin(&s, "GET", "/v1/admin/unanswered?limit=lots", None).await;
+    assert_eq!(
+        (status, bad["error"]["code"].as_str()),
+        (422, Some("bad_limit"))
+    );
     let rows = body["unanswered"].as_array().unwrap();
     assert_eq!(rows[0]["text"], "what is the weather like");
     assert_eq!(rows[0]["count"], 2);

@@ -126,24 +126,22 @@ async fn status(_: Admin, State(engine): State<Engine>) -> impl IntoResponse {
     Json(engine.status().await)
 }
 
-#[derive(Debug, serde::Deserialize)]
-struct ListQuery {
-    #[serde(default = "default_limit")]
-    limit: usize,
-}
-
-fn default_limit() -> usize {
-    50
-}
-
-/// The questions readers asked that got no answer, most frequent first.
+/// The questions readers asked that got no answer, most frequent first;
+/// `?limit=N` (default 50). The query is read by hand so a bad limit gets
+/// the JSON error format.
 async fn unanswered(
     _: Admin,
     State(engine): State<Engine>,
-    Query(q): Query<ListQuery>,
+    Query(q): Query<std::collections::HashMap<String, String>>,
 ) -> Result<impl IntoResponse, ApiError> {
+    let limit = match q.get("limit") {
+        None => 50,
+        Some(l) => l.parse::<usize>().map_err(|_| {
+            ApiError::invalid("bad_limit", "limit must be a whole number, such as 50")
+        })?,
+    };
     let rows = engine
-        .unanswered(q.limit.min(crate::dialogue::store::UNANSWERED_CAP))
+        .unanswered(limit.min(crate::dialogue::store::UNANSWERED_CAP))
         .await
         .map_err(crate::engine::EngineError::Store)?;
     Ok(Json(json!({ "unanswered": rows })))
