@@ -633,12 +633,7 @@ impl Engine {
                 }
             }),
             dataset_version: snap.data.version,
-            as_of: snap
-                .data
-                .as_of
-                .to_zoned_datetime(snap.data.tz.clone())
-                .strftime("%Y-%m-%dT%H:%M:%S%:z")
-                .to_string(),
+            as_of: rfc3339(&snap.data.as_of.to_zoned_datetime(snap.data.tz.clone())),
             degraded: false,
             repeated: false,
         };

@@ -126,16 +126,7 @@ impl Template {
 
     /// How many optional parts the template has, nested ones included.
     pub fn optional_parts(&self) -> usize {
-        fn count(pieces: &[Piece]) -> usize {
-            pieces
-                .iter()
-                .map(|p| match p {
-                    Piece::Optional(inner) => 1 + count(inner),
-                    _ => 0,
-                })
-                .sum()
-        }
-        count(&self.pieces)
+        count_optional(&self.pieces)
     }
 
     /// The longest rendering that `fits`: all optional parts first, then
@@ -261,6 +252,17 @@ fn parse_field(inner: &str, offset: usize) -> Result<Piece, TemplateError> {
     Ok(Piece::Field { name, filters })
 }
 
+/// How many optional parts `pieces` hold, nested ones included.
+fn count_optional(pieces: &[Piece]) -> usize {
+    pieces
+        .iter()
+        .map(|p| match p {
+            Piece::Optional(inner) => 1 + count_optional(inner),
+            _ => 0,
+        })
+        .sum()
+}
+
 fn all_present(pieces: &[Piece], values: &HashMap<String, Value>) -> bool {
     pieces.iter().all(|p| match p {
         Piece::Field { name, .. } => values.get(name).is_some_and(Value::is_present),
@@ -292,11 +294,7 @@ fn render_seq(
                 } else {
                     // Count the nested parts skipped with it, so the
                     // numbering does not depend on which values are there.
-                    *seen += Template {
-                        pieces: inner.clone(),
-                        source: String::new(),
-                    }
-                    .optional_parts();
+                    *seen += count_optional(inner);
                 }
             }
             Piece::Field { name, filters } => {
