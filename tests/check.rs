@@ -316,3 +316,9 @@ fn paths_are_checked_with_every_problem_located() {
     assert_eq!(code, 1);
     assert!(out.contains("no such file or folder"), "{out}");
 }
+
+#[test]
+fn wording_for_a_channel_that_does_not_exist_is_located() {
+    let text = format!("{GOOD}channel_replies:\n  pigeon:\n    answered: \"Coo.\"\n");
+    expect_error(&text, "no channel \"pigeon\"", 21);
+}

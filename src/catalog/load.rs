@@ -8,6 +8,7 @@ use serde::Deserialize;
 use serde_saphyr::Spanned;
 
 use super::{Catalog, Intent, ServiceWording, SlotDef, Template};
+use crate::answers::channel::Channels;
 use crate::answers::ops::{self, EntityKind};
 
 /// One problem in a catalog file.
@@ -121,9 +122,9 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
     let mut intents = Vec::new();
     let mut service = None;
     let mut names: HashMap<String, String> = HashMap::new();
-    let mut channels = crate::answers::channel::Channels::built_in();
+    let mut channels = Channels::built_in();
     for (file, text) in files.iter().filter(|(f, _)| f.ends_with(CHANNELS_FILE)) {
-        channels = crate::answers::channel::Channels::with_file(file, text, &mut problems);
+        channels = Channels::with_file(file, text, &mut problems);
     }
     for (file, text) in files {
         if file.ends_with(CHANNELS_FILE) {
@@ -131,14 +132,14 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
         }
         if file.ends_with(SERVICE_FILE) {
             match serde_saphyr::from_str::<ServiceFile>(text) {
-                Ok(s) => service = service_wording(file, s, &mut problems),
+                Ok(s) => service = service_wording(file, s, &channels, &mut problems),
                 Err(e) => problems.push(yaml_problem(file, &e)),
             }
             continue;
         }
         match serde_saphyr::from_str::<IntentFile>(text) {
             Ok(f) => {
-                if let Some(i) = check_intent(file, f, &mut problems) {
+                if let Some(i) = check_intent(file, f, &channels, &mut problems) {
                     if let Some(other) = names.insert(i.name.clone(), file.clone()) {
                         problems.push(CatalogProblem {
                             file: file.clone(),
@@ -172,16 +173,11 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
     if !problems.is_empty() {
         return Err(CatalogError(problems));
     }
-    let catalog = Catalog {
+    Ok(Catalog {
         intents,
         service: service.expect("checked above"),
         channels,
-    };
-    check_channel_names(&catalog, files, &mut problems);
-    if !problems.is_empty() {
-        return Err(CatalogError(problems));
-    }
-    Ok(catalog)
+    })
 }
 
 /// A YAML syntax or shape problem, located.
@@ -239,6 +235,7 @@ fn template(
 fn service_wording(
     file: &str,
     s: ServiceFile,
+    channels: &Channels,
     problems: &mut Vec<CatalogProblem>,
 ) -> Option<ServiceWording> {
     let allowed: [(&Spanned<String>, &[&str]); 3] = [
@@ -273,6 +270,14 @@ fn service_wording(
     let not_understood = out.pop()?;
     let mut by_channel: HashMap<String, HashMap<String, Template>> = HashMap::new();
     for (channel, wording) in &s.channel_wording {
+        check_channel(
+            file,
+            "channel_wording",
+            channel,
+            wording,
+            channels,
+            problems,
+        );
         for (key, text) in wording {
             let names: &[&str] = match key.as_str() {
                 "not_understood" => &["examples"],
@@ -317,51 +322,34 @@ fn service_wording(
     })
 }
 
-/// Channel names in `channel_replies` and `channel_wording` must name a
-/// profile; checked once every file is read, since profiles may come from
-/// the folder's own `channels.yaml`.
-fn check_channel_names(
-    catalog: &Catalog,
-    files: &[(String, String)],
+/// A channel named in `channel_replies` or `channel_wording` must be a
+/// profile: the built-in ones or the folder's own `channels.yaml`, which is
+/// read before any other file. The problem is placed at the first wording
+/// under the channel's name.
+fn check_channel(
+    file: &str,
+    what: &str,
+    channel: &str,
+    wording: &BTreeMap<String, Spanned<String>>,
+    channels: &Channels,
     problems: &mut Vec<CatalogProblem>,
 ) {
-    let known = catalog.channels.names().join(", ");
-    for (file, text) in files {
-        // Each channel named, with the first wording under it (for its line).
-        type Named = Vec<(String, Option<Spanned<String>>)>;
-        let first = |m: BTreeMap<String, BTreeMap<String, Spanned<String>>>| -> Named {
-            m.into_iter()
-                .map(|(k, v)| (k, v.into_values().next()))
-                .collect()
-        };
-        let (what, named) = if file.ends_with(SERVICE_FILE) {
-            match serde_saphyr::from_str::<ServiceFile>(text) {
-                Ok(s) => ("channel_wording", first(s.channel_wording)),
-                Err(_) => continue,
-            }
-        } else if file.ends_with(CHANNELS_FILE) {
-            continue;
-        } else {
-            match serde_saphyr::from_str::<IntentFile>(text) {
-                Ok(f) => ("channel_replies", first(f.channel_replies)),
-                Err(_) => continue,
-            }
-        };
-        for (name, text) in named {
-            if catalog.channels.get(&name).is_none() {
-                let message = format!("{what}: no channel {name:?}; the channels are {known}");
-                problems.push(match &text {
-                    Some(t) => at(file, t, message),
-                    None => CatalogProblem {
-                        file: file.clone(),
-                        line: 0,
-                        column: 0,
-                        message,
-                    },
-                });
-            }
-        }
+    if channels.get(channel).is_some() {
+        return;
     }
+    let message = format!(
+        "{what}: no channel {channel:?}; the channels are {}",
+        channels.names().join(", ")
+    );
+    problems.push(match wording.values().next() {
+        Some(t) => at(file, t, message),
+        None => CatalogProblem {
+            file: file.to_string(),
+            line: 0,
+            column: 0,
+            message,
+        },
+    });
 }
 
 /// Every placeholder of an outcome's wording must name a slot or a fact
@@ -423,7 +411,12 @@ fn phrasing_slots(p: &str) -> Result<Vec<String>, String> {
     Ok(out)
 }
 
-fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -> Option<Intent> {
+fn check_intent(
+    file: &str,
+    f: IntentFile,
+    channels: &Channels,
+    problems: &mut Vec<CatalogProblem>,
+) -> Option<Intent> {
     let before = problems.len();
     let name = f.intent.value.trim().to_string();
     if name.is_empty()
@@ -598,6 +591,14 @@ fn check_intent(file: &str, f: IntentFile, problems: &mut Vec<CatalogProblem>) -
     }
     let mut channel_replies: HashMap<String, HashMap<String, Template>> = HashMap::new();
     for (channel, wording) in &f.channel_replies {
+        check_channel(
+            file,
+            "channel_replies",
+            channel,
+            wording,
+            channels,
+            problems,
+        );
         for (outcome, text) in wording {
             let Some(spec) = op.outcome(outcome) else {
                 problems.push(at(
