@@ -219,18 +219,15 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
         stale_after: Duration::from_secs(o.stale_after),
     };
-    let store: Arc<dyn SessionStore> = match &o.redis_url {
-        Some(url) => Arc::new(RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?),
-        None => Arc::new(MemoryStore::new()),
-    };
-    let engine = Engine::new(snap, store, settings);
-    // With Redis, replicas also share the dataset, so a change posted to
-    // one is served by all.
+    // With Redis, replicas share the sessions and the dataset, both through
+    // one link, so a change posted to one replica is served by all.
     Ok(match &o.redis_url {
         Some(url) => {
-            engine.with_shared(SharedData::new(url, &o.redis_prefix).map_err(|e| e.to_string())?)
+            let store = RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?;
+            let shared = SharedData::on(store.link(), &o.redis_prefix);
+            Engine::new(snap, Arc::new(store), settings).with_shared(shared)
         }
-        None => engine,
+        None => Engine::new(snap, Arc::new(MemoryStore::new()), settings),
     })
 }
 

@@ -9,11 +9,12 @@
 
 use std::time::Duration;
 
-use redis::aio::{ConnectionManager, ConnectionManagerConfig};
+use std::sync::Arc;
+
 use redis::Script;
-use tokio::sync::OnceCell;
 
 use super::changes::Records;
+use crate::dialogue::redis_store::RedisLink;
 
 /// Why the shared dataset could not be read or written.
 #[derive(Debug, thiserror::Error)]
@@ -35,21 +36,20 @@ redis.call('HSET', KEYS[1], 'v', ARGV[2], 'records', ARGV[3])
 return 1
 "#;
 
-/// Each call's deadline, connecting included.
+/// Each call's deadline, connecting included: longer than a session
+/// call's, since a fetch carries the whole dataset.
 const DEADLINE: Duration = Duration::from_secs(2);
 
 /// The shared dataset in one Redis.
 pub struct SharedData {
-    client: redis::Client,
+    // An `Arc`: the session store talks to the same Redis through the same
+    // link, so a process keeps one connection.
+    link: Arc<RedisLink>,
     key: String,
-    // Connected on first use, so the service starts while Redis is down;
-    // the manager reconnects by itself afterwards.
-    conn: OnceCell<ConnectionManager>,
     publish: Script,
 }
 
 impl std::fmt::Debug for SharedData {
-    // By hand: the client's connection details may hold a password.
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
         f.debug_struct("SharedData")
             .field("key", &self.key)
@@ -58,80 +58,60 @@ impl std::fmt::Debug for SharedData {
 }
 
 impl SharedData {
-    /// The shared dataset at `url`, under the key `{prefix}dataset`.
-    pub fn new(url: &str, prefix: &str) -> Result<SharedData, SharedError> {
-        let client = redis::Client::open(url)
-            .map_err(|e| SharedError::Unavailable(format!("invalid redis url: {e}")))?;
-        Ok(SharedData {
-            client,
+    /// The shared dataset through `link`, under the key `{prefix}dataset`.
+    pub fn on(link: Arc<RedisLink>, prefix: &str) -> SharedData {
+        SharedData {
+            link,
             key: format!("{prefix}dataset"),
-            conn: OnceCell::new(),
             publish: Script::new(PUBLISH_LUA),
-        })
+        }
     }
 
-    async fn conn(&self) -> Result<ConnectionManager, SharedError> {
-        let c = self
-            .conn
-            .get_or_try_init(|| async {
-                let config = ConnectionManagerConfig::new()
-                    .set_connection_timeout(Some(Duration::from_millis(500)))
-                    .set_response_timeout(Some(Duration::from_secs(1)))
-                    .set_number_of_retries(1);
-                self.client.get_connection_manager_with_config(config).await
-            })
+    async fn call<T, F, Fut>(&self, what: &str, f: F) -> Result<T, SharedError>
+    where
+        F: FnOnce(redis::aio::ConnectionManager) -> Fut,
+        Fut: std::future::Future<Output = redis::RedisResult<T>>,
+    {
+        self.link
+            .call(what, DEADLINE, f)
             .await
-            .map_err(|e| SharedError::Unavailable(e.to_string()))?;
-        Ok(c.clone())
-    }
-
-    async fn within<T>(
-        &self,
-        work: impl std::future::Future<Output = Result<T, SharedError>>,
-    ) -> Result<T, SharedError> {
-        tokio::time::timeout(DEADLINE, work)
-            .await
-            .unwrap_or_else(|_| {
-                Err(SharedError::Unavailable(
-                    "redis did not answer in time".into(),
-                ))
-            })
+            .map_err(SharedError::Unavailable)
     }
 
     /// The shared version, 0 when nothing is shared yet.
     pub async fn version(&self) -> Result<u64, SharedError> {
-        self.within(async {
-            let mut c = self.conn().await?;
-            let v: Option<u64> = redis::cmd("HGET")
-                .arg(&self.key)
-                .arg("v")
-                .query_async(&mut c)
-                .await
-                .map_err(|e| SharedError::Unavailable(e.to_string()))?;
-            Ok(v.unwrap_or(0))
-        })
-        .await
+        let key = self.key.clone();
+        let v: Option<u64> = self
+            .call("the dataset version", |mut c| async move {
+                redis::cmd("HGET")
+                    .arg(key)
+                    .arg("v")
+                    .query_async(&mut c)
+                    .await
+            })
+            .await?;
+        Ok(v.unwrap_or(0))
     }
 
     /// The shared records and their version, if any are shared.
     pub async fn fetch(&self) -> Result<Option<(u64, Records)>, SharedError> {
-        self.within(async {
-            let mut c = self.conn().await?;
-            let (v, json): (Option<u64>, Option<String>) = redis::cmd("HMGET")
-                .arg(&self.key)
-                .arg("v")
-                .arg("records")
-                .query_async(&mut c)
-                .await
-                .map_err(|e| SharedError::Unavailable(e.to_string()))?;
-            match (v, json) {
-                (Some(v), Some(j)) => serde_json::from_str(&j)
-                    .map(|r| Some((v, r)))
-                    .map_err(|e| SharedError::Corrupt(e.to_string())),
-                _ => Ok(None),
-            }
-        })
-        .await
+        let key = self.key.clone();
+        let (v, json): (Option<u64>, Option<String>) = self
+            .call("the dataset", |mut c| async move {
+                redis::cmd("HMGET")
+                    .arg(key)
+                    .arg("v")
+                    .arg("records")
+                    .query_async(&mut c)
+                    .await
+            })
+            .await?;
+        match (v, json) {
+            (Some(v), Some(j)) => serde_json::from_str(&j)
+                .map(|r| Some((v, r)))
+                .map_err(|e| SharedError::Corrupt(e.to_string())),
+            _ => Ok(None),
+        }
     }
 
     /// Shares `records` as `version` if the shared version is still
@@ -144,19 +124,17 @@ impl SharedData {
     ) -> Result<bool, SharedError> {
         let json =
             serde_json::to_string(records).map_err(|e| SharedError::Corrupt(e.to_string()))?;
-        self.within(async {
-            let mut c = self.conn().await?;
-            let stored: i64 = self
-                .publish
-                .key(&self.key)
-                .arg(expected)
-                .arg(version)
-                .arg(json)
-                .invoke_async(&mut c)
-                .await
-                .map_err(|e| SharedError::Unavailable(e.to_string()))?;
-            Ok(stored == 1)
-        })
-        .await
+        let mut invocation = self.publish.prepare_invoke();
+        invocation
+            .key(&self.key)
+            .arg(expected)
+            .arg(version)
+            .arg(json);
+        let stored: i64 = self
+            .call("the dataset publish", |mut c| async move {
+                invocation.invoke_async(&mut c).await
+            })
+            .await?;
+        Ok(stored == 1)
     }
 }

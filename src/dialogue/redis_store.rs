@@ -119,13 +119,12 @@ redis.call('DEL', KEYS[2])
 return removed
 "#;
 
-/// Sessions in Redis (a single server, or a cluster through a proxy that
-/// routes by slot). Cheap to share behind one `Arc`: it holds one
-/// multiplexed connection that every call uses.
-pub struct RedisStore {
+/// One Redis server, connected on first use, with a deadline on every call.
+/// The session store and the shared dataset use the same link, so a
+/// process keeps one connection to Redis.
+pub struct RedisLink {
     client: redis::Client,
-    prefix: String,
-    // Connected on first use, not in `new`: the service must start (and
+    // Connected on first use, not when made: the service must start (and
     // answer, without context) while Redis is down. A `OnceCell` because
     // concurrent first calls must share one connection attempt, and a
     // failed attempt leaves it empty so the next call tries again. Once set,
@@ -133,6 +132,75 @@ pub struct RedisStore {
     // `Arc` is needed around it: `ConnectionManager` is already a cheap
     // handle on shared state, cloned per call.
     manager: OnceCell<ConnectionManager>,
+}
+
+impl RedisLink {
+    /// A link to `url`; only the URL is checked (the message does not
+    /// repeat it: it may hold a password).
+    pub fn open(url: &str) -> Result<RedisLink, String> {
+        let client = redis::Client::open(url).map_err(|e| {
+            format!("invalid redis url, expected redis://[user:password@]host[:port][/db]: {e}")
+        })?;
+        Ok(RedisLink {
+            client,
+            manager: OnceCell::new(),
+        })
+    }
+
+    /// The shared connection, made on first use.
+    async fn connection(&self) -> Result<ConnectionManager, String> {
+        let manager = self
+            .manager
+            .get_or_try_init(|| async {
+                let config = ConnectionManagerConfig::new()
+                    .set_connection_timeout(Some(CONNECT_TIMEOUT))
+                    .set_response_timeout(Some(RESPONSE_TIMEOUT))
+                    .set_number_of_retries(CONNECT_RETRIES)
+                    .set_min_delay(RETRY_MIN_DELAY)
+                    .set_max_delay(RETRY_MAX_DELAY);
+                self.client.get_connection_manager_with_config(config).await
+            })
+            .await
+            .map_err(|e| format!("cannot connect to redis: {e}"))?;
+        Ok(manager.clone())
+    }
+
+    /// Runs one call with the connection within `deadline`, connecting
+    /// included. `what` names the call in the timeout message.
+    pub async fn call<T, F, Fut>(&self, what: &str, deadline: Duration, f: F) -> Result<T, String>
+    where
+        F: FnOnce(ConnectionManager) -> Fut,
+        Fut: Future<Output = RedisResult<T>>,
+    {
+        let work = async {
+            let conn = self.connection().await?;
+            f(conn).await.map_err(|e| format!("redis: {e}"))
+        };
+        // Dropping `work` on timeout is safe: an interrupted first connect
+        // leaves the cell empty, and a command cut short either ran whole on
+        // the server (scripts are atomic) or not at all.
+        match tokio::time::timeout(deadline, work).await {
+            Ok(result) => result,
+            Err(_) => Err(format!(
+                "redis did not answer {what} within {} ms",
+                deadline.as_millis()
+            )),
+        }
+    }
+
+    /// Whether a connection has been made.
+    fn connected(&self) -> bool {
+        self.manager.initialized()
+    }
+}
+
+/// Sessions in Redis (a single server, or a cluster through a proxy that
+/// routes by slot). Cheap to share behind one `Arc`: it holds one
+/// multiplexed connection that every call uses.
+pub struct RedisStore {
+    // An `Arc`: the shared dataset may use the same link.
+    link: std::sync::Arc<RedisLink>,
+    prefix: String,
     // Built once: `Script` hashes its source, and `invoke_async` sends
     // EVALSHA with that hash, falling back to EVAL when the server does not
     // know the script yet (after a restart or a failover).
@@ -149,7 +217,7 @@ impl fmt::Debug for RedisStore {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         f.debug_struct("RedisStore")
             .field("prefix", &self.prefix)
-            .field("connected", &self.manager.initialized())
+            .field("connected", &self.link.connected())
             .finish_non_exhaustive()
     }
 }
@@ -162,22 +230,26 @@ impl RedisStore {
     /// Only checks the URL and the prefix: no connection is made until the
     /// first call, so this succeeds while Redis is down.
     pub fn new(url: &str, prefix: &str) -> Result<RedisStore, StoreError> {
-        // The URL is not repeated in the message: it may hold a password.
-        let client = redis::Client::open(url).map_err(|e| {
-            StoreError::Unavailable(format!(
-                "invalid redis url, expected redis://[user:password@]host[:port][/db]: {e}"
-            ))
-        })?;
+        let link = RedisLink::open(url).map_err(StoreError::Unavailable)?;
+        RedisStore::on(std::sync::Arc::new(link), prefix)
+    }
+
+    /// A store on an existing link (shared with the dataset copy).
+    pub fn on(link: std::sync::Arc<RedisLink>, prefix: &str) -> Result<RedisStore, StoreError> {
         check_prefix(prefix)?;
         Ok(RedisStore {
-            client,
+            link,
             prefix: prefix.to_string(),
-            manager: OnceCell::new(),
             save_script: Script::new(SAVE_LUA),
             erase_script: Script::new(ERASE_LUA),
             unanswered_script: Script::new(UNANSWERED_LUA),
             round_trips: std::sync::atomic::AtomicU64::new(0),
         })
+    }
+
+    /// The link this store talks to Redis through.
+    pub fn link(&self) -> std::sync::Arc<RedisLink> {
+        std::sync::Arc::clone(&self.link)
     }
 
     /// How many calls went to Redis so far: one pipeline or one script call
@@ -192,26 +264,10 @@ impl RedisStore {
         &self.prefix
     }
 
-    /// The shared connection, made on first use.
-    async fn connection(&self) -> Result<ConnectionManager, StoreError> {
-        let manager = self
-            .manager
-            .get_or_try_init(|| async {
-                let config = ConnectionManagerConfig::new()
-                    .set_connection_timeout(Some(CONNECT_TIMEOUT))
-                    .set_response_timeout(Some(RESPONSE_TIMEOUT))
-                    .set_number_of_retries(CONNECT_RETRIES)
-                    .set_min_delay(RETRY_MIN_DELAY)
-                    .set_max_delay(RETRY_MAX_DELAY);
-                self.client.get_connection_manager_with_config(config).await
-            })
-            .await
-            .map_err(|e| StoreError::Unavailable(format!("cannot connect to redis: {e}")))?;
-        Ok(manager.clone())
-    }
-
-    /// Runs one call with the connection, within [`CALL_DEADLINE`]
-    /// (connecting included). `what` names the call in the timeout message.
+    /// Runs one call within [`CALL_DEADLINE`] (connecting included),
+    /// counting it as a round trip. The caller cannot tell whether a call
+    /// cut short by the deadline ran, but the next load sees a consistent
+    /// version either way, so a save that did land only costs one conflict.
     async fn call<T, F, Fut>(&self, what: &str, f: F) -> Result<T, StoreError>
     where
         F: FnOnce(ConnectionManager) -> Fut,
@@ -219,27 +275,11 @@ impl RedisStore {
     {
         self.round_trips
             .fetch_add(1, std::sync::atomic::Ordering::Relaxed);
-        let work = async {
-            let conn = self.connection().await?;
-            f(conn).await.map_err(unavailable)
-        };
-        // Dropping `work` on timeout is safe: an interrupted first connect
-        // leaves the cell empty, and a command cut short either ran whole on
-        // the server (scripts are atomic) or not at all. The caller cannot
-        // tell which, but either way the next load sees a consistent
-        // version, so a save that did land only costs one conflict.
-        match tokio::time::timeout(CALL_DEADLINE, work).await {
-            Ok(result) => result,
-            Err(_) => Err(StoreError::Unavailable(format!(
-                "redis did not answer {what} within {} ms",
-                CALL_DEADLINE.as_millis()
-            ))),
-        }
+        self.link
+            .call(what, CALL_DEADLINE, f)
+            .await
+            .map_err(StoreError::Unavailable)
     }
-}
-
-fn unavailable(e: redis::RedisError) -> StoreError {
-    StoreError::Unavailable(format!("redis: {e}"))
 }
 
 /// Rejects a prefix with braces: Redis takes the first `{…}` of a key as
