@@ -176,6 +176,25 @@ impl Value {
         }
     }
 
+    /// This value, `sep`, then `next`, as one value in every form: "2nd" +
+    /// " in the " + "men's 100 m" reads "2nd in the men's 100 m", is said
+    /// "second in the men's one hundred metres", and keeps the ordinal's
+    /// markup in SSML.
+    pub fn then(&self, sep: &str, next: &Value) -> Value {
+        let both = |style: Style| {
+            let sep = match style {
+                Style::Ssml => xml_escape(sep),
+                _ => sep.to_string(),
+            };
+            format!("{}{sep}{}", self.render(style), next.render(style))
+        };
+        Value::Said {
+            text: both(Style::Text),
+            spoken: both(Style::Spoken),
+            ssml: both(Style::Ssml),
+        }
+    }
+
     /// An ordinal place: "2nd", "second", `<say-as interpret-as="ordinal">`.
     pub fn ordinal(n: u64) -> Value {
         Value::ordinal_with(n, "")

@@ -3,8 +3,6 @@
 
 use super::support::{medal_facts, status_phrase, when_value};
 use super::*;
-use crate::answers::value::xml_escape;
-use crate::answers::words::speak_numbers;
 use crate::dataset::{EntryStatus, Status};
 
 pub static SPEC: OpSpec = OpSpec {
@@ -88,15 +86,7 @@ fn run(input: &OpInput) -> OpOutput {
                 let value = if e.status != EntryStatus::Ok {
                     Value::Text(format!("{} in the {name}", status_phrase(e.status)))
                 } else if let Some(p) = e.place {
-                    let Value::Said { text, spoken, ssml } = Value::ordinal(p as u64) else {
-                        continue;
-                    };
-                    let tail = format!(" in the {name}");
-                    Value::Said {
-                        text: format!("{text}{tail}"),
-                        spoken: format!("{spoken}{tail}"),
-                        ssml: format!("{ssml}{}", xml_escape(&speak_numbers(&tail))),
-                    }
+                    Value::ordinal(p as u64).then(" in the ", &Value::Text(name))
                 } else {
                     continue;
                 };

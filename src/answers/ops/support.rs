@@ -128,16 +128,10 @@ pub fn day_phrase(day: Date, now: &ZonedDateTime) -> String {
 /// the clock time in words ("nineteen forty"), as the 24-hour clock is read
 /// in the newsroom's region (common practice).
 pub fn when_value(start: &ZonedDateTime, now: &ZonedDateTime) -> Value {
-    let (clock_text, clock_spoken, clock_ssml) =
-        clock_forms(start.hour() as u64, start.minute() as u64);
-    let Value::Said { text, spoken, ssml } = day_value(start.date(), now) else {
-        return Value::Text(format!("{} at {clock_text}", day_phrase(start.date(), now)));
-    };
-    Value::Said {
-        text: format!("{text} at {clock_text}"),
-        spoken: format!("{spoken} at {clock_spoken}"),
-        ssml: format!("{ssml} at {clock_ssml}"),
-    }
+    day_value(start.date(), now).then(
+        " at ",
+        &clock_value(start.hour() as u64, start.minute() as u64),
+    )
 }
 
 /// A day relative to now as a value. A named day ("on Monday 16 August")
@@ -173,23 +167,19 @@ pub fn day_value(date: Date, now: &ZonedDateTime) -> Value {
 }
 
 /// A time of day on the 24-hour clock as a value: "20:50", "twenty fifty".
+/// Speech gets the words, SSML included: `say-as` time is read digit by
+/// digit by some engines ("twenty-one zero four"), which is not how the
+/// newsroom says it.
 pub fn clock_value(h: u64, m: u64) -> Value {
-    let (text, spoken, ssml) = clock_forms(h, m);
-    Value::Said { text, spoken, ssml }
-}
-
-/// Written, spoken and SSML forms of a time of day. The SSML says the time
-/// in words, as the text does: `say-as` time is read digit by digit by
-/// some engines ("twenty-one zero four"), which is not how the newsroom
-/// says it.
-fn clock_forms(h: u64, m: u64) -> (String, String, String) {
     let spoken = match m {
         0 => format!("{} hundred", words::cardinal(h)),
         1..=9 => format!("{} oh {}", words::cardinal(h), words::cardinal(m)),
         _ => format!("{} {}", words::cardinal(h), words::cardinal(m)),
     };
-    let ssml = crate::answers::value::xml_escape(&spoken);
-    (format!("{h:02}:{m:02}"), spoken, ssml)
+    Value::Dual {
+        text: format!("{h:02}:{m:02}"),
+        spoken,
+    }
 }
 
 fn weekday_name(d: Date) -> &'static str {
