@@ -5,7 +5,7 @@ mod common;
 
 use std::time::Duration;
 
-use common::{keys_under, redis_url, test_prefix, wait_until, ServeProcess};
+use common::{ask_at, keys_under, redis_url, test_prefix, wait_until, ServeProcess};
 
 const ADMIN_TOKEN: &str = "replica-admin-token-0123456789";
 
@@ -131,18 +131,6 @@ async fn a_conversation_alternating_between_two_replicas_keeps_its_context() {
     assert!(!logs.contains("7700"), "a raw user id was logged:\n{logs}");
 }
 
-async fn ask(client: &reqwest::Client, base: &str, user: &str, text: &str) -> serde_json::Value {
-    client
-        .post(format!("{base}/v1/messages"))
-        .json(&serde_json::json!({"user": user, "text": text}))
-        .send()
-        .await
-        .unwrap()
-        .json()
-        .await
-        .unwrap()
-}
-
 /// A batch posted to one replica is served by the other within a second,
 /// and a replica started later begins from the shared version.
 #[tokio::test]
@@ -154,7 +142,7 @@ async fn a_change_posted_to_one_replica_is_served_by_all() {
     ready(&client, &a.base).await;
     ready(&client, &b.base).await;
     let q = "who won the men's marathon?";
-    assert_eq!(ask(&client, &b.base, "r1", q).await["detail"], "live");
+    assert_eq!(ask_at(&client, &b.base, "r1", q).await["detail"], "live");
 
     let batch = serde_json::json!({"as_of": "2027-08-14T21:30:00+01:00", "changes": [
         {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "entries": [
@@ -182,14 +170,14 @@ async fn a_change_posted_to_one_replica_is_served_by_all() {
             let client = client.clone();
             let base = b.base.clone();
             async move {
-                let a = ask(&client, &base, "r2", q).await;
+                let a = ask_at(&client, &base, "r2", q).await;
                 a["dataset_version"] == version && a["detail"] == "answered"
             }
         },
     )
     .await;
     eprintln!("served by the other replica after {:?}", posted.elapsed());
-    let answer = ask(&client, &b.base, "r3", q).await;
+    let answer = ask_at(&client, &b.base, "r3", q).await;
     assert!(
         answer["text"]
             .as_str()
@@ -201,7 +189,7 @@ async fn a_change_posted_to_one_replica_is_served_by_all() {
     // A replica that was not running catches up by version at start.
     let c = Replica::start(&prefix);
     ready(&client, &c.base).await;
-    let answer = ask(&client, &c.base, "r4", q).await;
+    let answer = ask_at(&client, &c.base, "r4", q).await;
     assert_eq!(answer["dataset_version"], version, "{answer}");
     let _ = (a.stop(), b.stop(), c.stop());
 }

@@ -27,15 +27,7 @@ fn scratch(tag: &str) -> PathBuf {
 }
 
 async fn hello(client: &reqwest::Client, base: &str) -> String {
-    let a: serde_json::Value = client
-        .post(format!("{base}/v1/messages"))
-        .json(&serde_json::json!({"user": "w", "text": "hello"}))
-        .send()
-        .await
-        .unwrap()
-        .json()
-        .await
-        .unwrap();
+    let a = common::ask_at(client, base, "w", "hello").await;
     a["text"].as_str().unwrap_or_default().to_string()
 }
 

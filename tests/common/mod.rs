@@ -254,3 +254,22 @@ impl ServeProcess {
         log
     }
 }
+
+/// A reader's message to a server at `base` (a process of the test's own);
+/// the reply as JSON.
+pub async fn ask_at(
+    client: &reqwest::Client,
+    base: &str,
+    user: &str,
+    text: &str,
+) -> serde_json::Value {
+    client
+        .post(format!("{base}/v1/messages"))
+        .json(&serde_json::json!({"user": user, "text": text}))
+        .send()
+        .await
+        .unwrap()
+        .json()
+        .await
+        .unwrap()
+}
