@@ -99,12 +99,13 @@ pub fn realise(
             }
         }
     }
-    // Last resort: trailing sentences of the shortest wording go.
-    let text = shorten(
+    // Last resort: trailing sentences of the shortest wording without its
+    // asides go (that wording itself was tried above).
+    let no_asides = for_channel(
         profile,
-        &render_text(profile, template, values, freshness, shortest),
+        &drop_asides(&render_text(profile, template, values, freshness, shortest)),
     );
-    from_text(profile, text)
+    from_text(profile, leading_sentences(profile, no_asides))
 }
 
 /// A reply made from its final text alone, when the wording had to be
@@ -228,15 +229,10 @@ fn for_channel(profile: &Profile, text: &str) -> String {
     }
 }
 
-/// Last resorts when no wording fits: leave out asides in brackets, then
-/// keep only the leading whole sentences that fit. The shortest of these is
-/// returned even if it does not fit, rather than a cut word.
-fn shorten(profile: &Profile, text: &str) -> String {
-    let no_asides = for_channel(profile, &drop_asides(text));
-    if profile.fits(&no_asides) {
-        return no_asides;
-    }
-    let sentences = split_sentences(&no_asides);
+/// The most leading whole sentences of `text` that fit; `text` itself,
+/// even if it does not fit, rather than a cut word.
+fn leading_sentences(profile: &Profile, text: String) -> String {
+    let sentences = split_sentences(&text);
     for n in (1..sentences.len()).rev() {
         let t = sentences[..n].join(" ");
         if profile.fits(&t) {
@@ -244,7 +240,7 @@ fn shorten(profile: &Profile, text: &str) -> String {
         }
     }
     tracing::warn!(channel = %profile.name, "no wording fits the channel");
-    no_asides
+    text
 }
 
 /// Removes " (…)" asides: "Zoë Quillon (Quessary)" → "Zoë Quillon".
