@@ -354,7 +354,8 @@ fn sec_width(decimals: u8) -> usize {
 /// Formats a mark for chat and SMS: a time under a minute as "10.12 s",
 /// under an hour as "1:59.32", longer as "2:05:31" (written decimals are
 /// kept); a distance as "8.21 m"; points as written ("14.533"); votes with
-/// thousands separators ("1,234").
+/// thousands separators and the unit ("1,234 votes"), as a figure without
+/// its unit reads like a score.
 pub fn format_text(measure: Measure, mark: &Mark) -> String {
     let (units, d) = (mark.units(), mark.decimals);
     match measure {
@@ -371,7 +372,7 @@ pub fn format_text(measure: Measure, mark: &Mark) -> String {
             // Votes are whole, but a mark built with decimals still prints
             // its whole part with separators rather than a fraction of a vote.
             let (w, _) = split(units, d);
-            words::figures(w)
+            words::count_noun(w, "vote", None, words::NumberStyle::Figures)
         }
     }
 }
@@ -462,7 +463,7 @@ fn margin(a: &Mark, b: &Mark) -> (u64, u8) {
 
 /// The margin between two marks for chat and SMS, written with the larger
 /// of their decimal counts: "0.05 s" (or "1:02.30" from a minute up),
-/// "0.12 m", "3" points, "1,204" votes.
+/// "0.12 m", "3" points, "1,204 votes".
 pub fn format_margin_text(measure: Measure, a: &Mark, b: &Mark) -> String {
     let (units, d) = margin(a, b);
     match measure {
@@ -475,7 +476,9 @@ pub fn format_margin_text(measure: Measure, a: &Mark, b: &Mark) -> String {
             let (w, f) = split(units, d);
             decimal_text(w, f, d)
         }
-        Measure::Votes => words::figures(split(units, d).0),
+        Measure::Votes => {
+            words::count_noun(split(units, d).0, "vote", None, words::NumberStyle::Figures)
+        }
     }
 }
 
@@ -650,9 +653,10 @@ mod tests {
         assert_eq!(text(Measure::Points, "14.533"), "14.533");
         assert_eq!(text(Measure::Points, "87"), "87");
         assert_eq!(text(Measure::Points, "0"), "0");
-        assert_eq!(text(Measure::Votes, "1234"), "1,234");
-        assert_eq!(text(Measure::Votes, "1,234"), "1,234");
-        assert_eq!(text(Measure::Votes, "999"), "999");
+        assert_eq!(text(Measure::Votes, "1234"), "1,234 votes");
+        assert_eq!(text(Measure::Votes, "1,234"), "1,234 votes");
+        assert_eq!(text(Measure::Votes, "999"), "999 votes");
+        assert_eq!(text(Measure::Votes, "1"), "1 vote");
     }
 
     #[test]
@@ -738,13 +742,13 @@ mod tests {
         assert_eq!(
             m(Measure::Votes, "1,234", "30"),
             (
-                "1,204".into(),
+                "1,204 votes".into(),
                 "one thousand, two hundred and four votes".into()
             )
         );
         assert_eq!(
             m(Measure::Votes, "31", "30"),
-            ("1".into(), "one vote".into())
+            ("1 vote".into(), "one vote".into())
         );
         // The classic float trap: 0.3 - 0.1 must not print 0.19999.
         assert_eq!(m(Measure::Distance, "0.3", "0.1").0, "0.2 m");

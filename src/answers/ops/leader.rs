@@ -1,6 +1,8 @@
 //! `leader`: who leads a live contest and by how much.
 
-use super::support::{labels, margin_value, mark_value, placed, when_value};
+use super::support::{
+    labels, margin_points, margin_value, mark_value, placed, vote_facts, when_value,
+};
 use super::*;
 use crate::dataset::Status;
 
@@ -23,12 +25,27 @@ pub static SPEC: OpSpec = OpSpec {
                 "margin",
                 "updated",
                 "stale",
+                "share",
+                "margin_points",
+                "counted",
             ],
         ),
-        answered("tied", &["contest_name", "leader", "mark"]),
+        answered(
+            "tied",
+            &["contest_name", "leader", "mark", "share", "counted"],
+        ),
         answered(
             "final",
-            &["contest_name", "winner", "mark", "second", "margin"],
+            &[
+                "contest_name",
+                "winner",
+                "mark",
+                "second",
+                "margin",
+                "share",
+                "margin_points",
+                "counted",
+            ],
         ),
         no_data("scheduled", &["contest_name", "start"]),
         no_data("no_result", &["contest_name"]),
@@ -61,6 +78,7 @@ fn run(input: &OpInput) -> OpOutput {
     if let Some(m) = mark_value(data, ci, first) {
         f.put("mark", m);
     }
+    vote_facts(data, ci, Some(first), &mut f);
     let mut mentioned = vec![me];
     let subjects: Vec<EntityRef> = leaders
         .iter()
@@ -87,6 +105,9 @@ fn run(input: &OpInput) -> OpOutput {
         if let Some(m) = margin_value(data, ci, first, second) {
             f.put("margin", m);
         }
+        if let Some(p) = margin_points(data, ci, first, second) {
+            f.put("margin_points", p);
+        }
     }
     if c.status == Status::Final {
         return OpOutput::done("final", f, mentioned).about(subjects);
@@ -94,12 +115,8 @@ fn run(input: &OpInput) -> OpOutput {
     if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
         f.put("stale", s);
     }
-    if let Some(t) = data.facts[ci].updated {
-        let z = t.to_zoned_datetime(data.tz.clone());
-        f.put(
-            "updated",
-            super::support::clock_value(z.hour() as u64, z.minute() as u64),
-        );
+    if let Some(t) = super::support::updated_value(data, ci) {
+        f.put("updated", t);
     }
     OpOutput::done("live", f, mentioned).about(subjects)
 }

@@ -31,6 +31,9 @@ pub static SPEC: OpSpec = OpSpec {
                 "bronze",
                 "missing",
                 "missing_count",
+                "mark",
+                "share",
+                "counted",
             ],
         ),
         // The holders of the one award asked for.
@@ -42,7 +45,7 @@ pub static SPEC: OpSpec = OpSpec {
         // An award asked for in a round that gives none.
         answered("no_awards", &[]),
         // Still under way: who leads now.
-        no_data("live", &["leader", "mark", "stale"]),
+        no_data("live", &["leader", "mark", "stale", "share", "counted"]),
         no_data("scheduled", &["start"]),
         no_data("no_result", &[]),
     ],
@@ -78,6 +81,7 @@ fn run(input: &OpInput) -> OpOutput {
             if let Some(m) = super::support::mark_value(data, ci, first) {
                 f.put("mark", m);
             }
+            super::support::vote_facts(data, ci, Some(first), &mut f);
             if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
                 f.put("stale", s);
             }
@@ -168,6 +172,15 @@ fn run(input: &OpInput) -> OpOutput {
         if k == 0 {
             f.put("winner", labels(data, c, &ix));
         }
+    }
+    // The winner's own figures: the mark, and for a vote count the share
+    // and how much of the count is in (a race can be called before the
+    // count ends).
+    if let Some(&first) = placed(c).first() {
+        if let Some(m) = super::support::mark_value(data, ci, first) {
+            f.put("mark", m);
+        }
+        super::support::vote_facts(data, ci, Some(first), &mut f);
     }
     f.put("missing_count", Value::Int(missing.len() as i64));
     f.put("missing", Value::from(missing));

@@ -29,6 +29,8 @@ pub static SPEC: OpSpec = OpSpec {
                 "mark",
                 "award",
                 "contest_name",
+                "share",
+                "counted",
             ],
         ),
         answered("did_not_finish", &["name", "status", "contest_name"]),
@@ -41,6 +43,8 @@ pub static SPEC: OpSpec = OpSpec {
                 "mark",
                 "contest_name",
                 "stale",
+                "share",
+                "counted",
             ],
         ),
         no_data("scheduled", &["name", "start", "contest_name"]),
@@ -110,6 +114,7 @@ fn run(input: &OpInput) -> OpOutput {
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);
     }
+    super::support::vote_facts(data, ci, Some(ei), &mut f);
     if c.status == Status::Live {
         if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
             f.put("stale", s);

@@ -5,7 +5,7 @@ use jiff::{civil::Date, ZonedDateTime};
 
 use crate::answers::value::{int_words, Style, Value};
 use crate::answers::words;
-use crate::dataset::{mark, Contest, Dataset, EntityRef, Entry, EntryStatus, Status};
+use crate::dataset::{mark, Contest, Dataset, EntityRef, Entry, EntryStatus, Measure, Status};
 
 /// "Zoë Ardent (Brellmoor)" for a person, "Brellmoor" for a team.
 pub fn entry_label(data: &Dataset, e: &Entry) -> String {
@@ -67,6 +67,101 @@ pub fn margin_value(data: &Dataset, contest: usize, a: usize, b: usize) -> Optio
             text: mark::format_margin_text(c.measure, x, y),
             spoken: mark::format_margin_spoken(c.measure, x, y),
         }),
+        _ => None,
+    }
+}
+
+/// Each entry's share of the votes counted in a contest measured in votes,
+/// in per cent, computed from the votes themselves (never from rounded
+/// shares, so rounded shares need not add up to 100, common practice).
+/// Entries without a vote count, or that did not stand (withdrawn,
+/// disqualified), have none. `None` when the contest is not measured in
+/// votes or no vote is counted yet.
+pub fn vote_shares(data: &Dataset, contest: usize) -> Option<Vec<Option<f64>>> {
+    let c = &data.contests[contest];
+    if c.measure != Measure::Votes {
+        return None;
+    }
+    let marks = &data.facts[contest].marks;
+    let counts: Vec<Option<f64>> = c
+        .entries
+        .iter()
+        .zip(marks)
+        .map(|(e, m)| {
+            m.as_ref()
+                .filter(|_| e.status == EntryStatus::Ok)
+                .map(|m| m.value())
+        })
+        .collect();
+    let total: f64 = counts.iter().flatten().sum();
+    if total <= 0.0 {
+        return None;
+    }
+    Some(
+        counts
+            .iter()
+            .map(|v| v.map(|v| v * 100.0 / total))
+            .collect(),
+    )
+}
+
+/// A share in per cent to one decimal place: "45.2%", spoken "forty-five
+/// point two per cent" (one decimal is the common practice for vote shares).
+pub fn percent_value(share: f64) -> Value {
+    let written = format!("{:.1}", round1(share));
+    Value::Dual {
+        text: format!("{written}%"),
+        spoken: format!("{} per cent", words::decimal_words(&written)),
+    }
+}
+
+/// A gap between two shares in percentage points, one decimal place: "3.4
+/// points", spoken "three point four points" (a difference of percentages
+/// is in points, not per cent: common practice).
+pub fn points_value(points: f64) -> Value {
+    let written = format!("{:.1}", round1(points));
+    Value::Dual {
+        text: format!("{written} points"),
+        spoken: format!("{} points", words::decimal_words(&written)),
+    }
+}
+
+/// Rounds half away from zero to one decimal, the way results are printed
+/// (`format!` alone rounds the binary value: 0.25 would print "0.2").
+fn round1(x: f64) -> f64 {
+    (x * 10.0).round() / 10.0
+}
+
+/// How much of the expected count is in, in whole per cent rounded down:
+/// "62%", spoken "sixty-two per cent". Rounded down so a count that is not
+/// finished never reads "100%".
+pub fn counted_value(counted: f64) -> Value {
+    let pct = (counted.clamp(0.0, 1.0) * 100.0 + 1e-9).floor() as u64;
+    let pct = if counted < 1.0 { pct.min(99) } else { 100 };
+    Value::Dual {
+        text: format!("{pct}%"),
+        spoken: format!("{} per cent", words::cardinal(pct)),
+    }
+}
+
+/// The facts every vote-counted answer can add: the share of one entry
+/// (`share`), and how much of the count is in (`counted`).
+pub fn vote_facts(data: &Dataset, contest: usize, entry: Option<usize>, f: &mut super::Facts) {
+    if let (Some(shares), Some(e)) = (vote_shares(data, contest), entry) {
+        if let Some(s) = shares[e] {
+            f.put("share", percent_value(s));
+        }
+    }
+    if let Some(n) = data.contests[contest].counted {
+        f.put("counted", counted_value(n));
+    }
+}
+
+/// The gap in percentage points between two entries' vote shares.
+pub fn margin_points(data: &Dataset, contest: usize, a: usize, b: usize) -> Option<Value> {
+    let shares = vote_shares(data, contest)?;
+    match (shares[a], shares[b]) {
+        (Some(x), Some(y)) => Some(points_value((x - y).abs())),
         _ => None,
     }
 }
@@ -247,6 +342,14 @@ pub fn medal_table(data: &Dataset) -> Vec<MedalRow> {
     rows
 }
 
+/// How many contests that give awards are not decided yet: "so far" in
+/// "three seats so far" needs it.
+pub fn awards_still_open(data: &Dataset) -> usize {
+    (0..data.contests.len())
+        .filter(|&c| data.awards_in(c) && data.contests[c].status != Status::Final)
+        .count()
+}
+
 /// Standard competition ranking over rows already in order.
 pub fn assign_ranks(rows: &mut [MedalRow]) {
     for i in 0..rows.len() {
@@ -267,7 +370,8 @@ pub fn medal_facts(data: &Dataset, counts: &[u32], facts: &mut super::Facts) {
     facts.put("breakdown", breakdown(data, counts, false));
 }
 
-/// A medal count in words, "three gold, one silver and two bronze"; zero
+/// A medal count in words, "three gold, one silver and two bronze" ("three
+/// seats" when the scenario has a single award); zero
 /// counts are left out unless `zeros` (a table row lists every colour).
 pub fn breakdown(data: &Dataset, counts: &[u32], zeros: bool) -> Value {
     let phrase = |style: Style| {
@@ -276,7 +380,16 @@ pub fn breakdown(data: &Dataset, counts: &[u32], zeros: bool) -> Value {
             .iter()
             .zip(counts)
             .filter(|(_, &n)| zeros || n > 0)
-            .map(|(a, &n)| format!("{} {a}", int_words(n as i64, style, false)))
+            .map(|(a, &n)| {
+                // Several awards read as colours ("three gold"); a single
+                // kind of award is the thing counted ("three seats").
+                let noun = if data.awards().len() == 1 && n != 1 {
+                    words::plural(a)
+                } else {
+                    a.clone()
+                };
+                format!("{} {noun}", int_words(n as i64, style, false))
+            })
             .collect();
         words::join_list(&parts, "and")
     };
@@ -329,6 +442,15 @@ pub fn staleness(
     })
 }
 
+/// The time of a contest's last update on the 24-hour clock ("21:02"), if
+/// the data give one.
+pub fn updated_value(data: &Dataset, ci: usize) -> Option<Value> {
+    data.facts[ci].updated.map(|t| {
+        let z = t.to_zoned_datetime(data.tz.clone());
+        clock_value(z.hour() as u64, z.minute() as u64)
+    })
+}
+
 /// Name, start and venue of a contest.
 pub fn contest_facts(data: &Dataset, ci: usize, now: &ZonedDateTime, f: &mut super::Facts) {
     f.put("contest_name", data.contest_name(ci));
@@ -348,6 +470,70 @@ mod tests {
             counts: c.to_vec(),
             rank: 0,
         }
+    }
+
+    #[test]
+    fn shares_and_points_read_to_one_decimal() {
+        // One decimal place for vote shares, and margins between shares in
+        // percentage points: common practice in results reporting.
+        let r = |v: Value| (v.render(Style::Text), v.render(Style::Spoken));
+        assert_eq!(
+            r(percent_value(43.86)),
+            ("43.9%".into(), "forty-three point nine per cent".into())
+        );
+        // Half away from zero, as printed results round (0.25 is 0.3).
+        assert_eq!(r(percent_value(0.25)).0, "0.3%");
+        assert_eq!(r(percent_value(100.0)).0, "100.0%");
+        assert_eq!(
+            r(points_value(11.05)),
+            ("11.1 points".into(), "eleven point one points".into())
+        );
+    }
+
+    #[test]
+    fn an_unfinished_count_never_reads_one_hundred_per_cent() {
+        let r = |v: Value| v.render(Style::Text);
+        assert_eq!(r(counted_value(0.0)), "0%");
+        assert_eq!(r(counted_value(0.6)), "60%");
+        assert_eq!(r(counted_value(0.916)), "91%");
+        assert_eq!(r(counted_value(0.999)), "99%");
+        assert_eq!(r(counted_value(1.0)), "100%");
+        assert_eq!(
+            counted_value(0.35).render(Style::Spoken),
+            "thirty-five per cent"
+        );
+    }
+
+    #[test]
+    fn vote_shares_come_from_the_votes_and_need_not_sum_to_one_hundred() {
+        // Three candidates on 1, 1 and 1 votes: each 33.3%, which rounded
+        // add up to 99.9; the shares are not forced to 100 (common practice).
+        let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/election");
+        let data = crate::dataset::load_dir(&dir).unwrap();
+        let mut r = crate::dataset::changes::Records::of(&data);
+        let c = r
+            .contests
+            .iter_mut()
+            .find(|c| c.entries.len() == 3)
+            .unwrap();
+        c.status = Status::Live;
+        for e in c.entries.iter_mut() {
+            e.place = Some(1);
+            e.mark = Some("1".into());
+        }
+        let id = c.id.clone();
+        let Ok(data) = r.build(2) else {
+            panic!("the changed records should load");
+        };
+        let ci = data.contests.iter().position(|c| c.id == id).unwrap();
+        let shares = vote_shares(&data, ci).unwrap();
+        let printed: Vec<String> = shares
+            .iter()
+            .map(|s| percent_value(s.unwrap()).render(Style::Text))
+            .collect();
+        assert_eq!(printed, ["33.3%", "33.3%", "33.3%"]);
+        let gap = margin_points(&data, ci, 0, 1).unwrap();
+        assert_eq!(gap.render(Style::Text), "0.0 points");
     }
 
     #[test]
