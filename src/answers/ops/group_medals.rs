@@ -1,7 +1,7 @@
 //! `group_medals`: a team's or delegation's award count and its place in the
 //! medal table.
 
-use super::support::{medal_facts, medal_table, rank_value};
+use super::support::{awards_still_open, medal_facts, medal_table, rank_value};
 use super::*;
 
 pub static SPEC: OpSpec = OpSpec {
@@ -24,9 +24,10 @@ pub static SPEC: OpSpec = OpSpec {
                 "breakdown",
                 "rank",
                 "shared_with",
+                "still_open",
             ],
         ),
-        answered("none", &["name"]),
+        answered("none", &["name", "still_open"]),
     ],
     run,
 };
@@ -37,7 +38,9 @@ fn run(input: &OpInput) -> OpOutput {
         return OpOutput::done("none", Facts::new(), vec![]);
     };
     let mentioned = vec![EntityRef::Group(gi)];
-    let mut f = Facts::new().set("name", data.groups[gi].name.as_str());
+    let mut f = Facts::new()
+        .set("name", data.groups[gi].name.as_str())
+        .set("still_open", Value::Int(awards_still_open(data) as i64));
     let table = medal_table(data);
     let Some(row) = table.iter().find(|r| r.group == gi) else {
         return OpOutput::done("none", f, mentioned);

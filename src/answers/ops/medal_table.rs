@@ -23,9 +23,10 @@ pub static SPEC: OpSpec = OpSpec {
                 "leaders_count",
                 "top",
                 "shown",
+                "still_open",
             ],
         ),
-        no_data("empty", &[]),
+        no_data("empty", &["still_open"]),
     ],
     run,
 };
@@ -54,8 +55,9 @@ fn run(input: &OpInput) -> OpOutput {
             };
         }
     }
+    let still_open = Value::Int(super::support::awards_still_open(data) as i64);
     if table.is_empty() {
-        return OpOutput::done("empty", Facts::new(), vec![]);
+        return OpOutput::done("empty", Facts::new().set("still_open", still_open), vec![]);
     }
     let n = match input.slots.get("count") {
         Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
@@ -66,7 +68,7 @@ fn run(input: &OpInput) -> OpOutput {
             .unwrap_or(DEFAULT_ROWS),
     };
     let leaders: Vec<&MedalRow> = table.iter().filter(|r| r.rank == 1).collect();
-    let mut f = Facts::new();
+    let mut f = Facts::new().set("still_open", still_open);
     f.put(
         "leader",
         Value::List(

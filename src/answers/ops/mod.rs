@@ -17,9 +17,11 @@ mod head_to_head;
 mod leader;
 mod medal_table;
 mod next_for;
+mod open_contests;
 mod podium;
 mod profile;
 mod result;
+mod standings;
 pub mod support;
 
 use std::collections::{BTreeMap, HashMap};
@@ -332,6 +334,8 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &leader::SPEC,
     &head_to_head::SPEC,
     &best_mark::SPEC,
+    &standings::SPEC,
+    &open_contests::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,

@@ -1,0 +1,101 @@
+//! `open_contests`: which contests are still open — under way now, or not
+//! started — and how many are decided: "what's on right now?" at a games,
+//! "which races are still open?" on an election night.
+
+use super::support::{counted_value, when_value};
+use super::*;
+use crate::answers::value::Style;
+use crate::dataset::Status;
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "open_contests",
+    summary: "which contests are under way or still to come",
+    params: &[Param {
+        name: "sport",
+        kind: EntityKind::Sport,
+        required: false,
+    }],
+    outcomes: &[
+        answered(
+            "open",
+            &[
+                "live",
+                "live_count",
+                "upcoming",
+                "upcoming_count",
+                "next",
+                "decided_count",
+                "sport_name",
+            ],
+        ),
+        answered("all_over", &["decided_count", "sport_name"]),
+    ],
+    run,
+};
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let sport = match input.entity("sport") {
+        Some(EntityRef::Sport(s)) => Some(s),
+        _ => None,
+    };
+    let mut f = Facts::new();
+    if let Some(s) = sport {
+        f.put("sport_name", data.sports[s].name.as_str());
+    }
+    let of = |status: Status| -> Vec<usize> {
+        let mut v: Vec<usize> = (0..data.contests.len())
+            .filter(|&c| data.contests[c].status == status)
+            .filter(|&c| sport.is_none_or(|s| data.sport(&data.contests[c].sport) == Some(s)))
+            .collect();
+        v.sort_by(|&a, &b| {
+            data.facts[a]
+                .start
+                .timestamp()
+                .cmp(&data.facts[b].start.timestamp())
+                .then_with(|| data.contest_name(a).cmp(&data.contest_name(b)))
+        });
+        v
+    };
+    let live = of(Status::Live);
+    let upcoming = of(Status::Scheduled);
+    let decided = of(Status::Final);
+    f.put("decided_count", Value::Int(decided.len() as i64));
+    if live.is_empty() && upcoming.is_empty() {
+        return OpOutput::done("all_over", f, vec![]);
+    }
+    let live_items: Vec<Value> = live
+        .iter()
+        .map(|&c| {
+            let name = data.contest_name(c);
+            match data.contests[c].counted {
+                Some(n) => {
+                    let pct = counted_value(n);
+                    Value::Dual {
+                        text: format!("{name} ({} counted)", pct.render(Style::Text)),
+                        spoken: format!("{name}, {} counted", pct.render(Style::Spoken)),
+                    }
+                }
+                None => Value::Text(name),
+            }
+        })
+        .collect();
+    let upcoming_items: Vec<Value> = upcoming
+        .iter()
+        .map(|&c| Value::Text(data.contest_name(c)))
+        .collect();
+    f.put("live_count", Value::Int(live.len() as i64));
+    f.put("live", Value::List(live_items));
+    f.put("upcoming_count", Value::Int(upcoming.len() as i64));
+    f.put("upcoming", Value::List(upcoming_items));
+    if let Some(&c) = upcoming.first() {
+        let when = when_value(&data.facts[c].start, input.now);
+        f.put("next", Value::Text(data.contest_name(c)).then(" ", &when));
+    }
+    let mentioned = live
+        .iter()
+        .chain(upcoming.iter())
+        .map(|&c| EntityRef::Contest(c))
+        .collect();
+    OpOutput::done("open", f, mentioned)
+}

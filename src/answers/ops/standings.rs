@@ -1,0 +1,154 @@
+//! `standings`: the full order of one contest, place by place, with each
+//! mark (and, for a vote count, each share of the votes counted) — the
+//! results table for an event or for one ward on an election night.
+
+use super::support::{
+    entry_value, mark_value, percent_value, placed, staleness, status_phrase, updated_value,
+    vote_facts, vote_shares, when_value,
+};
+use super::*;
+use crate::answers::value::Style;
+use crate::answers::words;
+use crate::dataset::{EntryStatus, Status};
+
+pub static SPEC: OpSpec = OpSpec {
+    name: "standings",
+    summary: "the full results or current standings of a contest",
+    params: &[
+        Param {
+            name: "contest",
+            kind: EntityKind::Contest,
+            required: true,
+        },
+        Param {
+            name: "count",
+            kind: EntityKind::Count,
+            required: false,
+        },
+    ],
+    outcomes: &[
+        answered(
+            "final",
+            &["contest_name", "rows", "shown", "placed", "out", "counted"],
+        ),
+        // Standings while the contest is under way are an answer too.
+        answered(
+            "live",
+            &[
+                "contest_name",
+                "rows",
+                "shown",
+                "placed",
+                "out",
+                "counted",
+                "updated",
+                "stale",
+            ],
+        ),
+        no_data("scheduled", &["contest_name", "start"]),
+        no_data("no_result", &["contest_name"]),
+    ],
+    run,
+};
+
+/// How many places to list when neither the reader nor the intent's
+/// `settings.rows` says.
+const DEFAULT_ROWS: usize = 10;
+
+fn run(input: &OpInput) -> OpOutput {
+    let data = input.data;
+    let Some(ci) = input.contest("contest") else {
+        return OpOutput::done("no_result", Facts::new(), vec![]);
+    };
+    let c = &data.contests[ci];
+    let me = EntityRef::Contest(ci);
+    let mut f = Facts::new().set("contest_name", data.contest_name(ci));
+    if c.status == Status::Scheduled {
+        f.put("start", when_value(&data.facts[ci].start, input.now));
+        return OpOutput::done("scheduled", f, vec![me]);
+    }
+    let order = placed(c);
+    if order.is_empty() {
+        return OpOutput::done("no_result", f, vec![me]);
+    }
+    let n = match input.slots.get("count") {
+        Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
+        _ => input
+            .settings
+            .get("rows")
+            .and_then(|s| s.parse().ok())
+            .unwrap_or(DEFAULT_ROWS),
+    };
+    // Like the medal table, a cut never splits a shared place.
+    let cutoff = c.entries[order[n.min(order.len()) - 1]].place;
+    let shown: Vec<usize> = order
+        .iter()
+        .copied()
+        .filter(|&i| c.entries[i].place <= cutoff)
+        .collect();
+    let shares = vote_shares(data, ci);
+    let rows: Vec<Value> = shown
+        .iter()
+        .map(|&i| {
+            let e = &c.entries[i];
+            let place = e.place.unwrap_or_default() as u64;
+            let who = entry_value(data, e);
+            let mark = mark_value(data, ci, i);
+            let share = shares.as_ref().and_then(|s| s[i]).map(percent_value);
+            // Written "1. Name (Party) 698 votes (45.1%)"; spoken "first,
+            // Name of Party, six hundred and ninety-eight votes, forty-five
+            // point one per cent" (brackets are not heard).
+            let mut text = format!("{place}. {}", who.render(Style::Text));
+            let mut spoken = format!("{}, {}", words::ordinal(place), who.render(Style::Spoken));
+            if let Some(m) = &mark {
+                text.push_str(&format!(" {}", m.render(Style::Text)));
+                spoken.push_str(&format!(", {}", m.render(Style::Spoken)));
+            }
+            if let Some(s) = &share {
+                text.push_str(&format!(" ({})", s.render(Style::Text)));
+                spoken.push_str(&format!(", {}", s.render(Style::Spoken)));
+            }
+            Value::Dual { text, spoken }
+        })
+        .collect();
+    // Those who did not finish, start or stand, so the table is complete.
+    let out: Vec<Value> = c
+        .entries
+        .iter()
+        .filter(|e| e.status != EntryStatus::Ok)
+        .map(|e| {
+            let who = entry_value(data, e);
+            let why = status_phrase(e.status);
+            Value::Dual {
+                text: format!("{} {why}", who.render(Style::Text)),
+                spoken: format!("{} {why}", who.render(Style::Spoken)),
+            }
+        })
+        .collect();
+    f.put("shown", Value::Int(rows.len() as i64));
+    f.put("placed", Value::Int(order.len() as i64));
+    f.put("rows", Value::List(rows));
+    f.put("out", Value::List(out));
+    vote_facts(data, ci, None, &mut f);
+    let mut mentioned = vec![me];
+    mentioned.extend(
+        shown
+            .iter()
+            .filter_map(|&i| super::support::entry_entity(data, &c.entries[i])),
+    );
+    let firsts: Vec<EntityRef> = shown
+        .iter()
+        .filter(|&&i| c.entries[i].place == c.entries[order[0]].place)
+        .filter_map(|&i| super::support::entry_entity(data, &c.entries[i]))
+        .collect();
+    if c.status == Status::Live {
+        if let Some(t) = updated_value(data, ci) {
+            f.put("updated", t);
+        }
+        if let Some(s) = staleness(data, ci, input.now, input.stale_after) {
+            f.put("stale", s);
+        }
+        return OpOutput::done("live", f, mentioned).about(firsts);
+    }
+    OpOutput::done("final", f, mentioned).about(firsts)
+}
