@@ -423,11 +423,17 @@ impl Engine {
     }
 
     /// The current time in the scenario's zone: `--now`, else the
-    /// scenario's own demo clock, else the real time.
+    /// scenario's own demo clock, else the real time. A demo clock never
+    /// runs behind the data: when a replayed batch moves `as_of` past it,
+    /// "now" moves with it, so a result is never reported as coming from
+    /// the future.
     pub fn now(&self, data: &Dataset) -> ZonedDateTime {
         let t = match self.settings.clock {
             Clock::Fixed(t) => t,
-            Clock::System => data.clock.unwrap_or_else(Timestamp::now),
+            Clock::System => data
+                .clock
+                .map(|c| c.max(data.as_of))
+                .unwrap_or_else(Timestamp::now),
         };
         t.to_zoned_datetime(data.tz.clone())
     }

@@ -31,6 +31,14 @@ pub struct Scenario {
     /// What a group is called in this scenario ("delegation", "party").
     #[serde(default = "default_group_noun")]
     pub group_noun: String,
+    /// What one contest is called ("event"; "ward" or "race" on an
+    /// election night), in questions such as "Which ward do you mean?".
+    #[serde(default = "default_contest_noun")]
+    pub contest_noun: String,
+}
+
+fn default_contest_noun() -> String {
+    "event".to_string()
 }
 
 fn default_group_noun() -> String {

@@ -365,7 +365,10 @@ fn ask_choice(
     a: &Analysis,
 ) -> Reply {
     let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
-    let noun = options.first().map(|e| noun_for(*e)).unwrap_or("one");
+    let noun = options
+        .first()
+        .map(|e| noun_for(ctx.data, *e))
+        .unwrap_or("one");
     let mut values = HashMap::new();
     let spoken: Vec<Value> = options
         .iter()
@@ -753,7 +756,16 @@ pub fn describe(data: &Dataset, e: EntityRef) -> String {
                 .unwrap_or("");
             format!("{} ({noun}, {group})", c.name())
         }
-        EntityRef::Contest(i) => format!("the {}", data.contest_name(i)),
+        // "the men's 100 m final", but a contest named like a place is a
+        // proper name: "Ashvenny North".
+        EntityRef::Contest(i) => {
+            let name = data.contest_name(i);
+            if name.starts_with(char::is_uppercase) {
+                name
+            } else {
+                format!("the {name}")
+            }
+        }
         other => data.entity_name(other),
     }
 }
@@ -776,12 +788,14 @@ fn describe_spoken(data: &Dataset, e: EntityRef) -> String {
     }
 }
 
-fn noun_for(e: EntityRef) -> &'static str {
+/// What the options of a "which one?" question are called, in the
+/// scenario's own words ("delegation", "party", "ward").
+fn noun_for(data: &Dataset, e: EntityRef) -> &str {
     match e {
         EntityRef::Competitor(_) => "person",
-        EntityRef::Group(_) => "team",
+        EntityRef::Group(_) => &data.scenario.group_noun,
         EntityRef::Sport(_) => "sport",
-        EntityRef::Discipline(..) | EntityRef::Contest(_) => "event",
+        EntityRef::Discipline(..) | EntityRef::Contest(_) => &data.scenario.contest_noun,
     }
 }
 
