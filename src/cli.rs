@@ -141,6 +141,24 @@ pub enum Command {
         #[arg(long, default_value_t = 50)]
         limit: usize,
     },
+    /// Feed a night's change batches to a running server, in file-name
+    /// order, waiting between them as their `as_of` times say (over
+    /// --speed).
+    Replay {
+        /// The server's address.
+        #[arg(long, env = "TIDINGS_SERVER", default_value = "http://127.0.0.1:8080")]
+        server: String,
+        /// The server's admin token.
+        #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
+        admin_token: String,
+        /// How many times faster than the night itself: 60 plays an hour in
+        /// a minute; 0 sends each batch as soon as the last one is applied.
+        #[arg(long, default_value_t = 60.0)]
+        speed: f64,
+        /// Batch files, or folders of them.
+        #[arg(required = true)]
+        paths: Vec<PathBuf>,
+    },
     /// Run conversation scripts: every turn must show what it says it will.
     Test {
         #[command(flatten)]
@@ -389,6 +407,12 @@ pub async fn run(cli: Cli) -> i32 {
             json,
         } => crate::eval::run_cli(&common, &set, verbose, json).await,
         Command::Test { common, paths } => crate::scripts::run(&common, &paths).await,
+        Command::Replay {
+            server,
+            admin_token,
+            speed,
+            paths,
+        } => crate::replay::run(&server, &admin_token, &paths, speed).await,
         Command::Unanswered {
             redis_url,
             redis_prefix,

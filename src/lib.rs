@@ -20,7 +20,8 @@
 //!   line. [`eval`]: measuring quality on a labelled question set.
 //!   [`scripts`]: editors' conversation scripts (`tidings test`).
 //!   [`watch`]: reloading changed files while serving. [`check`]:
-//!   checking editors' files (`tidings check PATHS`).
+//!   checking editors' files (`tidings check PATHS`). [`replay`]: feeding
+//!   a night's change batches to a running server (`tidings replay`).
 //!
 //! # Quick example
 //!
@@ -49,6 +50,7 @@ pub mod dialogue;
 pub mod engine;
 pub mod eval;
 pub mod http;
+pub mod replay;
 pub mod scripts;
 pub mod understand;
 pub mod watch;
