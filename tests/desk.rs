@@ -364,6 +364,53 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     assert_eq!(turn["quick"], json!([]), "voice offers no buttons");
     screenshot(&c, "voice").await;
 
+    // On SMS: a clarifying question with its segment fit, and its options
+    // as buttons; choosing one answers it.
+    c.find(Locator::Id("channel"))
+        .await
+        .unwrap()
+        .select_by_value("sms")
+        .await
+        .unwrap();
+    let unclear = "where is Zoe from?";
+    let api = ask_api(&http, &base, "sms", unclear).await;
+    assert_eq!(api["outcome"], "clarify", "{api}");
+    let turn = ask(&c, unclear).await;
+    assert_eq!(turn["state"], "done", "{turn}");
+    assert_eq!(turn["channel"], "sms");
+    assert_eq!(turn["reply"], api["text"]);
+    let fit = turn["sms"].as_str().expect("the SMS fit is shown");
+    let units = format!("{} of {} units", api["sms"]["units"], api["sms"]["limit"]);
+    assert!(
+        fit.contains(api["sms"]["encoding"].as_str().unwrap()) && fit.contains(&units),
+        "{fit}"
+    );
+    let offered: Vec<Value> = api["options"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|o| o["text"].clone())
+        .collect();
+    assert!(offered.len() >= 2, "{api}");
+    assert_eq!(turn["options"], Value::Array(offered.clone()));
+    assert!(text_of(&c, "u-outcome").await.starts_with("clarify"));
+    let before = turns(&c).await;
+    c.find(Locator::Css(
+        "#transcript .turn:last-of-type .options button:nth-child(2)",
+    ))
+    .await
+    .unwrap()
+    .click()
+    .await
+    .unwrap();
+    let turn = settled_turn(&c, before).await;
+    assert_eq!(turn["state"], "done", "{turn}");
+    assert_eq!(turn["question"], offered[1]);
+    assert!(
+        text_of(&c, "u-outcome").await.starts_with("answered"),
+        "{turn}"
+    );
+
     // An error from the API is shown, not swallowed.
     let too_long = "x".repeat(501);
     let turn = ask(&c, &too_long).await;
@@ -618,6 +665,8 @@ async fn settled_turn(c: &Client, before: u64) -> Value {
                bold_marks_left: (text('.reply-text') || '').includes('**'),\n\
                ssml: text('.ssml'),\n\
                quick: Array.from(t.querySelectorAll('.quick-replies button'), b => b.textContent),\n\
+               options: Array.from(t.querySelectorAll('.options button'), b => b.textContent),\n\
+               sms: text('.sms-info'),\n\
                error: t.dataset.state === 'error' ? text('.reply') : null,\n\
              }};"
         ),
