@@ -16,8 +16,9 @@
 //! - [`dialogue`]: sessions, their stores and one turn of a conversation.
 //! - [`engine`]: the current snapshot, the store and the clock behind one
 //!   entry point, [`engine::Engine::handle`].
-//! - [`http`]: the HTTP API, including the admin API. [`cli`]: the command
-//!   line. [`eval`]: measuring quality on a labelled question set.
+//! - [`http`]: the HTTP API, including the admin API and the editors' desk
+//!   page (`/desk`). [`cli`]: the command line. [`eval`]: measuring
+//!   quality on a labelled question set.
 //!   [`scripts`]: editors' conversation scripts (`tidings test`).
 //!   [`watch`]: reloading changed files while serving. [`check`]:
 //!   checking editors' files (`tidings check PATHS`). [`replay`]: feeding

@@ -12,6 +12,10 @@ command -v redis-server >/dev/null 2>&1 || need_pkgs+=(redis-server)
 command -v bzcat >/dev/null 2>&1 || need_pkgs+=(bzip2)
 # eSpeak NG renders voice replies' SSML so tests can measure the audio (tests/speech_tools.rs).
 command -v espeak-ng >/dev/null 2>&1 || need_pkgs+=(espeak-ng)
+# Headless Chromium and its WebDriver server drive the /desk page in a real browser
+# (tests/desk.rs); TIDINGS_CHROMIUM and TIDINGS_CHROMEDRIVER point the test at other copies.
+[ -n "${TIDINGS_CHROMIUM:-}" ] || command -v chromium >/dev/null 2>&1 || need_pkgs+=(chromium)
+[ -n "${TIDINGS_CHROMEDRIVER:-}" ] || command -v chromedriver >/dev/null 2>&1 || need_pkgs+=(chromium-driver)
 if [ ${#need_pkgs[@]} -gt 0 ]; then
   echo "tests/run.sh: installing ${need_pkgs[*]}"
   if [ "$(id -u)" = 0 ]; then SUDO=""; else SUDO="sudo"; fi

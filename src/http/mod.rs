@@ -1,11 +1,13 @@
 //! The HTTP API: `POST /v1/messages`, `DELETE /v1/users/{channel}/{user}`,
 //! `GET /healthz` (the process is up) and `GET /readyz` (and its session
-//! store answers); the admin API ([`admin`]) under `/v1/admin/`.
+//! store answers); the admin API ([`admin`]) under `/v1/admin/`; the
+//! editors' desk page ([`desk`]) at `/desk`.
 //!
 //! Errors come back as `{"error": {"code", "message"}}`; a reader's mistake
 //! is never a 500.
 
 mod admin;
+mod desk;
 mod error;
 
 use std::future::Future;
@@ -169,6 +171,7 @@ pub fn app(engine: Engine) -> Router {
         .route("/healthz", get(healthz))
         .route("/readyz", get(readyz))
         .merge(admin::routes())
+        .merge(desk::routes())
         .fallback(not_found)
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)

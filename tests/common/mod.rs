@@ -255,6 +255,15 @@ impl ServeProcess {
     }
 }
 
+// A test that fails part-way must not leave its server running: the
+// process is killed when the handle goes, whether or not `stop` was called.
+impl Drop for ServeProcess {
+    fn drop(&mut self) {
+        let _ = self.child.kill();
+        let _ = self.child.wait();
+    }
+}
+
 /// A reader's message to a server at `base` (a process of the test's own);
 /// the reply as JSON.
 pub async fn ask_at(
