@@ -79,3 +79,55 @@ fn every_channel_profile_example_in_the_guide_loads() {
     }
     assert!(found >= 1, "the guide shows a channels.yaml");
 }
+
+/// Every operation, each of its outcomes and each fact it fills is
+/// described in the operations reference (section 7), so an editor never
+/// meets a fact the guide does not explain.
+#[test]
+fn every_operation_outcome_and_fact_is_in_the_reference() {
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let guide = std::fs::read_to_string(root.join("docs/intents.md")).unwrap();
+    let start = guide
+        .find("## 7. Operations reference")
+        .expect("section 7 exists");
+    let end = guide[start..].find("\n## 8.").map(|e| start + e).unwrap();
+    let reference = &guide[start..end];
+    let mut missing = Vec::new();
+    for op in tidings::answers::ops::OPERATIONS {
+        // The section of this operation: from its heading to the next one
+        // (the three conversation basics share one heading).
+        let name = format!("`{}`", op.name);
+        let Some(from) = reference
+            .match_indices("\n### ")
+            .map(|(i, _)| i + 1)
+            .find(|&i| reference[i..].lines().next().unwrap_or("").contains(&name))
+        else {
+            missing.push(format!("operation {}", op.name));
+            continue;
+        };
+        let to = reference[from + 4..]
+            .find("\n### ")
+            .map(|e| from + 4 + e)
+            .unwrap_or(reference.len());
+        let section = &reference[from..to];
+        for o in op.outcomes {
+            if !section.contains(&format!("`{}`", o.name)) {
+                missing.push(format!("{}: outcome {}", op.name, o.name));
+            }
+            for fact in o.facts {
+                if !section.contains(&format!("`{fact}`"))
+                    && !reference.contains(&format!("- `{fact}`"))
+                {
+                    missing.push(format!("{}: fact {fact} of outcome {}", op.name, o.name));
+                }
+            }
+        }
+        if !reference.contains(&format!("| `{}` |", op.name)) {
+            missing.push(format!("{}: row of the summary table", op.name));
+        }
+    }
+    assert!(
+        missing.is_empty(),
+        "not in docs/intents.md section 7: {missing:#?}"
+    );
+}
