@@ -231,7 +231,7 @@ async fn quick_replies_are_questions_the_service_answers() {
 }
 
 /// One question per intent, for the snapshots.
-const PER_INTENT: [(&str, &str); 18] = [
+const PER_INTENT: [(&str, &str); 20] = [
     ("podium", "who won the women's 200 m freestyle?"),
     ("medalist", "who got bronze in the men's 400 m?"),
     (
@@ -253,6 +253,8 @@ const PER_INTENT: [(&str, &str); 18] = [
     ("live_leader", "who is leading the men's marathon?"),
     ("head_to_head", "did Lirust Dosavorn beat Bandan Zorvren?"),
     ("best_mark", "what is the best long jump so far?"),
+    ("full_results", "full results of the women's 400 m"),
+    ("under_way", "what's on right now?"),
     ("greeting", "hello"),
     ("thanks", "thanks"),
     ("help", "what can you do?"),
