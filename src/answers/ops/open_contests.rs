@@ -99,3 +99,72 @@ fn run(input: &OpInput) -> OpOutput {
         .collect();
     OpOutput::done("open", f, mentioned)
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::dataset::Dataset;
+    use std::collections::BTreeMap;
+
+    fn demo() -> Dataset {
+        crate::engine::load(&crate::engine::Sources::default())
+            .expect("the demo loads")
+            .data
+    }
+
+    fn facts(data: &Dataset, slots: &Slots) -> (&'static str, HashMap<String, Value>) {
+        let now = data.clock.unwrap().to_zoned_datetime(data.tz.clone());
+        match run(&OpInput {
+            data,
+            slots,
+            now: &now,
+            settings: &BTreeMap::new(),
+            topics: &[],
+            stale_after: std::time::Duration::from_secs(600),
+        }) {
+            OpOutput::Done { outcome, facts, .. } => (outcome, facts),
+            other => panic!("{other:?}"),
+        }
+    }
+
+    #[test]
+    fn lists_what_is_under_way_and_counts_the_rest() {
+        let d = demo();
+        let (outcome, f) = facts(&d, &Slots::new());
+        assert_eq!(outcome, "open");
+        let live = f["live"].render(Style::Text);
+        for c in d.contests.iter().filter(|c| c.status == Status::Live) {
+            let ci = d.contests.iter().position(|x| x.id == c.id).unwrap();
+            assert!(live.contains(&d.contest_name(ci)), "{live}");
+        }
+        let count = |s: Status| d.contests.iter().filter(|c| c.status == s).count() as i64;
+        assert_eq!(f["live_count"], Value::Int(count(Status::Live)));
+        assert_eq!(f["upcoming_count"], Value::Int(count(Status::Scheduled)));
+        assert_eq!(f["decided_count"], Value::Int(count(Status::Final)));
+        // The next to start is the scheduled contest with the earliest start.
+        assert!(f["next"]
+            .render(Style::Text)
+            .starts_with("women's 400 m individual medley tomorrow"));
+    }
+
+    #[test]
+    fn every_contest_over_is_all_over() {
+        let d = demo();
+        let mut r = crate::dataset::changes::Records::of(&d);
+        for c in r.contests.iter_mut().filter(|c| c.status != Status::Final) {
+            // Nothing placed: a contest can be over with no result kept.
+            c.status = Status::Final;
+            for e in c.entries.iter_mut() {
+                e.place = None;
+                e.mark = None;
+                e.award = None;
+            }
+        }
+        let Ok(d) = r.build(2) else {
+            panic!("the records load")
+        };
+        let (outcome, f) = facts(&d, &Slots::new());
+        assert_eq!(outcome, "all_over");
+        assert_eq!(f["decided_count"], Value::Int(d.contests.len() as i64));
+    }
+}

@@ -152,3 +152,115 @@ fn run(input: &OpInput) -> OpOutput {
     }
     OpOutput::done("final", f, mentioned).about(firsts)
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::answers::value::Style;
+    use crate::dataset::Dataset;
+    use std::collections::BTreeMap;
+
+    fn demo() -> Dataset {
+        crate::engine::load(&crate::engine::Sources::default())
+            .expect("the demo loads")
+            .data
+    }
+
+    fn run_on(data: &Dataset, contest: &str, count: Option<u32>) -> OpOutput {
+        let ci = data.contests.iter().position(|c| c.id == contest).unwrap();
+        let mut slots = Slots::new();
+        slots.insert(
+            "contest".into(),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        );
+        if let Some(n) = count {
+            slots.insert("count".into(), SlotValue::Count { value: n });
+        }
+        let now = jiff::Timestamp::from_second(1_818_180_000)
+            .unwrap()
+            .to_zoned_datetime(data.tz.clone());
+        run(&OpInput {
+            data,
+            slots: &slots,
+            now: &now,
+            settings: &BTreeMap::new(),
+            topics: &[],
+            stale_after: std::time::Duration::from_secs(600),
+        })
+    }
+
+    fn text(out: &OpOutput, fact: &str) -> (String, String) {
+        match out {
+            OpOutput::Done { facts, .. } => {
+                let v = &facts[fact];
+                (v.render(Style::Text), v.render(Style::Spoken))
+            }
+            other => panic!("expected facts, got {other:?}"),
+        }
+    }
+
+    fn outcome(out: &OpOutput) -> &str {
+        match out {
+            OpOutput::Done { outcome, .. } => outcome,
+            other => panic!("expected an outcome, got {other:?}"),
+        }
+    }
+
+    #[test]
+    fn a_final_lists_every_place_and_who_did_not_finish() {
+        let d = demo();
+        let out = run_on(&d, "ath-w-400m-final", None);
+        assert_eq!(outcome(&out), "final");
+        let (rows, spoken) = text(&out, "rows");
+        assert!(
+            rows.starts_with("1. Rasaline Rentenert (Halvorne) 49.96 s, 2. "),
+            "{rows}"
+        );
+        assert!(
+            rows.ends_with("7. Deline Stesseroy (Sordavia) 50.88 s"),
+            "{rows}"
+        );
+        assert!(
+            spoken.starts_with(
+                "first, Rasaline Rentenert of Halvorne, forty-nine point nine six seconds"
+            ),
+            "{spoken}"
+        );
+        assert_eq!(
+            text(&out, "out").0,
+            "Drada Brorrorn (Tolmerin) was disqualified"
+        );
+        assert_eq!(text(&out, "placed").0, "seven");
+    }
+
+    #[test]
+    fn a_count_from_the_reader_limits_the_rows() {
+        let d = demo();
+        let out = run_on(&d, "ath-w-long-jump-final", Some(2));
+        let (rows, _) = text(&out, "rows");
+        assert_eq!(
+            rows,
+            "1. Sondora Hervoveth (Sordavia) 6.95 m and 2. Tuthette Brossayne (Halvorne) 6.92 m"
+        );
+    }
+
+    #[test]
+    fn live_and_scheduled_contests() {
+        let d = demo();
+        let live = run_on(&d, "ath-m-marathon-final", None);
+        assert_eq!(outcome(&live), "live");
+        assert!(text(&live, "rows")
+            .0
+            .starts_with("1. Banel Morressi (Kalvenmark) 1:59:32"));
+        let sched = d
+            .contests
+            .iter()
+            .find(|c| c.status == Status::Scheduled)
+            .unwrap()
+            .id
+            .clone();
+        assert_eq!(outcome(&run_on(&d, &sched, None)), "scheduled");
+    }
+}
