@@ -438,6 +438,57 @@ async fn check_moment(
     }
 }
 
+/// The same questions on the SMS and voice channels: one SMS segment by
+/// 3GPP TS 23.038, and a valid SSML 1.1 document whose spoken text has no
+/// figure or symbol a speech engine would read oddly.
+async fn check_channels(client: &reqwest::Client, base: &str, moment: &str) {
+    const QUESTIONS: [&str; 9] = [
+        "who is leading in Marrowby?",
+        "how close is it in Brindle Quay?",
+        "which races are still open?",
+        "seats so far",
+        "how many seats have the Greens won?",
+        "results in Lanmouth",
+        "how much is counted in Caddenmill?",
+        "who won Fennick Green?",
+        "who is leading in Ashvenny?",
+    ];
+    for q in QUESTIONS {
+        for channel in ["sms", "voice"] {
+            let r: Value = client
+                .post(format!("{base}/v1/messages"))
+                .json(&serde_json::json!({
+                    "user": format!("{channel}-{moment}"), "text": q, "channel": channel
+                }))
+                .send()
+                .await
+                .unwrap()
+                .json()
+                .await
+                .unwrap();
+            let t = text(&r);
+            assert!(!t.is_empty(), "{moment}: {channel}: {q}: {r}");
+            if channel == "sms" {
+                let (units, limit) = (&r["sms"]["units"], &r["sms"]["limit"]);
+                assert!(
+                    units.as_u64().unwrap() <= limit.as_u64().unwrap(),
+                    "{moment}: {q}: {units} of {limit}: {t}"
+                );
+            } else {
+                let doc = r["ssml"].as_str().expect("voice replies carry SSML");
+                if let Err(e) = common::speech::check_ssml(doc) {
+                    panic!("{moment}: {q}: {e}\n{doc}");
+                }
+                let odd: Vec<char> = t
+                    .chars()
+                    .filter(|c| "()[]{}<>*#/\\|_~^@&%\"".contains(*c) || c.is_ascii_digit())
+                    .collect();
+                assert!(odd.is_empty(), "{moment}: {q}: {t:?} has {odd:?}");
+            }
+        }
+    }
+}
+
 #[tokio::test(flavor = "multi_thread", worker_threads = 2)]
 async fn the_election_night_replayed_answers_from_each_moment() {
     let data = root().join("dataset-demo/election");
@@ -473,6 +524,7 @@ async fn the_election_night_replayed_answers_from_each_moment() {
         }
         let moment = format!("moment {k} (after {done} batches)");
         check_moment(&client, &server.base, &truth, 1 + done as u64, &moment).await;
+        check_channels(&client, &server.base, &moment).await;
     }
 
     // The night ends with every race called and every seat filled.

@@ -70,8 +70,7 @@ pub fn realise(
                 profile,
                 &drop_asides(&render_text(profile, template, values, freshness, shortest)),
             );
-            profile
-                .fits(&no_asides)
+            (!no_asides.trim().is_empty() && profile.fits(&no_asides))
                 .then(|| from_text(profile, no_asides))
         })
     };
@@ -148,7 +147,9 @@ fn realise_fitting(
             continue;
         }
         let text = render_text(profile, template, values, freshness, c);
-        if !profile.fits(&text) {
+        // Wording made only of optional parts can drop to nothing, which
+        // "fits" every channel but says nothing: never an answer.
+        if text.trim().is_empty() || !profile.fits(&text) {
             continue;
         }
         let ssml = profile.ssml.then(|| {
@@ -363,6 +364,27 @@ mod tests {
             sms.text,
             "Pevelle Cosevmont (Vastrelia) won the women's 100 m freestyle."
         );
+        assert!(sms::measure(&sms.text).fits_one_segment());
+    }
+
+    #[test]
+    fn wording_of_optional_parts_only_never_fits_as_nothing() {
+        let c = Channels::built_in();
+        let t = Template::parse("[Counting: {live|and}. ][Not started: {later|and}.]").unwrap();
+        let many: Vec<Value> = (1..=12)
+            .map(|i| Value::Text(format!("Ward number {i} (50% counted)")))
+            .collect();
+        let v = vals(&[
+            ("live", Value::List(many)),
+            ("later", Value::List(vec!["Quellan Cross".into()])),
+        ]);
+        let sms = realise(c.get("sms").unwrap(), &t, &v, None);
+        assert!(
+            sms.text.starts_with("Counting: Ward number 1"),
+            "{}",
+            sms.text
+        );
+        assert!(sms.text.contains("more"), "{}", sms.text);
         assert!(sms::measure(&sms.text).fits_one_segment());
     }
 
