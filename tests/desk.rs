@@ -676,16 +676,14 @@ async fn settled_turn(c: &Client, before: u64) -> Value {
 
 /// Asks the API directly, as a reader of its own on `channel`.
 async fn ask_api(http: &reqwest::Client, base: &str, channel: &str, text: &str) -> Value {
-    let r = http
-        .post(format!("{base}/v1/messages"))
-        .json(
-            &json!({"user": format!("desk-test-api-{channel}"), "channel": channel, "text": text}),
-        )
-        .send()
-        .await
-        .unwrap();
-    assert_eq!(r.status(), 200);
-    r.json().await.unwrap()
+    common::ask_on(
+        http,
+        base,
+        &format!("desk-test-api-{channel}"),
+        text,
+        channel,
+    )
+    .await
 }
 
 /// Saves a screenshot under `target/desk-test/` and checks that it renders:

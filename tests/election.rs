@@ -11,7 +11,7 @@ use std::path::{Path, PathBuf};
 use std::process::Command;
 use std::time::{Duration, Instant};
 
-use common::{ask_at, ServeProcess};
+use common::{ask_at, ask_on, ServeProcess};
 use serde_json::Value;
 
 const TOKEN: &str = "election-night-token-0123456789";
@@ -178,7 +178,7 @@ fn thousands(n: u64) -> String {
     let s = n.to_string();
     let mut out = String::new();
     for (i, c) in s.chars().enumerate() {
-        if i > 0 && (s.len() - i) % 3 == 0 {
+        if i > 0 && (s.len() - i).is_multiple_of(3) {
             out.push(',');
         }
         out.push(c);
@@ -210,6 +210,23 @@ fn share(votes: u64, total: u64) -> String {
 /// How much is counted, in whole per cent rounded down: "60%".
 fn counted(c: f64) -> String {
     format!("{}%", (c * 100.0 + 1e-9).floor() as u64)
+}
+
+/// A `tidings serve` of the test's own on the election scenario, at the
+/// start of the night, with the admin API on.
+fn election_server() -> ServeProcess {
+    let data = root().join("dataset-demo/election");
+    let intents = root().join("intents/election");
+    ServeProcess::start(
+        env!("CARGO_BIN_EXE_tidings"),
+        &[
+            "--data",
+            data.to_str().unwrap(),
+            "--intents",
+            intents.to_str().unwrap(),
+        ],
+        &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
+    )
 }
 
 fn text(reply: &Value) -> &str {
@@ -455,17 +472,7 @@ async fn check_channels(client: &reqwest::Client, base: &str, moment: &str) {
     ];
     for q in QUESTIONS {
         for channel in ["sms", "voice"] {
-            let r: Value = client
-                .post(format!("{base}/v1/messages"))
-                .json(&serde_json::json!({
-                    "user": format!("{channel}-{moment}"), "text": q, "channel": channel
-                }))
-                .send()
-                .await
-                .unwrap()
-                .json()
-                .await
-                .unwrap();
+            let r = ask_on(client, base, &format!("{channel}-{moment}"), q, channel).await;
             let t = text(&r);
             assert!(!t.is_empty(), "{moment}: {channel}: {q}: {r}");
             if channel == "sms" {
@@ -491,18 +498,7 @@ async fn check_channels(client: &reqwest::Client, base: &str, moment: &str) {
 
 #[tokio::test(flavor = "multi_thread", worker_threads = 2)]
 async fn the_election_night_replayed_answers_from_each_moment() {
-    let data = root().join("dataset-demo/election");
-    let intents = root().join("intents/election");
-    let server = ServeProcess::start(
-        env!("CARGO_BIN_EXE_tidings"),
-        &[
-            "--data",
-            data.to_str().unwrap(),
-            "--intents",
-            intents.to_str().unwrap(),
-        ],
-        &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
-    );
+    let server = election_server();
     let client = reqwest::Client::new();
     let files = batch_files();
     assert!(files.len() >= 15, "the night has {} batches", files.len());
@@ -538,18 +534,7 @@ async fn the_election_night_replayed_answers_from_each_moment() {
 
 #[tokio::test(flavor = "multi_thread", worker_threads = 2)]
 async fn the_replay_keeps_time_and_stops_at_a_refused_batch() {
-    let data = root().join("dataset-demo/election");
-    let intents = root().join("intents/election");
-    let server = ServeProcess::start(
-        env!("CARGO_BIN_EXE_tidings"),
-        &[
-            "--data",
-            data.to_str().unwrap(),
-            "--intents",
-            intents.to_str().unwrap(),
-        ],
-        &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
-    );
+    let server = election_server();
     let files = batch_files();
     // Two batches 15 minutes of night apart, at 1,800 times the pace: the
     // second waits half a second.

@@ -255,12 +255,7 @@ fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProbl
 #[cfg(test)]
 mod tests {
     use super::*;
-
-    fn demo() -> Dataset {
-        crate::engine::load(&crate::engine::Sources::default())
-            .expect("the demo loads")
-            .data
-    }
+    use crate::dataset::demo;
 
     fn batch(json: &str) -> Batch {
         serde_json::from_str(json).expect("the batch parses")

@@ -185,3 +185,11 @@ impl Dataset {
         &self.scenario.awards
     }
 }
+
+/// The built-in demo games, for unit tests across the crate.
+#[cfg(test)]
+pub(crate) fn demo() -> Dataset {
+    crate::engine::load(&crate::engine::Sources::default())
+        .expect("the demo loads")
+        .data
+}

@@ -264,6 +264,25 @@ impl Drop for ServeProcess {
     }
 }
 
+/// A reader's message on a channel to a server at `base`; the reply as
+/// JSON, after checking the status is 200.
+pub async fn ask_on(
+    client: &reqwest::Client,
+    base: &str,
+    user: &str,
+    text: &str,
+    channel: &str,
+) -> serde_json::Value {
+    let r = client
+        .post(format!("{base}/v1/messages"))
+        .json(&serde_json::json!({"user": user, "text": text, "channel": channel}))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 200, "{text:?} on {channel}");
+    r.json().await.unwrap()
+}
+
 /// A reader's message to a server at `base` (a process of the test's own);
 /// the reply as JSON.
 pub async fn ask_at(

@@ -59,14 +59,7 @@ fn run(input: &OpInput) -> OpOutput {
     if table.is_empty() {
         return OpOutput::done("empty", Facts::new().set("still_open", still_open), vec![]);
     }
-    let n = match input.slots.get("count") {
-        Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
-        _ => input
-            .settings
-            .get("rows")
-            .and_then(|s| s.parse().ok())
-            .unwrap_or(DEFAULT_ROWS),
-    };
+    let n = input.rows(DEFAULT_ROWS);
     let leaders: Vec<&MedalRow> = table.iter().filter(|r| r.rank == 1).collect();
     let mut f = Facts::new().set("still_open", still_open);
     f.put(

@@ -103,14 +103,9 @@ fn run(input: &OpInput) -> OpOutput {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::dataset::demo;
     use crate::dataset::Dataset;
     use std::collections::BTreeMap;
-
-    fn demo() -> Dataset {
-        crate::engine::load(&crate::engine::Sources::default())
-            .expect("the demo loads")
-            .data
-    }
 
     fn facts(data: &Dataset, slots: &Slots) -> (&'static str, HashMap<String, Value>) {
         let now = data.clock.unwrap().to_zoned_datetime(data.tz.clone());

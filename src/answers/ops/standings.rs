@@ -71,14 +71,7 @@ fn run(input: &OpInput) -> OpOutput {
     if order.is_empty() {
         return OpOutput::done("no_result", f, vec![me]);
     }
-    let n = match input.slots.get("count") {
-        Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
-        _ => input
-            .settings
-            .get("rows")
-            .and_then(|s| s.parse().ok())
-            .unwrap_or(DEFAULT_ROWS),
-    };
+    let n = input.rows(DEFAULT_ROWS);
     // Like the medal table, a cut never splits a shared place.
     let cutoff = c.entries[order[n.min(order.len()) - 1]].place;
     let shown: Vec<usize> = order
@@ -157,14 +150,9 @@ fn run(input: &OpInput) -> OpOutput {
 mod tests {
     use super::*;
     use crate::answers::value::Style;
+    use crate::dataset::demo;
     use crate::dataset::Dataset;
     use std::collections::BTreeMap;
-
-    fn demo() -> Dataset {
-        crate::engine::load(&crate::engine::Sources::default())
-            .expect("the demo loads")
-            .data
-    }
 
     fn run_on(data: &Dataset, contest: &str, count: Option<u32>) -> OpOutput {
         let ci = data.contests.iter().position(|c| c.id == contest).unwrap();
