@@ -320,25 +320,17 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     // A quick reply sends itself.
     let quick = api["quick_replies"][0].as_str().unwrap().to_string();
     let before = turns(&c).await;
-    c.find(Locator::Css(
-        "#transcript .turn:last-of-type .quick-replies button",
-    ))
-    .await
-    .unwrap()
-    .click()
-    .await
-    .unwrap();
+    click(
+        &c,
+        Locator::Css("#transcript .turn:last-of-type .quick-replies button"),
+    )
+    .await;
     let turn = settled_turn(&c, before).await;
     assert_eq!(turn["state"], "done", "{turn}");
     assert_eq!(turn["question"], quick);
 
     // On voice: spoken words and the SSML document, shown as text.
-    c.find(Locator::Id("channel"))
-        .await
-        .unwrap()
-        .select_by_value("voice")
-        .await
-        .unwrap();
+    choose_channel(&c, "voice").await;
     wait_js(
         &c,
         "the note that voice is a conversation of its own",
@@ -366,12 +358,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 
     // On SMS: a clarifying question with its segment fit, and its options
     // as buttons; choosing one answers it.
-    c.find(Locator::Id("channel"))
-        .await
-        .unwrap()
-        .select_by_value("sms")
-        .await
-        .unwrap();
+    choose_channel(&c, "sms").await;
     let unclear = "where is Zoe from?";
     let api = ask_api(&http, &base, "sms", unclear).await;
     assert_eq!(api["outcome"], "clarify", "{api}");
@@ -395,14 +382,11 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     assert_eq!(turn["options"], Value::Array(offered.clone()));
     assert!(text_of(&c, "u-outcome").await.starts_with("clarify"));
     let before = turns(&c).await;
-    c.find(Locator::Css(
-        "#transcript .turn:last-of-type .options button:nth-child(2)",
-    ))
-    .await
-    .unwrap()
-    .click()
-    .await
-    .unwrap();
+    click(
+        &c,
+        Locator::Css("#transcript .turn:last-of-type .options button:nth-child(2)"),
+    )
+    .await;
     let turn = settled_turn(&c, before).await;
     assert_eq!(turn["state"], "done", "{turn}");
     assert_eq!(turn["question"], offered[1]);
@@ -439,12 +423,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 
     // A new conversation: a new reader id and an empty page.
     let reader = text_of(&c, "reader-id").await;
-    c.find(Locator::Id("new-conversation"))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+    click(&c, Locator::Id("new-conversation")).await;
     let fresh = text_of(&c, "reader-id").await;
     assert!(
         fresh.starts_with("desk-") && fresh != reader,
@@ -458,12 +437,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 
     // The unanswered list: a wrong token is refused, the right one lists
     // the nonsense (noted in the background, so it may take a moment).
-    c.find(Locator::Id("tab-unanswered"))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+    click(&c, Locator::Id("tab-unanswered")).await;
     wait_js(
         &c,
         "the unanswered view",
@@ -472,12 +446,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     .await;
     let token = c.find(Locator::Id("admin-token")).await.unwrap();
     token.send_keys("not-the-token").await.unwrap();
-    c.find(Locator::Id("unanswered-load"))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+    click(&c, Locator::Id("unanswered-load")).await;
     let refused = wait_js(
         &c,
         "the wrong token's error",
@@ -503,12 +472,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     token.send_keys(TOKEN).await.unwrap();
     let deadline = Instant::now() + PATIENCE;
     let rows = loop {
-        c.find(Locator::Id("unanswered-load"))
-            .await
-            .unwrap()
-            .click()
-            .await
-            .unwrap();
+        click(&c, Locator::Id("unanswered-load")).await;
         wait_js(
             &c,
             "the list to load",
@@ -546,18 +510,8 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 
     // A server without an admin token: the page says the admin API is off.
     c.goto(&format!("{closed_base}/desk")).await.unwrap();
-    c.find(Locator::Id("tab-unanswered"))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
-    c.find(Locator::Id("unanswered-load"))
-        .await
-        .unwrap()
-        .click()
-        .await
-        .unwrap();
+    click(&c, Locator::Id("tab-unanswered")).await;
+    click(&c, Locator::Id("unanswered-load")).await;
     let off = wait_js(
         &c,
         "the admin-off message",
@@ -573,6 +527,21 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 }
 
 /// Runs a script in the page and returns its value.
+/// Clicks the element `at` points to.
+async fn click(c: &Client, at: Locator<'_>) {
+    c.find(at).await.unwrap().click().await.unwrap();
+}
+
+/// Picks a channel in the page's selector.
+async fn choose_channel(c: &Client, channel: &str) {
+    c.find(Locator::Id("channel"))
+        .await
+        .unwrap()
+        .select_by_value(channel)
+        .await
+        .unwrap();
+}
+
 async fn js(c: &Client, script: &str) -> Value {
     c.execute(script, vec![])
         .await
