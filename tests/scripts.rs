@@ -33,6 +33,43 @@ fn the_projects_own_scripts_pass() {
     let (code, out) = tidings_test(&["tests/scripts"]);
     assert_eq!(code, 0, "{out}");
     assert!(out.contains("0 failing"), "{out}");
+    // A folder is read one level deep: the election scripts, written for
+    // another scenario, are not played against the games.
+    assert!(!out.contains("election"), "{out}");
+}
+
+/// The election scripts run on the election scenario as loaded, at the
+/// start of the night (its own clock, 22:00 on 6 May: nothing counted yet).
+#[test]
+fn the_election_scripts_pass_on_the_election_scenario() {
+    let (code, out) = tidings_test(&[
+        "--data",
+        "dataset-demo/election",
+        "--intents",
+        "intents/election",
+        "--now",
+        "2027-05-06T22:00:00+01:00",
+        "tests/scripts/election",
+    ]);
+    assert_eq!(code, 0, "{out}");
+    assert!(out.contains("0 failing"), "{out}");
+    let scripts = std::fs::read_dir(
+        std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("tests/scripts/election"),
+    )
+    .unwrap()
+    .filter(|e| {
+        e.as_ref()
+            .unwrap()
+            .path()
+            .extension()
+            .is_some_and(|x| x == "yaml")
+    })
+    .count();
+    assert!(scripts >= 2, "the election scripts are there: {scripts}");
+    assert!(
+        out.contains(&format!("{scripts} script(s)")),
+        "every election script ran: {out}"
+    );
 }
 
 #[test]
