@@ -18,7 +18,7 @@ const SHARED_POLL_MS: u64 = 200;
 
 /// How often `--watch` looks at the files.
 const WATCH_POLL_MS: u64 = 500;
-use crate::engine::{self, Clock, Engine, Settings, Sources};
+use crate::engine::{self, Clock, Engine, Settings, Snapshot, Sources};
 
 /// Answers readers' questions about results data.
 #[derive(Debug, Parser)]
@@ -40,6 +40,15 @@ pub struct Common {
     /// Fixed current time (RFC 3339), for replays and tests.
     #[arg(long, env = "TIDINGS_NOW", global = true)]
     pub now: Option<String>,
+    /// Change batches to apply to the data before answering (a batch file
+    /// or a folder of them, played in file-name order), so a command
+    /// answers as the service did at that moment of a replayed night.
+    #[arg(long, global = true)]
+    pub replay: Option<PathBuf>,
+    /// With --replay: apply only the batches whose `as_of` is at or before
+    /// this time (RFC 3339).
+    #[arg(long, global = true, requires = "replay")]
+    pub until: Option<String>,
 }
 
 /// Where conversations are kept and for how long.
@@ -228,7 +237,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         // reader's old keys.
         return Err("--redis-url needs TIDINGS_ID_SECRET: set it to a long random value, the same on every replica".into());
     }
-    let snap = engine::load(&sources(c)).map_err(|e| e.to_string())?;
+    let snap = replayed(engine::load(&sources(c)).map_err(|e| e.to_string())?, c)?;
     let settings = Settings {
         clock: clock(&c.now)?,
         session_ttl: Duration::from_secs(o.session_ttl.max(1)),
@@ -247,6 +256,41 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         }
         None => Engine::new(snap, Arc::new(MemoryStore::new()), settings),
     })
+}
+
+/// The loaded scenario with `--replay`'s batches applied in order (up to
+/// `--until`), each checked as the admin API checks it; the first refused
+/// batch stops the command with its problems.
+fn replayed(snap: Snapshot, c: &Common) -> Result<Snapshot, String> {
+    let Some(path) = &c.replay else {
+        return Ok(snap);
+    };
+    let until = match &c.until {
+        None => None,
+        Some(t) => Some(
+            t.parse::<jiff::Timestamp>()
+                .map_err(|e| format!("--until {t:?} is not an RFC 3339 time: {e}"))?,
+        ),
+    };
+    let steps = crate::replay::read_steps(std::slice::from_ref(path)).map_err(|p| p.join("\n"))?;
+    let mut data = snap.data;
+    for step in steps {
+        if let (Some(limit), Some(at)) = (until, step.as_of) {
+            if at > limit {
+                break;
+            }
+        }
+        let batch: crate::dataset::changes::Batch =
+            serde_json::from_str(&step.body).map_err(|e| e.to_string())?;
+        // A batch without its own time keeps the data's.
+        let as_of = data.as_of.to_zoned_datetime(data.tz.clone());
+        let as_of = as_of.strftime("%Y-%m-%dT%H:%M:%S%:z").to_string();
+        data = crate::dataset::changes::apply(&data, &batch, &as_of).map_err(|problems| {
+            let list: Vec<String> = problems.iter().map(|p| p.to_string()).collect();
+            format!("{}: {}", step.path.display(), list.join("; "))
+        })?;
+    }
+    Ok(Snapshot::new(data, snap.catalog))
 }
 
 /// Builds an engine with in-memory sessions.

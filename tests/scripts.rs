@@ -97,3 +97,52 @@ fn a_broken_script_is_located_and_fails_the_run() {
     assert_eq!(code, 1);
     assert!(out.contains("no such file or folder"), "{out}");
 }
+
+/// Scripts for a moment of the night: `tidings test` applies the replay's
+/// batches up to `--until` first, as the service had them then.
+#[test]
+fn scripts_run_at_a_moment_of_the_replayed_night() {
+    let (code, out) = tidings_test(&[
+        "--data",
+        "dataset-demo/election",
+        "--intents",
+        "intents/election",
+        "--replay",
+        "dataset-demo/election/replay",
+        "--until",
+        "2027-05-07T01:45:00+01:00",
+        "tests/scripts/election-0145",
+    ]);
+    assert_eq!(code, 0, "{out}");
+    assert!(out.contains("1 script(s), 6 turn(s), 0 failing"), "{out}");
+    // The same scripts at the start of the night fail: the answers really
+    // come from the replayed state.
+    let (code, out) = tidings_test(&[
+        "--data",
+        "dataset-demo/election",
+        "--intents",
+        "intents/election",
+        "tests/scripts/election-0145",
+    ]);
+    assert_eq!(code, 1, "{out}");
+    // A refused batch stops the command with the file and its problem.
+    let dir = std::env::temp_dir().join(format!("tidings-replay-bad-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    std::fs::write(
+        dir.join("01.json"),
+        r#"{"changes": [{"change": "results", "contest": "nowhere", "status": "live"}]}"#,
+    )
+    .unwrap();
+    let (code, out) = tidings_test(&[
+        "--data",
+        "dataset-demo/election",
+        "--intents",
+        "intents/election",
+        "--replay",
+        dir.to_str().unwrap(),
+        "tests/scripts/election-0145",
+    ]);
+    std::fs::remove_dir_all(&dir).unwrap();
+    assert_ne!(code, 0, "{out}");
+    assert!(out.contains("01.json") && out.contains("nowhere"), "{out}");
+}
