@@ -453,6 +453,8 @@ impl Lexicon {
             });
         }
         self.extend_events(tokens, &mut covered, &mut mentions);
+        self.extend_first_names(tokens, &mut covered, &mut mentions);
+        self.spot_glued(tokens, &mut covered, &mut mentions);
         self.spot_fuzzy(tokens, &mut covered, &mut mentions);
         mentions.sort_by_key(|m| m.start);
         mentions
@@ -514,6 +516,128 @@ impl Lexicon {
             }
         }
         mentions.extend(events);
+    }
+
+    /// A lone first or family name next to a word that, with it, spells a
+    /// longer name closely is that longer name: "Fenwick Green" is the ward
+    /// Fennick Green misspelt, not the candidate Fenwick plus a word, and
+    /// "Zoe Quilon" is Zoë Quillon rather than any Zoë. Only a close match
+    /// (0.9) of exactly as many words takes the place of the exact one.
+    fn extend_first_names(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut [Mention]) {
+        const MIN: f64 = 0.9;
+        for m in mentions.iter_mut() {
+            let lone_name = m.exact
+                && m.end - m.start == 1
+                && !m.candidates.is_empty()
+                && m.candidates
+                    .iter()
+                    .all(|(t, _)| matches!(t, Target::Entity(_, Form::Given | Form::Family)));
+            if !lone_name {
+                continue;
+            }
+            let mut best: Option<(usize, usize, Vec<(Target, f32)>)> = None;
+            let windows = [(m.start, m.end + 1), (m.start.saturating_sub(1), m.end)];
+            for (from, to) in windows {
+                if to > tokens.len() || to - from != 2 {
+                    continue;
+                }
+                let other = if from < m.start { from } else { to - 1 };
+                if covered[other] || tokens[other].len() < 3 {
+                    continue;
+                }
+                let query = tokens[from..to].join(" ");
+                let hits: Vec<_> = self
+                    .fuzzy
+                    .lookup(&query, MIN, 4)
+                    .into_iter()
+                    .filter(|h| self.fuzzy_term_words(h.id) == 2)
+                    .collect();
+                if hits.is_empty() {
+                    continue;
+                }
+                let found = self.fuzzy_candidates(&hits);
+                if best.as_ref().is_none_or(|(_, _, b)| found[0].1 > b[0].1) {
+                    best = Some((from, to, found));
+                }
+            }
+            if let Some((from, to, found)) = best {
+                covered[from..to].iter_mut().for_each(|c| *c = true);
+                m.start = from;
+                m.end = to;
+                m.candidates = found;
+                m.exact = false;
+            }
+        }
+    }
+
+    /// Names a transcript split into pieces: "dun varick" is Dunvarrick,
+    /// "wren low sands" is Wrenlow Sands. Neighbouring uncovered words are
+    /// glued in every way and looked up against names of as many words;
+    /// only a close match (0.9) counts, so two everyday words never turn
+    /// into a name.
+    fn spot_glued(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
+        const MIN: f64 = 0.9;
+        let usable = |covered: &[bool], i: usize| {
+            !covered[i] && tokens[i].len() >= 2 && !tokens[i].chars().all(|c| c.is_ascii_digit())
+        };
+        for width in [3usize, 2] {
+            if tokens.len() < width {
+                continue;
+            }
+            let mut i = 0;
+            while i + width <= tokens.len() {
+                let window = &tokens[i..i + width];
+                // At least one piece must be a word the questions do not
+                // use, so "who won" never becomes "whowon".
+                let ok = (i..i + width).all(|k| usable(covered, k))
+                    && window.iter().any(|t| !self.vocabulary.contains(*t));
+                if !ok {
+                    i += 1;
+                    continue;
+                }
+                let mut best: Option<Vec<(Target, f32)>> = None;
+                // Each gap between pieces is glued or kept; at least one is
+                // glued (all kept is the ordinary fuzzy lookup).
+                for mask in 1u32..(1 << (width - 1)) {
+                    let mut query = window[0].to_string();
+                    for (g, piece) in window[1..].iter().enumerate() {
+                        if mask & (1 << g) == 0 {
+                            query.push(' ');
+                        }
+                        query.push_str(piece);
+                    }
+                    let words = query.split(' ').count();
+                    if query.len() < 6 {
+                        continue;
+                    }
+                    let hits: Vec<_> = self
+                        .fuzzy
+                        .lookup(&query, MIN, 4)
+                        .into_iter()
+                        .filter(|h| self.fuzzy_term_words(h.id) == words)
+                        .collect();
+                    if hits.is_empty() {
+                        continue;
+                    }
+                    let found = self.fuzzy_candidates(&hits);
+                    if best.as_ref().is_none_or(|b| found[0].1 > b[0].1) {
+                        best = Some(found);
+                    }
+                }
+                let Some(candidates) = best else {
+                    i += 1;
+                    continue;
+                };
+                covered[i..i + width].iter_mut().for_each(|c| *c = true);
+                mentions.push(Mention {
+                    start: i,
+                    end: i + width,
+                    candidates,
+                    exact: false,
+                });
+                i += width;
+            }
+        }
     }
 
     /// Looks up uncovered, unfamiliar words: pairs first (a full name), then
@@ -626,4 +750,63 @@ fn sort_candidates(c: &mut Vec<(Target, f32)>) {
     c.sort_by(|a, b| b.1.partial_cmp(&a.1).unwrap_or(std::cmp::Ordering::Equal));
     let mut seen = HashSet::new();
     c.retain(|(t, _)| seen.insert(t.clone()));
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn election() -> Dataset {
+        let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/election");
+        crate::dataset::load_dir(&dir).unwrap()
+    }
+
+    /// The names found in a message: (first token, end token, best target).
+    fn spotted(lex: &Lexicon, data: &Dataset, text: &str) -> Vec<(usize, usize, String)> {
+        let n = normalize(text);
+        let tokens: Vec<&str> = n.split(' ').collect();
+        lex.spot(&n, &tokens)
+            .into_iter()
+            .map(|m| {
+                let name = match &m.candidates[0].0 {
+                    Target::Entity(e, _) => data.entity_id(*e),
+                    other => format!("{other:?}"),
+                };
+                (m.start, m.end, name)
+            })
+            .collect()
+    }
+
+    #[test]
+    fn a_name_split_into_pieces_is_glued_back() {
+        let d = election();
+        let lex = Lexicon::build(&d, ["who", "won", "is", "winning", "in"].map(String::from));
+        assert_eq!(
+            spotted(&lex, &d, "who won dun varick"),
+            vec![(2, 4, "council/dunvarrick".to_string())]
+        );
+        assert_eq!(
+            spotted(&lex, &d, "who is winning in wren low sands"),
+            vec![(4, 7, "council/wrenlow-sands".to_string())]
+        );
+        // Everyday words are never glued into a name.
+        assert_eq!(spotted(&lex, &d, "who won in"), vec![]);
+    }
+
+    #[test]
+    fn a_first_name_that_starts_a_misspelt_longer_name_gives_way() {
+        let d = election();
+        let lex = Lexicon::build(&d, ["who", "won"].map(String::from));
+        // "Fenwick" alone is a candidate's first name; with "Green" it is the
+        // ward Fennick Green, misspelt.
+        assert_eq!(
+            spotted(&lex, &d, "who won Fenwick Green"),
+            vec![(2, 4, "council/fennick-green".to_string())]
+        );
+        // Followed by nothing like a name, the first name stays.
+        let alone = spotted(&lex, &d, "who won Fenwick");
+        assert_eq!(alone.len(), 1);
+        assert_eq!((alone[0].0, alone[0].1), (2, 3));
+        assert!(alone[0].2.starts_with('c'), "{alone:?}");
+    }
 }
