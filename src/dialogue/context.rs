@@ -121,7 +121,22 @@ pub fn variation<'c>(
 ) -> Option<(&'c Intent, Slots)> {
     let last = catalog.intent(s.last_intent.as_deref()?)?;
     let kinds = touched(a);
-    if kinds.is_empty() || !kinds.iter().all(|k| takes(last, *k)) {
+    let last_contest = s.last_slots.iter().find_map(|(name, v)| match v {
+        super::session::StoredSlot::Entity { entity } if entity.kind == "contest" => {
+            match load_entity(data, entity)? {
+                EntityRef::Contest(ci) => Some((name.clone(), ci)),
+                _ => None,
+            }
+        }
+        _ => None,
+    });
+    // Nothing named, but a word that turns the last contest into another:
+    // "and the north?" after Ashvenny South.
+    let sibling = match (&last_contest, kinds.is_empty()) {
+        (Some((_, old)), true) => sibling_contest(data, *old, a),
+        _ => None,
+    };
+    if (kinds.is_empty() && sibling.is_none()) || !kinds.iter().all(|k| takes(last, *k)) {
         return None;
     }
     let best_score = best.map(|b| b.score).unwrap_or(0.0);
@@ -136,6 +151,15 @@ pub fn variation<'c>(
         return None;
     }
     let mut slots = load_slots(data, &s.last_slots);
+    if let (Some(ci), Some((name, _))) = (sibling, &last_contest) {
+        slots.insert(
+            name.clone(),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        );
+        return Some((last, slots));
+    }
     for def in &last.slots {
         let changed = kinds.contains(&def.kind)
             || (def.kind == EntityKind::Category && kinds.contains(&EntityKind::Contest));
@@ -162,6 +186,36 @@ pub fn variation<'c>(
         }
     }
     Some((last, slots))
+}
+
+/// The one contest named like the last one but for a single word, which
+/// the message says: "and the north?" after Ashvenny South is Ashvenny
+/// North. `None` when no contest, or several, fit.
+fn sibling_contest(data: &Dataset, old: usize, a: &Analysis) -> Option<usize> {
+    let words = |ci: usize| -> Vec<String> {
+        crate::understand::normalize::normalize(&data.contest_name(ci))
+            .split(' ')
+            .map(str::to_string)
+            .collect()
+    };
+    let before = words(old);
+    let fits: Vec<usize> = (0..data.contests.len())
+        .filter(|&ci| ci != old)
+        .filter(|&ci| {
+            let after = words(ci);
+            if after.len() != before.len() {
+                return false;
+            }
+            let differ: Vec<usize> = (0..after.len())
+                .filter(|&k| after[k] != before[k])
+                .collect();
+            matches!(differ.as_slice(), [k] if a.tokens.iter().any(|t| *t == after[*k]))
+        })
+        .collect();
+    match fits.as_slice() {
+        [one] => Some(*one),
+        _ => None,
+    }
 }
 
 /// The event a follow-up means, given the last one: a new event named in

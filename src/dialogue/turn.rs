@@ -666,6 +666,18 @@ fn pick(data: &Dataset, options: &[EntityRef], a: &Analysis) -> Picked {
                 let sp = *sp;
                 narrowed |= narrow(&mut keep, &|e| sport_of(data, *e) == Some(sp));
             }
+            // "the one in Pellin Heath", "the one in the 100 m": the person
+            // entered in that contest, or in a contest of that discipline.
+            Some((Target::Entity(EntityRef::Contest(ci), _), _)) => {
+                let ci = *ci;
+                narrowed |= narrow(&mut keep, &|e| enters(data, *e, &|c| c == ci));
+            }
+            Some((Target::Entity(EntityRef::Discipline(s, d), _), _)) => {
+                let d = (*s, *d);
+                narrowed |= narrow(&mut keep, &|e| {
+                    enters(data, *e, &|c| data.discipline_ref(c) == d)
+                });
+            }
             _ => {}
         }
     }
@@ -721,6 +733,14 @@ fn narrow(keep: &mut Vec<EntityRef>, f: &dyn Fn(&EntityRef) -> bool) -> bool {
         true
     } else {
         false
+    }
+}
+
+/// Whether a competitor option is entered in a contest that passes `f`.
+fn enters(data: &Dataset, e: EntityRef, f: &dyn Fn(usize) -> bool) -> bool {
+    match e {
+        EntityRef::Competitor(i) => data.contests_of(i).iter().any(|(c, _)| f(*c)),
+        _ => false,
     }
 }
 
