@@ -13,13 +13,15 @@ use tidings::answers::sms;
 use tidings::engine::{Answer, Engine};
 use tidings::eval::{load_set, Case};
 
-/// The eval set's conversations, each as its list of messages.
-fn conversations() -> Vec<Vec<String>> {
-    let set = load_set(Path::new(concat!(
-        env!("CARGO_MANIFEST_DIR"),
-        "/tests/eval/games.yaml"
-    )))
-    .expect("the eval set loads");
+/// The games eval set.
+const GAMES: &str = "tests/eval/games.yaml";
+/// The election eval set (run at 01:45 of the replayed night).
+const ELECTION: &str = "tests/eval/election.yaml";
+
+/// An eval set's conversations, each as its list of messages.
+fn conversations(set: &str) -> Vec<Vec<String>> {
+    let set =
+        load_set(&Path::new(env!("CARGO_MANIFEST_DIR")).join(set)).expect("the eval set loads");
     set.into_iter()
         .map(|c| match c {
             Case::Single(t) => vec![t.ask],
@@ -32,9 +34,9 @@ fn conversations() -> Vec<Vec<String>> {
 
 /// Every reply of the eval set on one channel, each conversation by its
 /// own reader.
-async fn replies_on(engine: &Engine, channel: &str) -> Vec<(String, Answer)> {
+async fn replies_on(engine: &Engine, set: &str, channel: &str) -> Vec<(String, Answer)> {
     let mut out = Vec::new();
-    for (i, conv) in conversations().into_iter().enumerate() {
+    for (i, conv) in conversations(set).into_iter().enumerate() {
         let user = format!("{channel}-reader-{i}");
         for ask in conv {
             let a = engine
@@ -54,7 +56,7 @@ async fn replies_on(engine: &Engine, channel: &str) -> Vec<(String, Answer)> {
 #[tokio::test]
 async fn every_sms_reply_fits_one_segment() {
     let engine = demo_engine();
-    let replies = replies_on(&engine, "sms").await;
+    let replies = replies_on(&engine, GAMES, "sms").await;
     let mut ucs2 = 0;
     let mut too_long = Vec::new();
     for (ask, a) in &replies {
@@ -80,7 +82,7 @@ async fn every_sms_reply_fits_one_segment() {
     // Shorter wording is chosen, never a cut: every word of an SMS is a
     // word of the same reply on the plain channel, or one of the SMS
     // profile's shorter forms, or the "N more" of a shortened list.
-    let plain = replies_on(&engine, "plain").await;
+    let plain = replies_on(&engine, GAMES, "plain").await;
     let words = |t: &str| -> Vec<String> {
         t.split(|c: char| !(c.is_alphanumeric() || c == '\'' || c == '’'))
             .filter(|w| !w.is_empty())
@@ -126,7 +128,7 @@ async fn every_sms_reply_fits_one_segment() {
 #[tokio::test]
 async fn every_voice_reply_is_valid_ssml_and_readable() {
     let engine = demo_engine();
-    let replies = replies_on(&engine, "voice").await;
+    let replies = replies_on(&engine, GAMES, "voice").await;
     let mut texts = Vec::new();
     for (ask, a) in &replies {
         let doc = a.reply.ssml.as_deref().expect("voice replies carry SSML");
@@ -156,7 +158,7 @@ async fn every_voice_reply_is_valid_ssml_and_readable() {
 #[tokio::test]
 async fn every_distinct_voice_reply_is_spoken_by_a_real_engine() {
     let engine = demo_engine();
-    let mut docs: Vec<String> = replies_on(&engine, "voice")
+    let mut docs: Vec<String> = replies_on(&engine, GAMES, "voice")
         .await
         .into_iter()
         .filter_map(|(_, a)| a.reply.ssml)
@@ -177,7 +179,7 @@ async fn every_distinct_voice_reply_is_spoken_by_a_real_engine() {
 #[tokio::test]
 async fn every_voice_document_sounds_like_its_text() {
     let engine = demo_engine();
-    let mut pairs: Vec<(String, String)> = replies_on(&engine, "voice")
+    let mut pairs: Vec<(String, String)> = replies_on(&engine, GAMES, "voice")
         .await
         .into_iter()
         .map(|(_, a)| (a.reply.text, a.reply.ssml.unwrap_or_default()))
@@ -207,7 +209,7 @@ async fn every_voice_document_sounds_like_its_text() {
 async fn quick_replies_are_questions_the_service_answers() {
     let engine = demo_engine();
     let mut offered = 0;
-    for (i, conv) in conversations().into_iter().enumerate() {
+    for (i, conv) in conversations(GAMES).into_iter().enumerate() {
         let user = format!("quick-{i}");
         for ask in conv {
             let a = engine.handle(&user, "chat", &ask).await.unwrap();
@@ -228,6 +230,63 @@ async fn quick_replies_are_questions_the_service_answers() {
         }
     }
     assert!(offered > 50, "only {offered} quick replies were offered");
+}
+
+/// The election night's replies at 01:45 on SMS and voice: one segment
+/// each (3GPP TS 23.038 and TS 23.040), valid SSML 1.1 with nothing a
+/// speech engine would read oddly in the spoken text, and for every
+/// distinct document the same phonemes from espeak-ng as for its text.
+#[tokio::test]
+async fn election_replies_fit_one_sms_and_speak_as_written() {
+    let engine = common::election_engine(common::ELECTION_BATCHES, common::ELECTION_NOW).await;
+    let mut too_long = Vec::new();
+    for (ask, a) in replies_on(&engine, ELECTION, "sms").await {
+        let m = sms::measure(&a.reply.text);
+        if !m.fits_one_segment() {
+            too_long.push(format!(
+                "{ask:?} → {:?} takes {} of {}",
+                a.reply.text, m.units, m.limit
+            ));
+        }
+    }
+    assert!(too_long.is_empty(), "{}", too_long.join("\n"));
+    let voice = replies_on(&engine, ELECTION, "voice").await;
+    let mut pairs = Vec::new();
+    for (ask, a) in voice {
+        let doc = a.reply.ssml.clone().expect("voice replies carry SSML");
+        if let Err(e) = speech::check_ssml(&doc) {
+            panic!("{ask:?}: {e}\n{doc}");
+        }
+        let odd: Vec<char> = a
+            .reply
+            .text
+            .chars()
+            .filter(|c| "()[]{}<>*#/\\|_~^@&%\"“”".contains(*c) || c.is_ascii_digit())
+            .collect();
+        assert!(odd.is_empty(), "{ask:?} → {:?} has {odd:?}", a.reply.text);
+        pairs.push((a.reply.text, doc));
+    }
+    pairs.sort();
+    pairs.dedup();
+    let mut differ = Vec::new();
+    for (text, doc) in &pairs {
+        let said = speech::espeak_phonemes(doc, true).unwrap();
+        let written = speech::espeak_phonemes(text, false).unwrap();
+        if said != written {
+            differ.push(format!("{text}\n  ssml: {said}\n  text: {written}"));
+        }
+    }
+    assert!(
+        differ.is_empty(),
+        "{} of {}:\n{}",
+        differ.len(),
+        pairs.len(),
+        differ.join("\n")
+    );
+    eprintln!(
+        "{} distinct election voice replies sound like their text",
+        pairs.len()
+    );
 }
 
 /// One question per intent, for the snapshots.

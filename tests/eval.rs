@@ -44,56 +44,6 @@ async fn the_demo_question_set_meets_its_targets() {
     );
 }
 
-/// The election night at 01:45, after the first 13 replay batches: six
-/// wards called (Ashvenny North, Brindle Quay, Caddenmill, Dunvarrick,
-/// Fennick Green, Lanmouth) and six still counting. The labels in
-/// `tests/eval/election.yaml` are worked out for this state.
-const ELECTION_NOW: &str = "2027-05-07T01:45:00+01:00";
-const ELECTION_BATCHES: usize = 13;
-
-/// An engine over the election scenario with the first `batches` replay
-/// batches applied, on a fixed clock.
-async fn election_engine(batches: usize, now: &str) -> tidings::engine::Engine {
-    use std::sync::Arc;
-    use tidings::dataset::changes::Batch;
-    use tidings::engine::{self, Clock, Engine, Settings, Sources};
-
-    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
-    let snap = engine::load(&Sources {
-        data: Some(root.join("dataset-demo/election")),
-        intents: Some(root.join("intents/election")),
-    })
-    .expect("the election scenario loads");
-    let settings =
-        Settings::with_clock(Clock::Fixed(now.parse().unwrap()), b"test-secret".to_vec());
-    let engine = Engine::new(
-        snap,
-        Arc::new(tidings::dialogue::MemoryStore::new()),
-        settings,
-    );
-    let mut files: Vec<_> = std::fs::read_dir(root.join("dataset-demo/election/replay"))
-        .expect("the replay folder is there")
-        .map(|e| e.unwrap().path())
-        .filter(|p| p.extension().is_some_and(|x| x == "json"))
-        .collect();
-    files.sort();
-    assert!(
-        files.len() >= batches,
-        "only {} replay batches",
-        files.len()
-    );
-    for f in &files[..batches] {
-        let text = std::fs::read_to_string(f).unwrap();
-        let batch: Batch =
-            serde_json::from_str(&text).unwrap_or_else(|e| panic!("{}: {e}", f.display()));
-        engine
-            .apply_batch(&batch)
-            .await
-            .unwrap_or_else(|e| panic!("{}: {e:?}", f.display()));
-    }
-    engine
-}
-
 #[tokio::test]
 async fn the_election_question_set_meets_its_targets() {
     let set = Path::new(env!("CARGO_MANIFEST_DIR")).join("tests/eval/election.yaml");
@@ -108,13 +58,13 @@ async fn the_election_question_set_meets_its_targets() {
         conversations >= 25,
         "at least 25 conversations, found {conversations}"
     );
-    let engine = election_engine(ELECTION_BATCHES, ELECTION_NOW).await;
+    let engine = common::election_engine(common::ELECTION_BATCHES, common::ELECTION_NOW).await;
     // The labels hold only for the state at 01:45: make sure that is the
     // state the set runs on.
     let as_of = engine.snapshot().data.as_of;
     assert_eq!(
         as_of,
-        ELECTION_NOW.parse::<jiff::Timestamp>().unwrap(),
+        common::ELECTION_NOW.parse::<jiff::Timestamp>().unwrap(),
         "the replayed data is not the 01:45 state"
     );
     let r = tidings::eval::evaluate(&engine, &cases).await;

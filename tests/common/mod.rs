@@ -301,3 +301,53 @@ pub async fn ask_at(
         .await
         .unwrap()
 }
+
+/// The election night at 01:45, after the first 13 replay batches: six
+/// wards called (Ashvenny North, Brindle Quay, Caddenmill, Dunvarrick,
+/// Fennick Green, Lanmouth) and six still counting. The labels in
+/// `tests/eval/election.yaml` are worked out for this state.
+pub const ELECTION_NOW: &str = "2027-05-07T01:45:00+01:00";
+pub const ELECTION_BATCHES: usize = 13;
+
+/// An engine over the election scenario with the first `batches` replay
+/// batches applied, on a fixed clock.
+pub async fn election_engine(batches: usize, now: &str) -> tidings::engine::Engine {
+    use std::sync::Arc;
+    use tidings::dataset::changes::Batch;
+    use tidings::engine::{self, Clock, Engine, Settings, Sources};
+
+    let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR"));
+    let snap = engine::load(&Sources {
+        data: Some(root.join("dataset-demo/election")),
+        intents: Some(root.join("intents/election")),
+    })
+    .expect("the election scenario loads");
+    let settings =
+        Settings::with_clock(Clock::Fixed(now.parse().unwrap()), b"test-secret".to_vec());
+    let engine = Engine::new(
+        snap,
+        Arc::new(tidings::dialogue::MemoryStore::new()),
+        settings,
+    );
+    let mut files: Vec<_> = std::fs::read_dir(root.join("dataset-demo/election/replay"))
+        .expect("the replay folder is there")
+        .map(|e| e.unwrap().path())
+        .filter(|p| p.extension().is_some_and(|x| x == "json"))
+        .collect();
+    files.sort();
+    assert!(
+        files.len() >= batches,
+        "only {} replay batches",
+        files.len()
+    );
+    for f in &files[..batches] {
+        let text = std::fs::read_to_string(f).unwrap();
+        let batch: Batch =
+            serde_json::from_str(&text).unwrap_or_else(|e| panic!("{}: {e}", f.display()));
+        engine
+            .apply_batch(&batch)
+            .await
+            .unwrap_or_else(|e| panic!("{}: {e:?}", f.display()));
+    }
+    engine
+}
