@@ -556,7 +556,8 @@ impl Lexicon {
             if !lone_name {
                 continue;
             }
-            let mut best: Option<(usize, usize, Vec<(Target, f32)>)> = None;
+            // The best window so far: its token range and its candidates.
+            let mut best: Option<(std::ops::Range<usize>, Vec<(Target, f32)>)> = None;
             let windows = [(m.start, m.end + 1), (m.start.saturating_sub(1), m.end)];
             for (from, to) in windows {
                 if to > tokens.len() || to - from != 2 {
@@ -580,14 +581,14 @@ impl Lexicon {
                     continue;
                 }
                 let found = self.fuzzy_candidates(&hits);
-                if best.as_ref().is_none_or(|(_, _, b)| found[0].1 > b[0].1) {
-                    best = Some((from, to, found));
+                if best.as_ref().is_none_or(|(_, b)| found[0].1 > b[0].1) {
+                    best = Some((from..to, found));
                 }
             }
-            if let Some((from, to, found)) = best {
-                covered[from..to].iter_mut().for_each(|c| *c = true);
-                m.start = from;
-                m.end = to;
+            if let Some((range, found)) = best {
+                covered[range.clone()].iter_mut().for_each(|c| *c = true);
+                m.start = range.start;
+                m.end = range.end;
                 m.candidates = found;
                 m.exact = false;
             }
