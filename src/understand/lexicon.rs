@@ -106,6 +106,9 @@ fn name_shape(name: &str) -> (usize, String, String) {
     (words.len(), first, last.chars().skip(skip).collect())
 }
 
+/// What a stretch of words may name, best first, with scores.
+type Candidates = Vec<(Target, f32)>;
+
 /// What a fuzzy match's score is multiplied by, so it ranks below an exact
 /// match of the same name.
 const FUZZY_DISCOUNT: f32 = 0.97;
@@ -557,7 +560,7 @@ impl Lexicon {
                 continue;
             }
             // The best window so far: its token range and its candidates.
-            let mut best: Option<(std::ops::Range<usize>, Vec<(Target, f32)>)> = None;
+            let mut best: Option<(std::ops::Range<usize>, Candidates)> = None;
             let windows = [(m.start, m.end + 1), (m.start.saturating_sub(1), m.end)];
             for (from, to) in windows {
                 if to > tokens.len() || to - from != 2 {
