@@ -45,7 +45,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "stale",
             ],
         ),
-        no_data("scheduled", &["contest_name", "start"]),
+        no_data("scheduled", &["contest_name", "start", "entrants"]),
         no_data("no_result", &["contest_name"]),
     ],
     run,
@@ -65,7 +65,17 @@ fn run(input: &OpInput) -> OpOutput {
     let mut f = Facts::new().set("contest_name", data.contest_name(ci));
     if c.status == Status::Scheduled {
         f.put("start", when_value(&data.facts[ci].start, input.now));
-        return OpOutput::done("scheduled", f, vec![me]);
+        // Who is entered (a start list; the candidates standing), in the
+        // order the data give them.
+        let entrants: Vec<Value> = c.entries.iter().map(|e| entry_value(data, e)).collect();
+        let mut mentioned = vec![me];
+        mentioned.extend(
+            c.entries
+                .iter()
+                .filter_map(|e| super::support::entry_entity(data, e)),
+        );
+        f.put("entrants", Value::List(entrants));
+        return OpOutput::done("scheduled", f, mentioned);
     }
     let order = placed(c);
     if order.is_empty() {
@@ -249,6 +259,18 @@ mod tests {
             .unwrap()
             .id
             .clone();
-        assert_eq!(outcome(&run_on(&d, &sched, None)), "scheduled");
+        let out = run_on(&d, &sched, None);
+        assert_eq!(outcome(&out), "scheduled");
+        // The start list: everyone entered, none of them placed.
+        let ci = d.contests.iter().position(|c| c.id == sched).unwrap();
+        match &out {
+            OpOutput::Done { facts, .. } => {
+                assert_eq!(
+                    facts["entrants"].count(),
+                    d.contests[ci].entries.len() as i64
+                );
+            }
+            other => panic!("{other:?}"),
+        }
     }
 }
