@@ -275,6 +275,9 @@ fn replayed(snap: Snapshot, c: &Common) -> Result<Snapshot, String> {
     let steps = crate::replay::read_steps(std::slice::from_ref(path)).map_err(|p| p.join("\n"))?;
     let mut data = snap.data;
     for step in steps {
+        // Batches are in time order (read_steps checks): the first one
+        // after --until ends the replay. One without a time of its own is
+        // applied in its place.
         if let (Some(limit), Some(at)) = (until, step.as_of) {
             if at > limit {
                 break;
@@ -289,6 +292,11 @@ fn replayed(snap: Snapshot, c: &Common) -> Result<Snapshot, String> {
             let list: Vec<String> = problems.iter().map(|p| p.to_string()).collect();
             format!("{}: {}", step.path.display(), list.join("; "))
         })?;
+    }
+    // Answers are given as at --until, not as at the last batch before it:
+    // a live count last updated at 01:00 is 10 minutes old at 01:10.
+    if let Some(t) = until {
+        data.clock = Some(t);
     }
     Ok(Snapshot::new(data, snap.catalog))
 }

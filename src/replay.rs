@@ -53,10 +53,29 @@ pub fn read_steps(paths: &[PathBuf]) -> Result<Vec<Step>, Vec<String>> {
             files.push(p.clone());
         }
     }
-    let mut steps = Vec::new();
+    let mut steps: Vec<Step> = Vec::new();
+    let mut latest: Option<(Timestamp, String, PathBuf)> = None;
     for f in files {
         match read_step(&f) {
-            Ok(s) => steps.push(s),
+            Ok(s) => {
+                // Played in file-name order, the night must move forward:
+                // a batch stamped before the one played ahead of it would
+                // turn the data's clock back.
+                if let (Some(at), Some((before, said, prev))) = (s.as_of, &latest) {
+                    if at < *before {
+                        problems.push(format!(
+                            "{}: as_of {} is earlier than {said} in {}, which plays first",
+                            f.display(),
+                            s.as_of_text.as_deref().unwrap_or_default(),
+                            prev.display()
+                        ));
+                    }
+                }
+                if let (Some(at), Some(said)) = (s.as_of, &s.as_of_text) {
+                    latest = Some((at, said.clone(), f.clone()));
+                }
+                steps.push(s)
+            }
             Err(m) => problems.push(m),
         }
     }

@@ -400,13 +400,18 @@ async fn check_moment(
     assert_eq!(r["intent"], "party_seats", "{moment}: {r}");
     match seats.get("Moorland Progressives") {
         None => assert!(t.contains("has not won a seat yet"), "{moment}: {t}"),
-        Some(&n) => assert!(
-            t.contains(&format!(
-                "Moorland Progressives has won {} so far",
-                count(n, "seat")
-            )),
-            "{moment}: {t}"
-        ),
+        Some(&n) => {
+            assert!(
+                t.contains(&format!(
+                    "Moorland Progressives has won {}",
+                    count(n, "seat")
+                )),
+                "{moment}: {t}"
+            );
+            // "so far" only while races are still open.
+            let open = truth.wards.values().any(|w| w.status != "final");
+            assert_eq!(t.contains("so far"), open, "{moment}: {t}");
+        }
     }
 
     // The full result of a ward, every candidate with votes and share.
@@ -550,7 +555,7 @@ async fn the_replay_keeps_time_and_stops_at_a_refused_batch() {
     let bad = dir.join("01-bad.json");
     std::fs::write(
         &bad,
-        r#"{"as_of": "2027-05-06T23:20:00+01:00", "changes": [{"change": "results", "contest": "no-such-ward", "status": "live"}]}"#,
+        r#"{"as_of": "2027-05-06T23:14:00+01:00", "changes": [{"change": "results", "contest": "no-such-ward", "status": "live"}]}"#,
     )
     .unwrap();
     let (code, _, err) = replay(&server.base, &[bad.clone(), files[2].clone()], "0");
@@ -591,4 +596,171 @@ async fn the_replay_keeps_time_and_stops_at_a_refused_batch() {
     assert!(String::from_utf8_lossy(&out.stderr).contains("401"));
     std::fs::remove_dir_all(&dir).unwrap();
     drop(server);
+}
+
+/// Asks one question of the election scenario after the batches in `dir`
+/// (the real `tidings ask --replay`); returns exit code and output.
+fn ask_after(dir: &Path, until: Option<&str>, question: &str) -> (i32, String) {
+    let data = root().join("dataset-demo/election");
+    let intents = root().join("intents/election");
+    let mut cmd = Command::new(env!("CARGO_BIN_EXE_tidings"));
+    cmd.arg("ask")
+        .args(["--data", data.to_str().unwrap()])
+        .args(["--intents", intents.to_str().unwrap()])
+        .args(["--replay", dir.to_str().unwrap()]);
+    if let Some(t) = until {
+        cmd.args(["--until", t]);
+    }
+    let out = cmd.arg(question).output().unwrap();
+    (
+        out.status.code().unwrap_or(-1),
+        String::from_utf8_lossy(&out.stdout).into_owned() + &String::from_utf8_lossy(&out.stderr),
+    )
+}
+
+/// Writes batch files into a fresh folder of the test's own.
+fn batches(name: &str, files: &[(&str, &str)]) -> PathBuf {
+    let dir = std::env::temp_dir().join(format!("tidings-{name}-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    for (file, body) in files {
+        std::fs::write(dir.join(file), body).unwrap();
+    }
+    dir
+}
+
+/// Counts that have begun without figures, all-zero counts and a shared
+/// first place: never a made-up leader, a "leads with 0 votes" or a lone
+/// "1st" for a shared place.
+#[test]
+fn a_count_without_figures_and_a_shared_lead_are_said_as_they_are() {
+    // Marrowby (Rosmund Vossery c30, Vesna Whitmarren c31, Talia Yarrowby
+    // c32) opened, nothing in yet.
+    let opened = batches(
+        "opened",
+        &[(
+            "01.json",
+            r#"{"as_of": "2027-05-06T23:31:00+01:00", "changes": [{"change": "results", "contest": "marrowby", "status": "live", "counted": 0.0,
+                "entries": [{"competitor": "c30"}, {"competitor": "c31"}, {"competitor": "c32"}]}]}"#,
+        )],
+    );
+    let (code, out) = ask_after(&opened, None, "did Rosmund Vossery win?");
+    assert_eq!(code, 0, "{out}");
+    assert!(
+        out.starts_with("Not decided yet: counting is still under way in Marrowby"),
+        "{out}"
+    );
+    assert!(!out.contains(" is with") && !out.contains("1st"), "{out}");
+    let (_, out) = ask_after(&opened, None, "who is leading in Marrowby?");
+    assert!(out.contains("no figures for Marrowby yet"), "{out}");
+    // Every candidate on zero: no leader either.
+    let zero = batches(
+        "zero",
+        &[(
+            "01.json",
+            r#"{"as_of": "2027-05-06T23:31:00+01:00", "changes": [{"change": "results", "contest": "marrowby", "status": "live", "counted": 0.01,
+                "entries": [{"competitor": "c30", "place": 1, "mark": "0"}, {"competitor": "c31", "place": 1, "mark": "0"}, {"competitor": "c32", "place": 1, "mark": "0"}]}]}"#,
+        )],
+    );
+    let (_, out) = ask_after(&zero, None, "who is leading in Marrowby?");
+    assert!(out.contains("no figures for Marrowby yet"), "{out}");
+    assert!(!out.contains("0 votes"), "{out}");
+    let (_, out) = ask_after(&zero, None, "results in Marrowby");
+    assert!(out.contains("no figures for Marrowby yet"), "{out}");
+    // Two level at the top: level, and each "joint 1st".
+    let level = batches(
+        "level",
+        &[(
+            "01.json",
+            r#"{"as_of": "2027-05-06T23:40:00+01:00", "changes": [{"change": "results", "contest": "marrowby", "status": "live", "counted": 0.1,
+                "entries": [{"competitor": "c30", "place": 1, "mark": "200"}, {"competitor": "c31", "place": 1, "mark": "200"}, {"competitor": "c32", "place": 3, "mark": "90"}]}]}"#,
+        )],
+    );
+    let (_, out) = ask_after(&level, None, "who is leading in Marrowby?");
+    assert!(
+        out.contains("are level in Marrowby on 200 votes each"),
+        "{out}"
+    );
+    let (_, out) = ask_after(&level, None, "how is Vesna Whitmarren doing?");
+    // 200 of 490 votes: 40.8%.
+    assert!(out.contains("joint 1st with 200 votes (40.8%)"), "{out}");
+}
+
+/// `--until` answers as at that moment, and batches out of time order are
+/// refused before anything is applied.
+#[test]
+fn until_sets_the_moment_and_the_night_only_moves_forward() {
+    let dir = root().join("dataset-demo/election/replay");
+    // At 00:10 the last update was the 00:00 batch, 10 minutes before.
+    let (code, out) = ask_after(
+        &dir,
+        Some("2027-05-07T00:10:00+01:00"),
+        "who is leading in Ashvenny South?",
+    );
+    assert_eq!(code, 0, "{out}");
+    assert!(out.contains("as of 00:00"), "{out}");
+    // Past --stale-after (10 minutes by default) the answer says how old.
+    let (_, out) = ask_after(
+        &dir,
+        Some("2027-05-07T00:14:00+01:00"),
+        "who is leading in Ashvenny South?",
+    );
+    assert!(out.contains("as of 00:00, 14 minutes ago"), "{out}");
+    let backwards = batches(
+        "backwards",
+        &[
+            (
+                "01.json",
+                r#"{"as_of": "2027-05-06T23:40:00+01:00", "changes": [{"change": "schedule", "contest": "marrowby", "venue": "Marrowby Hall"}]}"#,
+            ),
+            (
+                "02.json",
+                r#"{"as_of": "2027-05-06T23:20:00+01:00", "changes": [{"change": "schedule", "contest": "marrowby", "venue": "Tamsendale Civic Hall"}]}"#,
+            ),
+        ],
+    );
+    let (code, out) = ask_after(&backwards, None, "where is Marrowby counted?");
+    assert_ne!(code, 0, "{out}");
+    assert!(
+        out.contains("02.json") && out.contains("earlier than"),
+        "{out}"
+    );
+}
+
+/// A full question naming only the word that tells two wards apart, right
+/// after the other one, is about the ward named, never the last one again.
+#[test]
+fn the_other_ward_by_its_one_different_word() {
+    let out = Command::new(env!("CARGO_BIN_EXE_tidings"))
+        .arg("chat")
+        .args(["--data", root().join("dataset-demo/election").to_str().unwrap()])
+        .args(["--intents", root().join("intents/election").to_str().unwrap()])
+        .args(["--replay", root().join("dataset-demo/election/replay").to_str().unwrap()])
+        .args(["--until", "2027-05-07T01:45:00+01:00"])
+        .stdin(std::process::Stdio::piped())
+        .stdout(std::process::Stdio::piped())
+        .spawn()
+        .and_then(|mut child| {
+            use std::io::Write;
+            child.stdin.take().unwrap().write_all(
+                b"who is leading in Ashvenny South?\nand who is leading in the north?\nhow much is counted in the south?\n",
+            )?;
+            child.wait_with_output()
+        })
+        .unwrap();
+    let text = String::from_utf8_lossy(&out.stdout);
+    let replies: Vec<&str> = text
+        .lines()
+        .filter(|l| l.starts_with("> ") && l.len() > 2)
+        .collect();
+    assert_eq!(replies.len(), 3, "{text}");
+    assert!(replies[0].contains("in Ashvenny South"), "{text}");
+    assert!(
+        replies[1].contains("Ashvenny North has been called"),
+        "{text}"
+    );
+    assert!(
+        replies[2].contains("Counting is under way in Ashvenny South"),
+        "{text}"
+    );
 }

@@ -100,8 +100,13 @@ impl Records {
     }
 }
 
+/// How far past now a batch's `as_of` may be: a day, for clocks that
+/// disagree, never a mistyped date.
+const MAX_AHEAD_SECONDS: i64 = 24 * 3600;
+
 /// Applies a batch to `data`: the next version, or every problem found.
-/// `now` (RFC 3339) is the `as_of` when the batch gives none.
+/// `now` (RFC 3339) is the `as_of` when the batch gives none. A batch's
+/// `as_of` may not go back before the data's, nor more than a day past now.
 pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<DataProblem>> {
     let mut r = Records::of(data);
     let mut problems = Vec::new();
@@ -116,6 +121,36 @@ pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<Da
     }
     if !problems.is_empty() {
         return Err(problems);
+    }
+    if let Some(t) = &batch.as_of {
+        // The data's time only moves forward, and not far past now: a
+        // mistyped year would otherwise move a demo clock with it.
+        match (t.parse::<jiff::Timestamp>(), now.parse::<jiff::Timestamp>()) {
+            (Err(_), _) => {
+                return Err(vec![problem(
+                    0,
+                    "as_of",
+                    "expected an RFC 3339 time with offset",
+                )])
+            }
+            (Ok(at), _) if at < data.as_of => {
+                return Err(vec![problem(
+                    0,
+                    "as_of",
+                    &format!(
+                        "{t} is earlier than the data's as_of; the data's time only moves forward"
+                    ),
+                )])
+            }
+            (Ok(at), Ok(now)) if at.as_second() - now.as_second() > MAX_AHEAD_SECONDS => {
+                return Err(vec![problem(
+                    0,
+                    "as_of",
+                    &format!("{t} is more than a day after now ({now})"),
+                )])
+            }
+            _ => {}
+        }
     }
     r.scenario.as_of = batch.as_of.clone().unwrap_or_else(|| now.to_string());
     r.build(data.version + 1).map_err(|e| match e {

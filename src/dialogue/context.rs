@@ -470,6 +470,13 @@ pub fn carried_over(
                 entity: EntityRef::Contest(ci),
             })
         }
+        // "who is leading in the north?" right after Ashvenny South means
+        // Ashvenny North, never the South again.
+        SlotValue::Entity {
+            entity: EntityRef::Contest(old),
+        } => Some(SlotValue::Entity {
+            entity: EntityRef::Contest(sibling_contest(data, *old, a).unwrap_or(*old)),
+        }),
         other => Some(other.clone()),
     }
 }

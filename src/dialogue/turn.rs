@@ -365,10 +365,7 @@ fn ask_choice(
     a: &Analysis,
 ) -> Reply {
     let labels: Vec<String> = options.iter().map(|e| describe(ctx.data, *e)).collect();
-    let noun = options
-        .first()
-        .map(|e| noun_for(ctx.data, *e))
-        .unwrap_or("one");
+    let noun = options_noun(ctx.data, &options);
     let mut values = HashMap::new();
     let spoken: Vec<Value> = options
         .iter()
@@ -808,8 +805,26 @@ fn describe_spoken(data: &Dataset, e: EntityRef) -> String {
     }
 }
 
-/// What the options of a "which one?" question are called, in the
+/// What the options of a "which one?" question are called: people of one
+/// sport by its noun ("Which candidate", "Which swimmer"), others in the
 /// scenario's own words ("delegation", "party", "ward").
+fn options_noun<'d>(data: &'d Dataset, options: &[EntityRef]) -> &'d str {
+    let sports: Vec<Option<usize>> = options
+        .iter()
+        .map(|e| match e {
+            EntityRef::Competitor(i) => data.sport(&data.competitors[*i].sport),
+            _ => None,
+        })
+        .collect();
+    if let Some(Some(s)) = sports.first() {
+        if sports.iter().all(|x| *x == Some(*s)) {
+            return &data.sports[*s].noun;
+        }
+    }
+    options.first().map(|e| noun_for(data, *e)).unwrap_or("one")
+}
+
+/// What one option of a "which one?" question is called.
 fn noun_for(data: &Dataset, e: EntityRef) -> &str {
     match e {
         EntityRef::Competitor(_) => "person",

@@ -605,8 +605,21 @@ impl Lexicon {
     /// into a name.
     fn spot_glued(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
         const MIN: f64 = 0.9;
+        // A short code matched exactly ("lan", the Lantern Party's) may be
+        // the first piece of a split name ("lan mouth", Lanmouth): such a
+        // word may still be glued, and the glued name then wins.
+        let short_code: Vec<bool> = (0..tokens.len())
+            .map(|i| {
+                tokens[i].len() <= 3
+                    && mentions
+                        .iter()
+                        .any(|m| m.exact && m.start == i && m.end == i + 1)
+            })
+            .collect();
         let usable = |covered: &[bool], i: usize| {
-            !covered[i] && tokens[i].len() >= 2 && !tokens[i].chars().all(|c| c.is_ascii_digit())
+            (!covered[i] || short_code[i])
+                && tokens[i].len() >= 2
+                && !tokens[i].chars().all(|c| c.is_ascii_digit())
         };
         for width in [3usize, 2] {
             if tokens.len() < width {
@@ -663,6 +676,7 @@ impl Lexicon {
                     continue;
                 };
                 covered[i..i + width].iter_mut().for_each(|c| *c = true);
+                mentions.retain(|m| m.end <= i || m.start >= i + width);
                 mentions.push(Mention {
                     start: i,
                     end: i + width,
@@ -822,6 +836,11 @@ mod tests {
         assert_eq!(
             spotted(&lex, &d, "who is winning in wren low sands"),
             vec![(4, 7, "council/wrenlow-sands".to_string())]
+        );
+        // "lan" alone is the Lantern Party's code; "lan mouth" is Lanmouth.
+        assert_eq!(
+            spotted(&lex, &d, "who won lan mouth"),
+            vec![(2, 4, "council/lanmouth".to_string())]
         );
         // Everyday words are never glued into a name.
         assert_eq!(spotted(&lex, &d, "who won in"), vec![]);

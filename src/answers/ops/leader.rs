@@ -69,6 +69,9 @@ fn run(input: &OpInput) -> OpOutput {
     let Some(&first) = order.first() else {
         return OpOutput::done("no_result", f, vec![me]);
     };
+    if super::support::no_votes_yet(data, ci) {
+        return OpOutput::done("no_result", f, vec![me]);
+    }
     let top_place = c.entries[first].place;
     let leaders: Vec<usize> = order
         .iter()

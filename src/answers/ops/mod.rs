@@ -243,17 +243,18 @@ impl OpInput<'_> {
             _ => None,
         }
     }
-    /// How many rows of a table to list: the reader's `count` (kept
-    /// between 1 and 20), else the intent's `rows` setting, else `default`.
+    /// How many rows of a table to list: the reader's `count`, else the
+    /// intent's `rows` setting, else `default`; always between 1 and 20.
     pub fn rows(&self, default: usize) -> usize {
-        match self.slots.get("count") {
-            Some(SlotValue::Count { value }) => (*value as usize).clamp(1, 20),
+        let n = match self.slots.get("count") {
+            Some(SlotValue::Count { value }) => *value as usize,
             _ => self
                 .settings
                 .get("rows")
                 .and_then(|s| s.parse().ok())
                 .unwrap_or(default),
-        }
+        };
+        n.clamp(1, 20)
     }
     pub fn text(&self, name: &str) -> Option<&str> {
         match self.slots.get(name) {

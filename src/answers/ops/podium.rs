@@ -69,7 +69,10 @@ fn run(input: &OpInput) -> OpOutput {
         }
         Status::Live => {
             let order = placed(c);
-            let Some(&first) = order.first() else {
+            let Some(&first) = order
+                .first()
+                .filter(|_| !super::support::no_votes_yet(data, ci))
+            else {
                 return OpOutput::done("live", Facts::new(), vec![me]);
             };
             let leaders: Vec<usize> = order

@@ -98,7 +98,8 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("status", status_phrase(e.status));
         return OpOutput::done("did_not_finish", f, mentioned);
     }
-    let Some(place) = e.place else {
+    let place = e.place.filter(|_| !super::support::no_votes_yet(data, ci));
+    let Some(place) = place else {
         return OpOutput::done(
             if c.status == Status::Live {
                 "live"
@@ -110,7 +111,13 @@ fn run(input: &OpInput) -> OpOutput {
         );
     };
     f.put("place", Value::Int(place as i64));
-    f.put("place_nth", Value::ordinal(place as u64));
+    // A place shared with someone else reads "joint 2nd".
+    let shared = c
+        .entries
+        .iter()
+        .enumerate()
+        .any(|(i, o)| i != ei && o.place == Some(place));
+    f.put("place_nth", super::support::rank_value(place, shared));
     if let Some(m) = mark_value(data, ci, ei) {
         f.put("mark", m);
     }

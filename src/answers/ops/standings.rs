@@ -78,7 +78,7 @@ fn run(input: &OpInput) -> OpOutput {
         return OpOutput::done("scheduled", f, mentioned);
     }
     let order = placed(c);
-    if order.is_empty() {
+    if order.is_empty() || super::support::no_votes_yet(data, ci) {
         return OpOutput::done("no_result", f, vec![me]);
     }
     let n = input.rows(DEFAULT_ROWS);

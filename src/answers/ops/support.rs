@@ -105,6 +105,17 @@ pub fn vote_shares(data: &Dataset, contest: usize) -> Option<Vec<Option<f64>>> {
     )
 }
 
+/// Whether a vote count has begun without a single vote in: places and
+/// "leads with 0 votes" would then be figures that say nothing, so the
+/// operations treat it as no figures yet.
+pub fn no_votes_yet(data: &Dataset, contest: usize) -> bool {
+    data.contests[contest].measure == Measure::Votes
+        && data.facts[contest]
+            .marks
+            .iter()
+            .all(|m| m.as_ref().is_none_or(|m| m.value() == 0.0))
+}
+
 /// A share in per cent to one decimal place: "45.2%", spoken "forty-five
 /// point two per cent" (one decimal is the common practice for vote shares).
 pub fn percent_value(share: f64) -> Value {
