@@ -136,12 +136,7 @@ async fn every_voice_reply_is_valid_ssml_and_readable() {
             panic!("{ask:?}: {e}\n{doc}");
         }
         // No symbol a speech engine would read oddly in the spoken text.
-        let odd: Vec<char> = a
-            .reply
-            .text
-            .chars()
-            .filter(|c| "()[]{}<>*#/\\|_~^@&%\"“”".contains(*c) || c.is_ascii_digit())
-            .collect();
+        let odd = odd_symbols(&a.reply.text);
         assert!(odd.is_empty(), "{ask:?} → {:?} has {odd:?}", a.reply.text);
         texts.push(a.reply.text.clone());
     }
@@ -186,16 +181,7 @@ async fn every_voice_document_sounds_like_its_text() {
         .collect();
     pairs.sort();
     pairs.dedup();
-    let mut differ = Vec::new();
-    for (text, doc) in &pairs {
-        let said = speech::espeak_phonemes(doc, true).unwrap();
-        let written = speech::espeak_phonemes(text, false).unwrap();
-        if said != written {
-            differ.push(format!(
-                "{text}\n  {doc}\n  ssml: {said}\n  text: {written}"
-            ));
-        }
-    }
+    let differ = sounding_unlike_their_text(&pairs);
     assert!(
         differ.is_empty(),
         "{} of {}:\n{}",
@@ -257,25 +243,13 @@ async fn election_replies_fit_one_sms_and_speak_as_written() {
         if let Err(e) = speech::check_ssml(&doc) {
             panic!("{ask:?}: {e}\n{doc}");
         }
-        let odd: Vec<char> = a
-            .reply
-            .text
-            .chars()
-            .filter(|c| "()[]{}<>*#/\\|_~^@&%\"“”".contains(*c) || c.is_ascii_digit())
-            .collect();
+        let odd = odd_symbols(&a.reply.text);
         assert!(odd.is_empty(), "{ask:?} → {:?} has {odd:?}", a.reply.text);
         pairs.push((a.reply.text, doc));
     }
     pairs.sort();
     pairs.dedup();
-    let mut differ = Vec::new();
-    for (text, doc) in &pairs {
-        let said = speech::espeak_phonemes(doc, true).unwrap();
-        let written = speech::espeak_phonemes(text, false).unwrap();
-        if said != written {
-            differ.push(format!("{text}\n  ssml: {said}\n  text: {written}"));
-        }
-    }
+    let differ = sounding_unlike_their_text(&pairs);
     assert!(
         differ.is_empty(),
         "{} of {}:\n{}",
@@ -287,6 +261,29 @@ async fn election_replies_fit_one_sms_and_speak_as_written() {
         "{} distinct election voice replies sound like their text",
         pairs.len()
     );
+}
+
+/// Symbols and figures a speech engine would read oddly in spoken text.
+fn odd_symbols(text: &str) -> Vec<char> {
+    text.chars()
+        .filter(|c| "()[]{}<>*#/\\|_~^@&%\"“”".contains(*c) || c.is_ascii_digit())
+        .collect()
+}
+
+/// The (text, SSML document) pairs for which espeak-ng's phonemes of the
+/// document differ from those of the text, each described.
+fn sounding_unlike_their_text(pairs: &[(String, String)]) -> Vec<String> {
+    let mut differ = Vec::new();
+    for (text, doc) in pairs {
+        let said = speech::espeak_phonemes(doc, true).unwrap();
+        let written = speech::espeak_phonemes(text, false).unwrap();
+        if said != written {
+            differ.push(format!(
+                "{text}\n  {doc}\n  ssml: {said}\n  text: {written}"
+            ));
+        }
+    }
+    differ
 }
 
 /// One question per intent, for the snapshots.

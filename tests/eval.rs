@@ -5,6 +5,36 @@ mod common;
 
 use std::path::Path;
 
+use tidings::eval::Report;
+
+/// Every failing turn, one line each.
+fn failures(r: &Report) -> Vec<String> {
+    r.failures
+        .iter()
+        .map(|f| {
+            format!(
+                "case {} {:?}: {} => {}",
+                f.case,
+                f.ask,
+                f.problems.join("; "),
+                f.reply
+            )
+        })
+        .collect()
+}
+
+/// The targets every set is held to, with the failing turns on a miss.
+fn meets_targets(r: &Report) {
+    assert!(
+        r.meets_targets(),
+        "intent {:.4}, slot F1 {:.4}, wrong-answer rate {:.4}\n{}",
+        r.intent_accuracy,
+        r.slot_f1,
+        r.wrong_answer_rate,
+        failures(r).join("\n")
+    );
+}
+
 #[tokio::test]
 async fn the_demo_question_set_meets_its_targets() {
     let set = Path::new(env!("CARGO_MANIFEST_DIR")).join("tests/eval/games.yaml");
@@ -21,27 +51,7 @@ async fn the_demo_question_set_meets_its_targets() {
     );
     let engine = common::demo_engine();
     let r = tidings::eval::evaluate(&engine, &cases).await;
-    let failures: Vec<String> = r
-        .failures
-        .iter()
-        .map(|f| {
-            format!(
-                "case {} {:?}: {} => {}",
-                f.case,
-                f.ask,
-                f.problems.join("; "),
-                f.reply
-            )
-        })
-        .collect();
-    assert!(
-        r.meets_targets(),
-        "intent {:.4}, slot F1 {:.4}, wrong-answer rate {:.4}\n{}",
-        r.intent_accuracy,
-        r.slot_f1,
-        r.wrong_answer_rate,
-        failures.join("\n")
-    );
+    meets_targets(&r);
 }
 
 #[tokio::test]
@@ -68,19 +78,6 @@ async fn the_election_question_set_meets_its_targets() {
         "the replayed data is not the 01:45 state"
     );
     let r = tidings::eval::evaluate(&engine, &cases).await;
-    let failures: Vec<String> = r
-        .failures
-        .iter()
-        .map(|f| {
-            format!(
-                "case {} {:?}: {} => {}",
-                f.case,
-                f.ask,
-                f.problems.join("; "),
-                f.reply
-            )
-        })
-        .collect();
     eprintln!(
         "election set: {} cases ({} conversations), {} turns; intent {:.4} ({}/{}), slot F1 {:.4} (P {:.4}, R {:.4}), answers {:.4} ({}/{}), wrong answers {:.4} ({}/{})\n{}",
         r.cases,
@@ -98,14 +95,7 @@ async fn the_election_question_set_meets_its_targets() {
         r.wrong_answer_rate,
         r.wrong_answers,
         r.turns,
-        failures.join("\n")
+        failures(&r).join("\n")
     );
-    assert!(
-        r.meets_targets(),
-        "intent {:.4}, slot F1 {:.4}, wrong-answer rate {:.4}\n{}",
-        r.intent_accuracy,
-        r.slot_f1,
-        r.wrong_answer_rate,
-        failures.join("\n")
-    );
+    meets_targets(&r);
 }
