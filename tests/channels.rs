@@ -287,7 +287,7 @@ fn sounding_unlike_their_text(pairs: &[(String, String)]) -> Vec<String> {
 }
 
 /// One question per intent, for the snapshots.
-const PER_INTENT: [(&str, &str); 20] = [
+const PER_INTENT: [(&str, &str); 21] = [
     ("podium", "who won the women's 200 m freestyle?"),
     ("medalist", "who got bronze in the men's 400 m?"),
     (
@@ -311,6 +311,10 @@ const PER_INTENT: [(&str, &str); 20] = [
     ("best_mark", "what is the best long jump so far?"),
     ("full_results", "full results of the women's 400 m"),
     ("under_way", "what's on right now?"),
+    (
+        "delegation_in_event",
+        "how did Kalvenmark do in the men's 100 m final?",
+    ),
     ("greeting", "hello"),
     ("thanks", "thanks"),
     ("help", "what can you do?"),

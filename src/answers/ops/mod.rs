@@ -13,6 +13,7 @@ mod builtin;
 mod contest_time;
 mod day_schedule;
 mod group_medals;
+mod group_result;
 mod head_to_head;
 mod leader;
 mod medal_table;
@@ -349,6 +350,7 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &best_mark::SPEC,
     &standings::SPEC,
     &open_contests::SPEC,
+    &group_result::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,
