@@ -650,6 +650,11 @@ impl Engine {
     /// or every problem found (and nothing changed). Questions under way
     /// finish on the version they started with.
     pub async fn apply_batch(&self, batch: &Batch) -> Result<u64, ChangeError> {
+        // On the real clock a date far ahead is a typo; a demo or fixed
+        // clock replays whatever night it was given.
+        if self.settings.clock == Clock::System && self.snapshot().data.clock.is_none() {
+            changes::check_not_ahead(batch, Timestamp::now()).map_err(ChangeError::Invalid)?;
+        }
         self.change(|data, now| changes::apply(data, batch, now))
             .await
     }

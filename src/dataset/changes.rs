@@ -100,13 +100,30 @@ impl Records {
     }
 }
 
-/// How far past now a batch's `as_of` may be: a day, for clocks that
-/// disagree, never a mistyped date.
+/// How far past the real time a batch's `as_of` may be: a day, for clocks
+/// that disagree, never a mistyped date.
 const MAX_AHEAD_SECONDS: i64 = 24 * 3600;
+
+/// For a service on the real clock: a batch dated more than a day after
+/// `now` is a mistyped date, refused before it moves the data's time. (A
+/// replayed night on a demo clock is dated as it likes.)
+pub fn check_not_ahead(batch: &Batch, now: jiff::Timestamp) -> Result<(), Vec<DataProblem>> {
+    let Some(t) = &batch.as_of else {
+        return Ok(());
+    };
+    match t.parse::<jiff::Timestamp>() {
+        Ok(at) if at.as_second() - now.as_second() > MAX_AHEAD_SECONDS => Err(vec![problem(
+            0,
+            "as_of",
+            &format!("{t} is more than a day after now"),
+        )]),
+        _ => Ok(()),
+    }
+}
 
 /// Applies a batch to `data`: the next version, or every problem found.
 /// `now` (RFC 3339) is the `as_of` when the batch gives none. A batch's
-/// `as_of` may not go back before the data's, nor more than a day past now.
+/// `as_of` may not go back before the data's.
 pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<DataProblem>> {
     let mut r = Records::of(data);
     let mut problems = Vec::new();
@@ -123,17 +140,16 @@ pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<Da
         return Err(problems);
     }
     if let Some(t) = &batch.as_of {
-        // The data's time only moves forward, and not far past now: a
-        // mistyped year would otherwise move a demo clock with it.
-        match (t.parse::<jiff::Timestamp>(), now.parse::<jiff::Timestamp>()) {
-            (Err(_), _) => {
+        // The data's time only moves forward.
+        match t.parse::<jiff::Timestamp>() {
+            Err(_) => {
                 return Err(vec![problem(
                     0,
                     "as_of",
                     "expected an RFC 3339 time with offset",
                 )])
             }
-            (Ok(at), _) if at < data.as_of => {
+            Ok(at) if at < data.as_of => {
                 return Err(vec![problem(
                     0,
                     "as_of",
@@ -142,17 +158,18 @@ pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<Da
                     ),
                 )])
             }
-            (Ok(at), Ok(now)) if at.as_second() - now.as_second() > MAX_AHEAD_SECONDS => {
-                return Err(vec![problem(
-                    0,
-                    "as_of",
-                    &format!("{t} is more than a day after now ({now})"),
-                )])
-            }
-            _ => {}
+            Ok(_) => {}
         }
     }
-    r.scenario.as_of = batch.as_of.clone().unwrap_or_else(|| now.to_string());
+    // Without a time of its own the batch is as of now, unless the data are
+    // already later (a fixed clock behind the feed): never backwards.
+    r.scenario.as_of = match &batch.as_of {
+        Some(t) => t.clone(),
+        None => match now.parse::<jiff::Timestamp>() {
+            Ok(n) if n < data.as_of => r.scenario.as_of.clone(),
+            _ => now.to_string(),
+        },
+    };
     r.build(data.version + 1).map_err(|e| match e {
         LoadError::Invalid(p) => p,
         LoadError::File(m) => vec![problem(0, "batch", &m)],
@@ -294,6 +311,43 @@ mod tests {
 
     fn batch(json: &str) -> Batch {
         serde_json::from_str(json).expect("the batch parses")
+    }
+
+    #[test]
+    fn the_datas_time_only_moves_forward() {
+        let d = demo();
+        // Dated before the data: refused.
+        let early = batch(
+            r#"{"as_of": "2027-08-14T20:00:00+01:00", "changes": [
+                {"change": "schedule", "contest": "ath-m-marathon-final", "venue": "Harbour Road"}]}"#,
+        );
+        let err = apply(&d, &early, "2027-08-14T21:10:00+01:00").unwrap_err();
+        assert!(err[0].message.contains("only moves forward"), "{err:?}");
+        // Undated, with "now" behind the data (a fixed clock behind the
+        // feed): the data keep their time.
+        let undated = batch(
+            r#"{"changes": [{"change": "schedule", "contest": "ath-m-marathon-final", "venue": "Harbour Road"}]}"#,
+        );
+        let next = apply(&d, &undated, "2027-08-14T20:00:00+01:00").unwrap();
+        assert_eq!(next.as_of, d.as_of);
+        // Undated with "now" later: as of now.
+        let next = apply(&d, &undated, "2027-08-14T21:10:00+01:00").unwrap();
+        assert_eq!(next.as_of, "2027-08-14T21:10:00+01:00".parse().unwrap());
+    }
+
+    #[test]
+    fn a_date_far_ahead_of_the_real_clock_is_a_typo() {
+        let now: jiff::Timestamp = "2027-08-14T20:10:00Z".parse().unwrap();
+        let typo = batch(
+            r#"{"as_of": "2072-08-14T21:30:00+01:00", "changes": [
+                {"change": "schedule", "contest": "ath-m-marathon-final", "venue": "Harbour Road"}]}"#,
+        );
+        assert!(check_not_ahead(&typo, now).is_err());
+        let soon = batch(
+            r#"{"as_of": "2027-08-15T09:00:00+01:00", "changes": [
+                {"change": "schedule", "contest": "ath-m-marathon-final", "venue": "Harbour Road"}]}"#,
+        );
+        assert!(check_not_ahead(&soon, now).is_ok());
     }
 
     #[test]

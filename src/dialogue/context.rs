@@ -209,7 +209,11 @@ fn sibling_contest(data: &Dataset, old: usize, a: &Analysis) -> Option<usize> {
             let differ: Vec<usize> = (0..after.len())
                 .filter(|&k| after[k] != before[k])
                 .collect();
-            matches!(differ.as_slice(), [k] if a.tokens.iter().any(|t| *t == after[*k]))
+            // A word, not a number: "top 2" after heat 1 is a count, never
+            // heat 2.
+            matches!(differ.as_slice(), [k] if after[*k].len() >= 3
+                && after[*k].chars().all(char::is_alphabetic)
+                && a.tokens.iter().any(|t| *t == after[*k]))
         })
         .collect();
     match fits.as_slice() {

@@ -102,7 +102,11 @@ fn run(input: &OpInput) -> OpOutput {
                 None => String::new(),
             };
             let Some(place) = e.place else {
-                let why = status_phrase(e.status);
+                let why = match e.status {
+                    EntryStatus::Ok if c.status == Status::Live => "no place yet",
+                    EntryStatus::Ok => "not placed",
+                    other => status_phrase(other),
+                };
                 return Value::Text(format!("{who}{why}").trim().to_string());
             };
             let shared = c

@@ -25,10 +25,14 @@ pub static SPEC: OpSpec = OpSpec {
                 "upcoming_count",
                 "next",
                 "decided_count",
+                "decided_awarding",
                 "sport_name",
             ],
         ),
-        answered("all_over", &["decided_count", "sport_name"]),
+        answered(
+            "all_over",
+            &["decided_count", "decided_awarding", "sport_name"],
+        ),
     ],
     run,
 };
@@ -61,6 +65,9 @@ fn run(input: &OpInput) -> OpOutput {
     let upcoming = of(Status::Scheduled);
     let decided = of(Status::Final);
     f.put("decided_count", Value::Int(decided.len() as i64));
+    // Of those, the ones that give awards (finals, not heats).
+    let awarding = decided.iter().filter(|&&c| data.awards_in(c)).count();
+    f.put("decided_awarding", Value::Int(awarding as i64));
     if live.is_empty() && upcoming.is_empty() {
         return OpOutput::done("all_over", f, vec![]);
     }

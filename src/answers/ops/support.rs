@@ -277,10 +277,19 @@ pub fn day_value(date: Date, now: &ZonedDateTime) -> Value {
 /// digit by some engines ("twenty-one zero four"), which is not how the
 /// newsroom says it.
 pub fn clock_value(h: u64, m: u64) -> Value {
-    let spoken = match m {
-        0 => format!("{} hundred", words::cardinal(h)),
-        1..=9 => format!("{} oh {}", words::cardinal(h), words::cardinal(m)),
-        _ => format!("{} {}", words::cardinal(h), words::cardinal(m)),
+    // The 24-hour clock read aloud (common practice): an hour before ten
+    // with a leading "oh" ("oh one hundred", "oh nine thirty"), the hour
+    // after midnight as "zero" ("zero fifteen"), and 00:00 as "midnight".
+    let hour = match h {
+        0 => "zero".to_string(),
+        1..=9 => format!("oh {}", words::cardinal(h)),
+        _ => words::cardinal(h),
+    };
+    let spoken = match (h, m) {
+        (0, 0) => "midnight".to_string(),
+        (_, 0) => format!("{hour} hundred"),
+        (_, 1..=9) => format!("{hour} oh {}", words::cardinal(m)),
+        _ => format!("{hour} {}", words::cardinal(m)),
     };
     Value::Dual {
         text: format!("{h:02}:{m:02}"),
