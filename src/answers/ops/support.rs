@@ -493,6 +493,20 @@ mod tests {
     }
 
     #[test]
+    fn the_24_hour_clock_read_aloud() {
+        // Common practice for reading the 24-hour clock aloud.
+        let said = |h, m| clock_value(h, m).render(Style::Spoken);
+        assert_eq!(said(21, 4), "twenty-one oh four");
+        assert_eq!(said(22, 0), "twenty-two hundred");
+        assert_eq!(said(18, 30), "eighteen thirty");
+        assert_eq!(said(1, 0), "oh one hundred");
+        assert_eq!(said(9, 45), "oh nine forty-five");
+        assert_eq!(said(0, 15), "zero fifteen");
+        assert_eq!(said(0, 0), "midnight");
+        assert_eq!(clock_value(1, 5).render(Style::Text), "01:05");
+    }
+
+    #[test]
     fn shares_and_points_read_to_one_decimal() {
         // One decimal place for vote shares, and margins between shares in
         // percentage points: common practice in results reporting.
