@@ -764,3 +764,41 @@ fn the_other_ward_by_its_one_different_word() {
         "{text}"
     );
 }
+
+/// A seat tied on votes and decided by lot: the data place the two apart
+/// with equal votes, the seat goes to one, and answers name one winner,
+/// one seat and no made-up margin.
+#[test]
+fn a_tie_decided_by_lot_has_one_winner() {
+    let lot = batches(
+        "lot",
+        &[(
+            "01.json",
+            r#"{"as_of": "2027-05-07T02:40:00+01:00", "changes": [{"change": "results", "contest": "marrowby", "status": "final", "counted": 1.0,
+                "entries": [{"competitor": "c31", "place": 1, "mark": "1,500", "award": "seat"}, {"competitor": "c30", "place": 2, "mark": "1,500"}, {"competitor": "c32", "place": 3, "mark": "700"}]}]}"#,
+        )],
+    );
+    let (code, out) = ask_after(&lot, None, "who won Marrowby?");
+    assert_eq!(code, 0, "{out}");
+    assert!(
+        out.starts_with(
+            "Vesna Whitmarren (Harbour Alliance) won Marrowby with 1,500 votes (40.5%)"
+        ),
+        "{out}"
+    );
+    assert!(!out.contains("Rosmund Vossery"), "{out}");
+    let (_, out) = ask_after(&lot, None, "who is leading in Marrowby?");
+    assert!(
+        out.contains("Vesna Whitmarren (Harbour Alliance) won"),
+        "{out}"
+    );
+    assert!(
+        !out.contains("by 0") && !out.contains("0.0 points"),
+        "{out}"
+    );
+    let (_, out) = ask_after(&lot, None, "seats so far");
+    assert!(
+        out.contains("Harbour Alliance (one seat)") && !out.contains("Moorland"),
+        "{out}"
+    );
+}

@@ -514,14 +514,14 @@ fn check_places(
                         format!("shares place {place} but its mark differs"),
                     );
                 }
-                if prev_place < place && ord != std::cmp::Ordering::Less {
+                // Equal marks may be placed apart: a tie broken by a photo,
+                // a countback or (on an election night) by lot.
+                if prev_place < place && ord == std::cmp::Ordering::Greater {
                     p.add(
                         f,
                         &rec,
                         "mark",
-                        format!(
-                            "place {place} has a mark as good as or better than place {prev_place}"
-                        ),
+                        format!("place {place} has a better mark than place {prev_place}"),
                     );
                 }
             }

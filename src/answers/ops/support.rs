@@ -58,11 +58,13 @@ pub fn mark_value(data: &Dataset, contest: usize, entry: usize) -> Option<Value>
         })
 }
 
-/// The gap between two entries' marks.
+/// The gap between two entries' marks; none when they are equal (a tie
+/// broken by a photo, a countback or by lot has no margin to give).
 pub fn margin_value(data: &Dataset, contest: usize, a: usize, b: usize) -> Option<Value> {
     let c = &data.contests[contest];
     let marks = &data.facts[contest].marks;
     match (&marks[a], &marks[b]) {
+        (Some(x), Some(y)) if mark::compare(false, x, y) == std::cmp::Ordering::Equal => None,
         (Some(x), Some(y)) => Some(Value::Dual {
             text: mark::format_margin_text(c.measure, x, y),
             spoken: mark::format_margin_spoken(c.measure, x, y),
@@ -172,6 +174,7 @@ pub fn vote_facts(data: &Dataset, contest: usize, entry: Option<usize>, f: &mut 
 pub fn margin_points(data: &Dataset, contest: usize, a: usize, b: usize) -> Option<Value> {
     let shares = vote_shares(data, contest)?;
     match (shares[a], shares[b]) {
+        (Some(x), Some(y)) if x == y => None,
         (Some(x), Some(y)) => Some(points_value((x - y).abs())),
         _ => None,
     }
@@ -566,8 +569,9 @@ mod tests {
             .map(|s| percent_value(s.unwrap()).render(Style::Text))
             .collect();
         assert_eq!(printed, ["33.3%", "33.3%", "33.3%"]);
-        let gap = margin_points(&data, ci, 0, 1).unwrap();
-        assert_eq!(gap.render(Style::Text), "0.0 points");
+        // Level on votes: no margin to give, not "0.0 points".
+        assert_eq!(margin_points(&data, ci, 0, 1), None);
+        assert_eq!(margin_value(&data, ci, 0, 1), None);
     }
 
     #[test]
