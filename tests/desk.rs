@@ -221,15 +221,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
 
     // The selector offers the channels the service has loaded, chat first
     // chosen, and the page says that channels have conversations of their own.
-    let status: Value = http
-        .get(format!("{base}/v1/admin/status"))
-        .bearer_auth(TOKEN)
-        .send()
-        .await
-        .unwrap()
-        .json()
-        .await
-        .unwrap();
+    let status = common::admin_status(&http, &base, TOKEN).await;
     let offered = js(
         &c,
         "return Array.from(document.querySelectorAll('#channel option'), o => o.value)",

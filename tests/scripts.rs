@@ -16,6 +16,18 @@ fn tidings_test(args: &[&str]) -> (i32, String) {
     (out.status.code().unwrap_or(-1), text)
 }
 
+/// `tidings test` on the election scenario and intents.
+fn tidings_test_election(args: &[&str]) -> (i32, String) {
+    let mut all = vec![
+        "--data",
+        "dataset-demo/election",
+        "--intents",
+        "intents/election",
+    ];
+    all.extend_from_slice(args);
+    tidings_test(&all)
+}
+
 fn temp_script(name: &str, text: &str) -> std::path::PathBuf {
     let dir = std::env::temp_dir().join(format!(
         "tidings-scripts-{}-{:08x}",
@@ -42,11 +54,7 @@ fn the_projects_own_scripts_pass() {
 /// start of the night (its own clock, 22:00 on 6 May: nothing counted yet).
 #[test]
 fn the_election_scripts_pass_on_the_election_scenario() {
-    let (code, out) = tidings_test(&[
-        "--data",
-        "dataset-demo/election",
-        "--intents",
-        "intents/election",
+    let (code, out) = tidings_test_election(&[
         "--now",
         "2027-05-06T22:00:00+01:00",
         "tests/scripts/election",
@@ -102,11 +110,7 @@ fn a_broken_script_is_located_and_fails_the_run() {
 /// batches up to `--until` first, as the service had them then.
 #[test]
 fn scripts_run_at_a_moment_of_the_replayed_night() {
-    let (code, out) = tidings_test(&[
-        "--data",
-        "dataset-demo/election",
-        "--intents",
-        "intents/election",
+    let (code, out) = tidings_test_election(&[
         "--replay",
         "dataset-demo/election/replay",
         "--until",
@@ -117,13 +121,7 @@ fn scripts_run_at_a_moment_of_the_replayed_night() {
     assert!(out.contains("1 script(s), 6 turn(s), 0 failing"), "{out}");
     // The same scripts at the start of the night fail: the answers really
     // come from the replayed state.
-    let (code, out) = tidings_test(&[
-        "--data",
-        "dataset-demo/election",
-        "--intents",
-        "intents/election",
-        "tests/scripts/election-0145",
-    ]);
+    let (code, out) = tidings_test_election(&["tests/scripts/election-0145"]);
     assert_eq!(code, 1, "{out}");
     // A refused batch stops the command with the file and its problem.
     let dir = std::env::temp_dir().join(format!("tidings-replay-bad-{}", std::process::id()));
@@ -133,11 +131,7 @@ fn scripts_run_at_a_moment_of_the_replayed_night() {
         r#"{"changes": [{"change": "results", "contest": "nowhere", "status": "live"}]}"#,
     )
     .unwrap();
-    let (code, out) = tidings_test(&[
-        "--data",
-        "dataset-demo/election",
-        "--intents",
-        "intents/election",
+    let (code, out) = tidings_test_election(&[
         "--replay",
         dir.to_str().unwrap(),
         "tests/scripts/election-0145",

@@ -32,15 +32,7 @@ async fn hello(client: &reqwest::Client, base: &str) -> String {
 }
 
 async fn status(client: &reqwest::Client, base: &str) -> serde_json::Value {
-    client
-        .get(format!("{base}/v1/admin/status"))
-        .bearer_auth(TOKEN)
-        .send()
-        .await
-        .unwrap()
-        .json()
-        .await
-        .unwrap()
+    common::admin_status(client, base, TOKEN).await
 }
 
 #[tokio::test]

@@ -283,6 +283,19 @@ pub async fn ask_on(
     r.json().await.unwrap()
 }
 
+/// `GET /v1/admin/status` of a server at `base`, with its admin token.
+pub async fn admin_status(client: &reqwest::Client, base: &str, token: &str) -> serde_json::Value {
+    client
+        .get(format!("{base}/v1/admin/status"))
+        .bearer_auth(token)
+        .send()
+        .await
+        .unwrap()
+        .json()
+        .await
+        .unwrap()
+}
+
 /// A reader's message to a server at `base` (a process of the test's own);
 /// the reply as JSON.
 pub async fn ask_at(

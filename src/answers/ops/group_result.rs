@@ -173,34 +173,16 @@ fn run(input: &OpInput) -> OpOutput {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::answers::ops::testing::{entity, run_with};
     use crate::dataset::demo;
-    use std::collections::BTreeMap;
 
     fn run_on(data: &crate::dataset::Dataset, group: &str, contest: &str) -> OpOutput {
         let gi = data.group(group).unwrap();
         let ci = data.contests.iter().position(|c| c.id == contest).unwrap();
         let mut slots = Slots::new();
-        slots.insert(
-            "group".into(),
-            SlotValue::Entity {
-                entity: EntityRef::Group(gi),
-            },
-        );
-        slots.insert(
-            "contest".into(),
-            SlotValue::Entity {
-                entity: EntityRef::Contest(ci),
-            },
-        );
-        let now = data.clock.unwrap().to_zoned_datetime(data.tz.clone());
-        run(&OpInput {
-            data,
-            slots: &slots,
-            now: &now,
-            settings: &BTreeMap::new(),
-            topics: &[],
-            stale_after: std::time::Duration::from_secs(600),
-        })
+        slots.insert("group".into(), entity(EntityRef::Group(gi)));
+        slots.insert("contest".into(), entity(EntityRef::Contest(ci)));
+        run_with(run, data, &slots)
     }
 
     fn said(out: &OpOutput, fact: &str) -> Option<String> {

@@ -383,3 +383,31 @@ pub(crate) const fn no_data(name: &'static str, facts: &'static [&'static str]) 
         facts,
     }
 }
+
+/// Running one operation in unit tests, as the engine would.
+#[cfg(test)]
+pub(crate) mod testing {
+    use super::*;
+
+    /// Runs `run` on `data` with `slots`, at the data's own demo clock,
+    /// with no intent settings and the default staleness.
+    pub fn run_with(run: fn(&OpInput) -> OpOutput, data: &Dataset, slots: &Slots) -> OpOutput {
+        let now = data
+            .clock
+            .expect("test data have a demo clock")
+            .to_zoned_datetime(data.tz.clone());
+        run(&OpInput {
+            data,
+            slots,
+            now: &now,
+            settings: &BTreeMap::new(),
+            topics: &[],
+            stale_after: std::time::Duration::from_secs(600),
+        })
+    }
+
+    /// A slot holding an entity.
+    pub fn entity(e: EntityRef) -> SlotValue {
+        SlotValue::Entity { entity: e }
+    }
+}

@@ -110,20 +110,12 @@ fn run(input: &OpInput) -> OpOutput {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::answers::ops::testing::run_with;
     use crate::dataset::demo;
     use crate::dataset::Dataset;
-    use std::collections::BTreeMap;
 
     fn facts(data: &Dataset, slots: &Slots) -> (&'static str, HashMap<String, Value>) {
-        let now = data.clock.unwrap().to_zoned_datetime(data.tz.clone());
-        match run(&OpInput {
-            data,
-            slots,
-            now: &now,
-            settings: &BTreeMap::new(),
-            topics: &[],
-            stale_after: std::time::Duration::from_secs(600),
-        }) {
+        match run_with(run, data, slots) {
             OpOutput::Done { outcome, facts, .. } => (outcome, facts),
             other => panic!("{other:?}"),
         }

@@ -159,34 +159,19 @@ fn run(input: &OpInput) -> OpOutput {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::answers::ops::testing::{entity, run_with};
     use crate::answers::value::Style;
     use crate::dataset::demo;
     use crate::dataset::Dataset;
-    use std::collections::BTreeMap;
 
     fn run_on(data: &Dataset, contest: &str, count: Option<u32>) -> OpOutput {
         let ci = data.contests.iter().position(|c| c.id == contest).unwrap();
         let mut slots = Slots::new();
-        slots.insert(
-            "contest".into(),
-            SlotValue::Entity {
-                entity: EntityRef::Contest(ci),
-            },
-        );
+        slots.insert("contest".into(), entity(EntityRef::Contest(ci)));
         if let Some(n) = count {
             slots.insert("count".into(), SlotValue::Count { value: n });
         }
-        let now = jiff::Timestamp::from_second(1_818_180_000)
-            .unwrap()
-            .to_zoned_datetime(data.tz.clone());
-        run(&OpInput {
-            data,
-            slots: &slots,
-            now: &now,
-            settings: &BTreeMap::new(),
-            topics: &[],
-            stale_after: std::time::Duration::from_secs(600),
-        })
+        run_with(run, data, &slots)
     }
 
     fn text(out: &OpOutput, fact: &str) -> (String, String) {
