@@ -314,7 +314,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     let before = turns(&c).await;
     click(
         &c,
-        Locator::Css("#transcript .turn:last-of-type .quick-replies button"),
+        Locator::Css("#thread .turn:last-of-type .quick-replies button"),
     )
     .await;
     let turn = settled_turn(&c, before).await;
@@ -376,7 +376,7 @@ async fn scenario(c: Client, base: String, closed_base: String) {
     let before = turns(&c).await;
     click(
         &c,
-        Locator::Css("#transcript .turn:last-of-type .options button:nth-child(2)"),
+        Locator::Css("#thread .turn:last-of-type .options button:nth-child(2)"),
     )
     .await;
     let turn = settled_turn(&c, before).await;
@@ -583,7 +583,7 @@ async fn table_rows(c: &Client, id: &str) -> Value {
 async fn turns(c: &Client) -> u64 {
     js(
         c,
-        "return document.querySelectorAll('#transcript .turn').length",
+        "return document.querySelectorAll('#thread .turn').length",
     )
     .await
     .as_u64()
@@ -610,7 +610,7 @@ async fn settled_turn(c: &Client, before: u64) -> Value {
         c,
         "the reply to appear",
         &format!(
-            "const all = document.querySelectorAll('#transcript .turn');\n\
+            "const all = document.querySelectorAll('#thread .turn');\n\
              if (all.length <= {before}) return null;\n\
              const t = all[all.length - 1];\n\
              if (t.dataset.state === 'pending') return null;\n\

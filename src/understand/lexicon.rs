@@ -89,7 +89,7 @@ pub struct Lexicon {
     /// How fuzzy names begin and end, by word count: the first three
     /// letters of their first word and the last three of their last. Gluing a split name
     /// back, or growing a first name into a longer one, only looks up forms
-    /// that start and end like some name, which a transcript's split and
+    /// that start and end like some name, which speech recognition's splits and
     /// most misspellings keep ("dun varick" → "dunvarick", like
     /// "dunvarrick"), so most questions pay for no extra lookup at all.
     name_shapes: HashSet<(usize, String, String)>,
@@ -598,7 +598,7 @@ impl Lexicon {
         }
     }
 
-    /// Names a transcript split into pieces: "dun varick" is Dunvarrick,
+    /// Names that speech recognition split into pieces: "dun varick" is Dunvarrick,
     /// "wren low sands" is Wrenlow Sands. Neighbouring uncovered words are
     /// glued in every way and looked up against names of as many words;
     /// only a close match (0.9) counts, so two everyday words never turn

@@ -217,7 +217,7 @@
   }
 
   function scrollToEnd() {
-    const t = $("transcript");
+    const t = $("thread");
     t.scrollTop = t.scrollHeight;
   }
 
@@ -234,7 +234,7 @@
     turn.append(el("p", "question", question));
     const reply = el("div", "reply", "…");
     turn.append(reply);
-    $("transcript").append(turn);
+    $("thread").append(turn);
     scrollToEnd();
 
     try {
@@ -279,7 +279,7 @@
   $("channel").addEventListener("change", () => {
     channel = $("channel").value;
     const note = el("p", "channel-switch", "Now on " + channel + ": a conversation of its own");
-    $("transcript").append(note);
+    $("thread").append(note);
     scrollToEnd();
     $("question").focus();
   });
@@ -287,7 +287,7 @@
   $("new-conversation").addEventListener("click", () => {
     reader = "desk-" + randomHex(8);
     showReader();
-    $("transcript").replaceChildren();
+    $("thread").replaceChildren();
     hideError($("ask-error"));
     $("understanding").hidden = true;
     $("understanding-empty").hidden = false;
