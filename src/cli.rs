@@ -286,8 +286,7 @@ fn replayed(snap: Snapshot, c: &Common) -> Result<Snapshot, String> {
         let batch: crate::dataset::changes::Batch =
             serde_json::from_str(&step.body).map_err(|e| e.to_string())?;
         // A batch without its own time keeps the data's.
-        let as_of = data.as_of.to_zoned_datetime(data.tz.clone());
-        let as_of = as_of.strftime("%Y-%m-%dT%H:%M:%S%:z").to_string();
+        let as_of = engine::rfc3339(&data.as_of.to_zoned_datetime(data.tz.clone()));
         data = crate::dataset::changes::apply(&data, &batch, &as_of).map_err(|problems| {
             let list: Vec<String> = problems.iter().map(|p| p.to_string()).collect();
             format!("{}: {}", step.path.display(), list.join("; "))

@@ -127,7 +127,7 @@ pub enum Clock {
 }
 
 /// An RFC 3339 time with its offset, as replies and the admin API show it.
-fn rfc3339(t: &ZonedDateTime) -> String {
+pub fn rfc3339(t: &ZonedDateTime) -> String {
     t.strftime("%Y-%m-%dT%H:%M:%S%:z").to_string()
 }
 
