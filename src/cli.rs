@@ -189,6 +189,9 @@ pub enum Command {
         /// Print the figures as JSON.
         #[arg(long)]
         json: bool,
+        /// Print the figures for each tag as well.
+        #[arg(long)]
+        by_tag: bool,
     },
 }
 
@@ -456,7 +459,8 @@ pub async fn run(cli: Cli) -> i32 {
             set,
             verbose,
             json,
-        } => crate::eval::run_cli(&common, &set, verbose, json).await,
+            by_tag,
+        } => crate::eval::run_cli(&common, &set, verbose, json, by_tag).await,
         Command::Test { common, paths } => crate::scripts::run(&common, &paths).await,
         Command::Replay {
             server,

@@ -33,6 +33,12 @@ pub struct Turn {
     pub slots: Option<BTreeMap<String, String>>,
     #[serde(default)]
     pub outcome: Option<Outcome>,
+    /// What the question asks for (`who`, `count`, `margin`...; the values
+    /// are in docs/intents.md). A reply that answers with another focus
+    /// answers a different question: with outcome `answered` it counts as
+    /// a wrong answer even when every fact in it is true.
+    #[serde(default)]
+    pub focus: Option<String>,
     /// Phrases the reply must contain (case-insensitive).
     #[serde(default)]
     pub says: Vec<String>,
@@ -84,7 +90,24 @@ pub struct Report {
     /// Confident answers (outcome answered) with a wrong fact, over all turns.
     pub wrong_answers: usize,
     pub wrong_answer_rate: f64,
+    /// Answers whose focus differs from the labelled one (included in
+    /// `wrong_answers`).
+    pub wrong_focus: usize,
+    /// The same figures for the turns carrying each tag (a conversation's
+    /// tags count for each of its turns).
+    pub by_tag: BTreeMap<String, TagFigures>,
     pub failures: Vec<Failure>,
+}
+
+/// Figures for the turns of one tag.
+#[derive(Debug, Clone, Default, Serialize)]
+pub struct TagFigures {
+    pub turns: usize,
+    pub intent_total: usize,
+    pub intent_correct: usize,
+    pub answer_total: usize,
+    pub answer_correct: usize,
+    pub wrong_answers: usize,
 }
 
 /// Targets for the demo set.
@@ -154,16 +177,22 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
     };
     let (mut tp, mut fp, mut fn_) = (0usize, 0usize, 0usize);
     for (ci, case) in cases.iter().enumerate() {
-        let turns: &[Turn] = match case {
-            Case::Single(turn) => std::slice::from_ref(turn),
-            Case::Conversation { conversation, .. } => {
+        let (turns, case_tags): (&[Turn], &[String]) = match case {
+            Case::Single(turn) => (std::slice::from_ref(turn), &[]),
+            Case::Conversation { conversation, tags } => {
                 r.conversations += 1;
-                conversation
+                (conversation, tags)
             }
         };
         let user = format!("eval-{ci}");
         for t in turns {
             r.turns += 1;
+            let mut tags: Vec<&String> = case_tags.iter().chain(&t.tags).collect();
+            tags.sort();
+            tags.dedup();
+            for tag in &tags {
+                r.by_tag.entry((*tag).clone()).or_default().turns += 1;
+            }
             let answer = match engine.handle(&user, "chat", &t.ask).await {
                 Ok(a) => a,
                 Err(e) => {
@@ -182,6 +211,11 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
             if let Some(want) = &t.intent {
                 r.intent_total += 1;
                 let got = reply.intent.clone().unwrap_or_else(|| "none".into());
+                for tag in &tags {
+                    let f = r.by_tag.entry((*tag).clone()).or_default();
+                    f.intent_total += 1;
+                    f.intent_correct += usize::from(&got == want);
+                }
                 if &got == want {
                     r.intent_correct += 1;
                 } else {
@@ -218,7 +252,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
             }
             let mut answer_ok = true;
             if let Some(o) = t.outcome {
-                if reply.outcome != o {
+                if !outcome_meets(o, reply.outcome) {
                     problems.push(format!("outcome: expected {o:?}, got {:?}", reply.outcome));
                     answer_ok = false;
                 }
@@ -238,16 +272,36 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                     fact_wrong = true;
                 }
             }
-            if t.outcome.is_some() || !t.says.is_empty() || !t.never.is_empty() {
+            let mut focus_wrong = false;
+            if let (Some(want), Some(got)) = (&t.focus, &reply.focus) {
+                if want != got && reply.outcome == Outcome::Answered {
+                    problems.push(format!("focus: expected {want}, answered {got}"));
+                    focus_wrong = true;
+                    answer_ok = false;
+                }
+            }
+            let judged = t.outcome.is_some() || !t.says.is_empty() || !t.never.is_empty();
+            if judged {
                 r.answer_total += 1;
                 if answer_ok {
                     r.answer_correct += 1;
                 }
             }
             // Wrong-answer: the service answered with confidence, and the
-            // answer's intent, slots or facts were wrong.
-            if reply.outcome == Outcome::Answered && fact_wrong {
+            // answer's intent, slots or facts were wrong, or it answered
+            // another question than the one asked (its focus differs).
+            let wrong = reply.outcome == Outcome::Answered && (fact_wrong || focus_wrong);
+            if wrong {
                 r.wrong_answers += 1;
+                r.wrong_focus += usize::from(focus_wrong && !fact_wrong);
+            }
+            for tag in &tags {
+                let f = r.by_tag.entry((*tag).clone()).or_default();
+                if judged {
+                    f.answer_total += 1;
+                    f.answer_correct += usize::from(answer_ok);
+                }
+                f.wrong_answers += usize::from(wrong);
             }
             if !problems.is_empty() {
                 r.failures.push(Failure {
@@ -277,8 +331,42 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
     r
 }
 
+/// Whether a reply's outcome meets the labelled one. A label of
+/// `not_covered` (the service should decline: it cannot answer this) is met
+/// by either honest decline, `not_covered` or `not_understood`: neither
+/// asserts a fact. Every other label must match exactly.
+/// The figures by tag as a text table, tags in name order.
+pub fn tag_table(r: &Report) -> String {
+    let ratio = |a: usize, b: usize| {
+        if b == 0 {
+            "-".to_string()
+        } else {
+            format!("{:.3}", a as f64 / b as f64)
+        }
+    };
+    let mut out = format!(
+        "{:<18} {:>6} {:>8} {:>8} {:>7}\n",
+        "tag", "turns", "intent", "answer", "wrong"
+    );
+    for (tag, f) in &r.by_tag {
+        out.push_str(&format!(
+            "{:<18} {:>6} {:>8} {:>8} {:>7}\n",
+            tag,
+            f.turns,
+            ratio(f.intent_correct, f.intent_total),
+            ratio(f.answer_correct, f.answer_total),
+            f.wrong_answers
+        ));
+    }
+    out
+}
+
+fn outcome_meets(want: Outcome, got: Outcome) -> bool {
+    want == got || (want == Outcome::NotCovered && got == Outcome::NotUnderstood)
+}
+
 /// `tidings eval`.
-pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool) -> i32 {
+pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool, by_tag: bool) -> i32 {
     let engine = match crate::cli::local_engine(common, Duration::from_secs(3600)) {
         Ok(e) => e,
         Err(e) => {
@@ -325,9 +413,12 @@ pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool) -> 
             r.answer_accuracy, r.answer_correct, r.answer_total
         );
         println!(
-            "wrong-answer rate {:.4}  ({}/{})  target <= 0.005",
-            r.wrong_answer_rate, r.wrong_answers, r.turns
+            "wrong-answer rate {:.4}  ({}/{}, {} of them a different question)  target <= 0.005",
+            r.wrong_answer_rate, r.wrong_answers, r.turns, r.wrong_focus
         );
+        if by_tag {
+            print!("{}", tag_table(&r));
+        }
     }
     if r.meets_targets() {
         0

@@ -39,6 +39,11 @@ pub enum Outcome {
     NotUnderstood,
     /// The data has nothing to give yet (not decided, no such result).
     NoData,
+    /// The question is understood well enough to say what it asks, and
+    /// neither the data nor any intent holds that (an athlete's height, a
+    /// count limited in a way no intent can limit it). The reply says what
+    /// is not known instead of answering a nearby question.
+    NotCovered,
 }
 
 /// A filled slot as shown in replies.
@@ -66,6 +71,10 @@ pub struct Reply {
     pub intent: Option<String>,
     pub slots: BTreeMap<String, SlotOut>,
     pub outcome: Outcome,
+    /// What the reply answers (`who`, `count`, `margin`...): the focus of
+    /// the question as understood, which the intent declares it answers.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub focus: Option<String>,
     /// The operation's own outcome name ("scheduled", "award"...).
     pub detail: Option<String>,
     /// How sure the service is of the intent and names, from 0 to 1.
@@ -482,6 +491,7 @@ fn run(
                 intent: Some(intent.name.clone()),
                 slots: slots_out(ctx.data, &slots),
                 outcome: class,
+                focus: None,
                 detail: Some(outcome.to_string()),
                 confidence,
                 options: vec![],
@@ -862,6 +872,7 @@ fn plain_reply(
         intent: intent.map(|i| i.name.clone()),
         slots: BTreeMap::new(),
         outcome,
+        focus: None,
         detail: None,
         confidence,
         options: vec![],
