@@ -332,9 +332,9 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
 }
 
 /// Whether a reply's outcome meets the labelled one. A label of
-/// `not_covered` (the service should decline: it cannot answer this) is met
-/// by either honest decline, `not_covered` or `not_understood`: neither
-/// asserts a fact. Every other label must match exactly.
+/// `not_covered` or `not_understood` (the service should decline) is met
+/// by either honest decline: neither asserts a fact. Every other label
+/// must match exactly.
 /// The figures by tag as a text table, tags in name order.
 pub fn tag_table(r: &Report) -> String {
     let ratio = |a: usize, b: usize| {
@@ -362,7 +362,8 @@ pub fn tag_table(r: &Report) -> String {
 }
 
 fn outcome_meets(want: Outcome, got: Outcome) -> bool {
-    want == got || (want == Outcome::NotCovered && got == Outcome::NotUnderstood)
+    let declines = |o: Outcome| matches!(o, Outcome::NotCovered | Outcome::NotUnderstood);
+    want == got || (declines(want) && declines(got))
 }
 
 /// `tidings eval`.

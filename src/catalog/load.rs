@@ -7,9 +7,10 @@ use std::path::Path;
 use serde::Deserialize;
 use serde_saphyr::Spanned;
 
-use super::{Catalog, Intent, ServiceWording, SlotDef, Template};
+use super::{Catalog, Focus, Honoured, Intent, ServiceWording, SlotDef, Template};
 use crate::answers::channel::Channels;
 use crate::answers::ops::{self, EntityKind};
+use crate::understand::vocabulary::{Vocabulary, VocabularyFile, VOCABULARY_FILE};
 
 /// One problem in a catalog file.
 #[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
@@ -42,6 +43,12 @@ struct IntentFile {
     #[serde(default)]
     summary: Option<String>,
     operation: Spanned<String>,
+    /// What the intent answers (focus names).
+    #[serde(default)]
+    answers: Option<Spanned<Vec<Spanned<String>>>>,
+    /// Limits it honours beyond its slots.
+    #[serde(default)]
+    honours: Vec<Spanned<String>>,
     phrasings: Vec<Spanned<String>>,
     #[serde(default)]
     slots: BTreeMap<String, Spanned<SlotFile>>,
@@ -71,6 +78,15 @@ struct ServiceFile {
     not_understood: Spanned<String>,
     choose: Spanned<String>,
     reset: Spanned<String>,
+    /// A topic the data does not hold (`{what}`).
+    #[serde(default)]
+    not_covered: Option<Spanned<String>>,
+    /// A limit no intent honours (`{limits}`).
+    #[serde(default)]
+    cannot_limit: Option<Spanned<String>>,
+    /// A focus no intent answers (`{what}`).
+    #[serde(default)]
+    cannot_answer: Option<Spanned<String>>,
     #[serde(default)]
     examples: Vec<String>,
     /// Wording for one channel, by key (`not_understood`, `choose`, `reset`).
@@ -126,8 +142,29 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
     for (file, text) in files.iter().filter(|(f, _)| f.ends_with(CHANNELS_FILE)) {
         channels = Channels::with_file(file, text, &mut problems);
     }
+    let mut vocabulary = Vocabulary::default();
+    let mut vocabulary_file = None;
+    for (file, text) in files.iter().filter(|(f, _)| f.ends_with(VOCABULARY_FILE)) {
+        vocabulary_file = Some(file.clone());
+        match serde_saphyr::from_str::<VocabularyFile>(text) {
+            Ok(v) => {
+                match Vocabulary::from_file(v) {
+                    Ok(v) => vocabulary = v,
+                    Err(ps) => problems.extend(ps.into_iter().map(|(line, column, message)| {
+                        CatalogProblem {
+                            file: file.clone(),
+                            line,
+                            column,
+                            message,
+                        }
+                    })),
+                }
+            }
+            Err(e) => problems.push(yaml_problem(file, &e)),
+        }
+    }
     for (file, text) in files {
-        if file.ends_with(CHANNELS_FILE) {
+        if file.ends_with(CHANNELS_FILE) || file.ends_with(VOCABULARY_FILE) {
             continue;
         }
         if file.ends_with(SERVICE_FILE) {
@@ -170,6 +207,9 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
             message: "no intents found".into(),
         });
     }
+    if let Some(file) = &vocabulary_file {
+        check_vocabulary(file, &vocabulary, &intents, &mut problems);
+    }
     if !problems.is_empty() {
         return Err(CatalogError(problems));
     }
@@ -177,7 +217,51 @@ pub fn load_texts(files: &[(String, String)]) -> Result<Catalog, CatalogError> {
         intents,
         service: service.expect("checked above"),
         channels,
+        vocabulary,
     })
+}
+
+/// A synonym must stand for words some phrasing uses, or it changes
+/// nothing: the reader's word would still be read as unknown.
+fn check_vocabulary(
+    file: &str,
+    v: &Vocabulary,
+    intents: &[Intent],
+    problems: &mut Vec<CatalogProblem>,
+) {
+    let mut words: HashSet<String> = HashSet::new();
+    for i in intents {
+        for p in &i.phrasings {
+            let mut rest = p.as_str();
+            // Placeholders are not words.
+            while let Some(open) = rest.find('{') {
+                words.extend(
+                    crate::understand::normalize::normalize(&rest[..open])
+                        .split(' ')
+                        .map(String::from),
+                );
+                rest = rest[open..].find('}').map_or("", |c| &rest[open + c + 1..]);
+            }
+            words.extend(
+                crate::understand::normalize::normalize(rest)
+                    .split(' ')
+                    .map(String::from),
+            );
+        }
+    }
+    let mut reported = HashSet::new();
+    for (_, to) in &v.same_as {
+        for w in to {
+            if !words.contains(w) && reported.insert(w.clone()) {
+                problems.push(CatalogProblem {
+                    file: file.to_string(),
+                    line: 0,
+                    column: 0,
+                    message: format!("same_as: {w:?} is not a word of any phrasing, so readers' words for it would change nothing"),
+                });
+            }
+        }
+    }
 }
 
 /// A YAML syntax or shape problem, located.
@@ -268,6 +352,32 @@ fn service_wording(
     let reset = out.pop()?;
     let choose = out.pop()?;
     let not_understood = out.pop()?;
+    // The honest replies have built-in wording an editor may replace.
+    let mut optional = |given: &Option<Spanned<String>>, default: &str, names: &[&str]| {
+        let t = match given {
+            Some(spanned) => {
+                let t = template(file, spanned, problems)?;
+                for n in t.names() {
+                    if !names.contains(&n) {
+                        problems.push(at(
+                            file,
+                            spanned,
+                            format!(
+                                "placeholder {{{n}}} is not available here; use {}",
+                                list_or_none(names)
+                            ),
+                        ));
+                    }
+                }
+                t
+            }
+            None => Template::parse(default).expect("built-in wording parses"),
+        };
+        Some(t)
+    };
+    let not_covered = optional(&s.not_covered, DEFAULT_NOT_COVERED, SERVICE_NAMES[3].1)?;
+    let cannot_limit = optional(&s.cannot_limit, DEFAULT_CANNOT_LIMIT, SERVICE_NAMES[4].1)?;
+    let cannot_answer = optional(&s.cannot_answer, DEFAULT_CANNOT_ANSWER, SERVICE_NAMES[5].1)?;
     let mut by_channel: HashMap<String, HashMap<String, Template>> = HashMap::new();
     for (channel, wording) in &s.channel_wording {
         check_channel(
@@ -279,18 +389,20 @@ fn service_wording(
             problems,
         );
         for (key, text) in wording {
-            let names: &[&str] = match key.as_str() {
-                "not_understood" => &["examples"],
-                "choose" => &["options", "noun"],
-                "reset" => &[],
-                other => {
-                    problems.push(at(
-                        file,
-                        text,
-                        format!("channel_wording: {other:?} is not service wording; use not_understood, choose or reset"),
-                    ));
-                    continue;
-                }
+            let Some((_, names)) = SERVICE_NAMES.iter().find(|(k, _)| k == key) else {
+                problems.push(at(
+                    file,
+                    text,
+                    format!(
+                        "channel_wording: {key:?} is not service wording; use {}",
+                        SERVICE_NAMES
+                            .iter()
+                            .map(|(k, _)| *k)
+                            .collect::<Vec<_>>()
+                            .join(", ")
+                    ),
+                ));
+                continue;
             };
             let Some(t) = template(file, text, problems) else {
                 continue;
@@ -317,10 +429,30 @@ fn service_wording(
         not_understood,
         choose,
         reset,
+        not_covered,
+        cannot_limit,
+        cannot_answer,
         examples: s.examples,
         by_channel,
     })
 }
+
+/// Service wording keys and the placeholders each may use.
+pub const SERVICE_NAMES: [(&str, &[&str]); 6] = [
+    ("not_understood", &["examples"]),
+    ("choose", &["options", "noun"]),
+    ("reset", &[]),
+    ("not_covered", &["what"]),
+    ("cannot_limit", &["limits"]),
+    ("cannot_answer", &["what"]),
+];
+
+/// Built-in wording for a topic the data does not hold.
+pub const DEFAULT_NOT_COVERED: &str = "Sorry, I don't have {what}.";
+/// Built-in wording for a limit no intent honours.
+pub const DEFAULT_CANNOT_LIMIT: &str = "Sorry, I can't answer that for {limits|and} on its own.";
+/// Built-in wording for a focus no intent answers.
+pub const DEFAULT_CANNOT_ANSWER: &str = "Sorry, I can't tell you {what} from these results.";
 
 /// A channel named in `channel_replies` or `channel_wording` must be a
 /// profile: the built-in ones or the folder's own `channels.yaml`, which is
@@ -526,6 +658,67 @@ fn check_intent(
         }
     }
 
+    let mut answers = Vec::new();
+    match &f.answers {
+        None => problems.push(at(
+            file,
+            &f.intent,
+            format!(
+                "an intent must say what it answers: `answers: [...]` with one or more of {}",
+                Focus::ALL
+                    .iter()
+                    .map(|f| f.name())
+                    .collect::<Vec<_>>()
+                    .join(", ")
+            ),
+        )),
+        Some(list) if list.value.is_empty() => {
+            problems.push(at(file, list, "answers: name at least one focus".into()))
+        }
+        Some(list) => {
+            for a in &list.value {
+                match Focus::from_name(a.value.trim()) {
+                    Some(x) if answers.contains(&x) => problems.push(at(
+                        file,
+                        a,
+                        format!("answers: {:?} is listed twice", a.value),
+                    )),
+                    Some(x) => answers.push(x),
+                    None => problems.push(at(
+                        file,
+                        a,
+                        format!(
+                            "answers: unknown focus {:?}; the focus names are {}",
+                            a.value,
+                            Focus::ALL
+                                .iter()
+                                .map(|f| f.name())
+                                .collect::<Vec<_>>()
+                                .join(", ")
+                        ),
+                    )),
+                }
+            }
+        }
+    }
+    let mut honours = Vec::new();
+    for h in &f.honours {
+        let w = h.value.trim();
+        if w == "negation" {
+            honours.push(Honoured::Negation);
+        } else if crate::understand::frame::EXTREMES.contains(&w) {
+            honours.push(Honoured::Extreme(w.to_string()));
+        } else {
+            problems.push(at(
+                file,
+                h,
+                format!(
+                    "honours: {w:?} is neither `negation` nor a superlative ({})",
+                    crate::understand::frame::EXTREMES.join(", ")
+                ),
+            ));
+        }
+    }
     if f.phrasings.is_empty() {
         problems.push(at(
             file,
@@ -647,6 +840,8 @@ fn check_intent(
         name,
         summary: f.summary,
         operation: op,
+        answers,
+        honours,
         phrasings,
         slots,
         replies,

@@ -14,6 +14,36 @@ pub use load::{load_dir, load_texts, yaml_problem, CatalogError, CatalogProblem}
 pub use template::Template;
 
 use crate::answers::ops::{EntityKind, OpSpec};
+pub use crate::understand::frame::Focus;
+
+/// A limit of a question an intent declares it honours.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum Honoured {
+    /// A superlative word ("most", "best", "fastest"): the intent's answer
+    /// is that extreme.
+    Extreme(String),
+    /// "not", "never", "without": the answer covers both ways.
+    Negation,
+}
+
+impl Intent {
+    /// Whether the intent answers questions with this focus.
+    pub fn answers_focus(&self, f: Focus) -> bool {
+        self.answers.contains(&f)
+    }
+
+    /// Whether the intent honours this superlative.
+    pub fn honours_extreme(&self, word: &str) -> bool {
+        self.honours
+            .iter()
+            .any(|h| matches!(h, Honoured::Extreme(w) if w == word))
+    }
+
+    /// Whether the intent honours a negation.
+    pub fn honours_negation(&self) -> bool {
+        self.honours.contains(&Honoured::Negation)
+    }
+}
 
 /// Every intent of a scenario, plus the service-wide wording.
 #[derive(Debug, Clone)]
@@ -22,6 +52,8 @@ pub struct Catalog {
     pub service: ServiceWording,
     /// Channel profiles: the built-in ones and the folder's own.
     pub channels: crate::answers::channel::Channels,
+    /// The scenario's own words (`vocabulary.yaml`).
+    pub vocabulary: crate::understand::vocabulary::Vocabulary,
 }
 
 impl Catalog {
@@ -46,6 +78,13 @@ pub struct Intent {
     /// What the intent answers, listed by help replies.
     pub summary: Option<String>,
     pub operation: &'static OpSpec,
+    /// What the intent answers: the focus of the questions it takes
+    /// (`answers:`). A question asking for something else never gets this
+    /// intent's answer.
+    pub answers: Vec<Focus>,
+    /// Limits of a question the intent honours beyond its slots
+    /// (`honours:`): superlatives ("most", "best") and negation.
+    pub honours: Vec<Honoured>,
     /// Example phrasings with `{slot}` placeholders.
     pub phrasings: Vec<String>,
     pub slots: Vec<SlotDef>,
@@ -88,6 +127,15 @@ pub struct ServiceWording {
     pub choose: Template,
     /// After "start over".
     pub reset: Template,
+    /// When the question asks about something the data does not hold:
+    /// `{what}` names it ("athletes' heights").
+    pub not_covered: Template,
+    /// When the question sets a limit no intent can honour: `{limits}`
+    /// names it ("swimming", "Friday 13 August").
+    pub cannot_limit: Template,
+    /// When no intent answers what the question asks for: `{what}` names
+    /// it ("margins").
+    pub cannot_answer: Template,
     /// Example questions offered when a message is not understood.
     pub examples: Vec<String>,
     /// Wording for one channel (by channel name, then key) over the above.

@@ -13,7 +13,7 @@ use crate::catalog::{Catalog, Intent};
 use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::Scored;
 use crate::understand::lexicon::Target;
-use crate::understand::slots::{resolve_contest, Need, MAX_OPTIONS};
+use crate::understand::slots::{fill, resolve_contest, Filled, Need, MAX_OPTIONS};
 use crate::understand::{Analysis, Understanding};
 
 use super::session::{load_entity, load_slots, Session};
@@ -141,7 +141,8 @@ pub fn variation<'c>(
     }
     let best_score = best.map(|b| b.score).unwrap_or(0.0);
     let cue = cue_len(a) > 0;
-    let fragment = a.tokens.len() <= FRAGMENT && best_score < super::turn::MIN_SCORE;
+    let fragment =
+        a.tokens.len() <= FRAGMENT && best_score < crate::understand::classify::MIN_SCORE;
     let follows = if cue {
         own_question_score(understanding, a) < OWN_QUESTION
     } else {
@@ -483,4 +484,34 @@ pub fn carried_over(
         }),
         other => Some(other.clone()),
     }
+}
+
+/// Fills the intent's slots from the message, then from the conversation:
+/// pronouns first ("she"), then details the last question had and this one
+/// leaves out.
+pub fn fill_in_context(data: &Dataset, s: &Session, intent: &Intent, a: &Analysis) -> Filled {
+    let mut carried = Slots::new();
+    let pointed = resolve_pointers(data, s, intent, a, &mut carried);
+    let mut filled = fill(data, intent, a, &carried);
+    if pointed.is_some() {
+        filled.need = pointed;
+        return filled;
+    }
+    // Each round fills one missing slot; an intent has only a few.
+    for _ in 0..intent.slots.len() {
+        let Some(Need::Missing { slot }) = &filled.need else {
+            break;
+        };
+        // "she" that fits nobody is asked about, never replaced by whoever
+        // the last question was about.
+        if intent.slot(slot).is_some_and(|d| points_at(a, d.kind)) {
+            break;
+        }
+        let Some(v) = carried_over(data, s, intent, slot, a) else {
+            break;
+        };
+        carried.insert(slot.clone(), v);
+        filled = fill(data, intent, a, &carried);
+    }
+    filled
 }

@@ -6,8 +6,11 @@
 //! - [`redis_store`]: the store shared by replicas, in Redis;
 //! - [`context`]: what the conversation adds to a message (follow-ups,
 //!   pronouns, details carried over);
+//! - [`choose`]: which intent answers the question that was asked, or
+//!   what about it cannot be answered;
 //! - [`turn`]: one message in, one reply out, given the session.
 
+pub mod choose;
 pub mod context;
 pub mod redis_store;
 pub mod session;

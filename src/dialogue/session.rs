@@ -31,6 +31,8 @@ pub enum StoredSlot {
     Award { value: String },
     Date { value: String },
     Count { value: u32 },
+    Place { value: u32 },
+    Round { value: String },
 }
 
 /// A question the service asked and is waiting on.
@@ -194,6 +196,10 @@ pub fn store_slots(data: &Dataset, slots: &Slots) -> BTreeMap<String, StoredSlot
                     value: value.to_string(),
                 },
                 SlotValue::Count { value } => StoredSlot::Count { value: *value },
+                SlotValue::Place { value } => StoredSlot::Place { value: *value },
+                SlotValue::Round { value } => StoredSlot::Round {
+                    value: value.clone(),
+                },
             };
             (k.clone(), s)
         })
@@ -219,6 +225,10 @@ pub fn load_slots(data: &Dataset, stored: &BTreeMap<String, StoredSlot>) -> Slot
                     value: value.parse().ok()?,
                 },
                 StoredSlot::Count { value } => SlotValue::Count { value: *value },
+                StoredSlot::Place { value } => SlotValue::Place { value: *value },
+                StoredSlot::Round { value } => SlotValue::Round {
+                    value: value.clone(),
+                },
             };
             Some((k.clone(), s))
         })

@@ -8,6 +8,7 @@ use std::sync::LazyLock;
 use jiff::ZonedDateTime;
 use serde::{Deserialize, Serialize};
 
+use super::choose::{self, Choice, Gap};
 use super::context;
 use super::session::{load_entity, load_slots, store_entity, store_slots, Pending, Session};
 use crate::answers::channel::Profile;
@@ -17,15 +18,12 @@ use crate::answers::value::{Style, Value};
 use crate::catalog::{Catalog, Intent, Template};
 use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::Scored;
+use crate::understand::frame::Focus;
 use crate::understand::lexicon::Target;
-use crate::understand::slots::{fill, resolve_contest, sport_noun, Filled, Need};
+use crate::understand::slots::{fill, resolve_contest, sport_noun, Need};
 use crate::understand::{Analysis, Understanding};
 
-/// Below this score no intent is taken to be meant.
-pub const MIN_SCORE: f32 = 0.45;
-/// Asking for a missing detail needs more certainty than answering: a
-/// question back to an off-topic message would only confuse.
-pub const MIN_SCORE_TO_ASK: f32 = 0.55;
+pub use crate::understand::classify::{MIN_SCORE, MIN_SCORE_TO_ASK};
 
 /// What kind of reply this is.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
@@ -163,6 +161,8 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
     }
     if reply.outcome == Outcome::NotUnderstood && !asked.is_empty() {
         reply.unanswered.push((asked, "not_understood"));
+    } else if reply.outcome == Outcome::NotCovered && !asked.is_empty() {
+        reply.unanswered.push((asked, "not_covered"));
     }
     (reply, s)
 }
@@ -245,21 +245,13 @@ fn turn_inner(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Sessio
         let confidence = filled.certainty;
         (intent, filled, confidence)
     } else {
-        let Some(best) = best.filter(|b| b.score >= MIN_SCORE) else {
-            return (not_understood(ctx, &a), s, false);
-        };
-        let Some(intent) = ctx.catalog.intent(&best.intent) else {
-            return (not_understood(ctx, &a), s, false);
-        };
-        let filled = fill_in_context(ctx, &s, intent, &a);
-        if matches!(filled.need, Some(Need::Missing { .. }))
-            && best.score < MIN_SCORE_TO_ASK
-            && a.mentions.is_empty()
-        {
-            return (not_understood(ctx, &a), s, false);
+        match choose::choose(ctx.data, ctx.catalog, &s, &a) {
+            Choice::Intent(c) => (c.intent, c.filled, c.confidence),
+            Choice::NotUnderstood => return (not_understood(ctx, &a), s, false),
+            Choice::NotCovered { gap, near } => {
+                return (not_covered(ctx, &a, &gap, near), s, false);
+            }
         }
-        let confidence = best.score.min(1.0) * filled.certainty;
-        (intent, filled, confidence)
     };
     let reply = proceed(
         ctx,
@@ -271,39 +263,6 @@ fn turn_inner(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Sessio
         &a,
     );
     (reply, s, false)
-}
-
-/// Fills the intent's slots from the message, then from the conversation:
-/// pronouns first ("she"), then details the last question had and this one
-/// leaves out.
-fn fill_in_context(ctx: &TurnContext, s: &Session, intent: &Intent, a: &Analysis) -> Filled {
-    let mut carried = Slots::new();
-    let pointed = context::resolve_pointers(ctx.data, s, intent, a, &mut carried);
-    let mut filled = fill(ctx.data, intent, a, &carried);
-    if pointed.is_some() {
-        filled.need = pointed;
-        return filled;
-    }
-    // Each round fills one missing slot; an intent has only a few.
-    for _ in 0..intent.slots.len() {
-        let Some(Need::Missing { slot }) = &filled.need else {
-            break;
-        };
-        // "she" that fits nobody is asked about, never replaced by whoever
-        // the last question was about.
-        if intent
-            .slot(slot)
-            .is_some_and(|d| context::points_at(a, d.kind))
-        {
-            break;
-        }
-        let Some(v) = context::carried_over(ctx.data, s, intent, slot, a) else {
-            break;
-        };
-        carried.insert(slot.clone(), v);
-        filled = fill(ctx.data, intent, a, &carried);
-    }
-    filled
 }
 
 /// Runs the intent, or asks for what is still needed.
@@ -478,8 +437,12 @@ fn run(
                 })
                 .unwrap_or_default();
             let quick_replies = quick_replies(ctx, intent, &slots);
-            s.last_intent = Some(intent.name.clone());
-            s.last_slots = store_slots(ctx.data, &slots);
+            // Greetings, thanks and help are said between questions: the
+            // next "and in Y?" still follows the last question.
+            if !intent.answers_focus(Focus::Chat) {
+                s.last_intent = Some(intent.name.clone());
+                s.last_slots = store_slots(ctx.data, &slots);
+            }
             let asked: Vec<EntityRef> = slots.values().filter_map(SlotValue::entity).collect();
             s.remember(ctx.data, &asked, &subjects, &mentioned);
             let class = match spec.class {
@@ -491,7 +454,12 @@ fn run(
                 intent: Some(intent.name.clone()),
                 slots: slots_out(ctx.data, &slots),
                 outcome: class,
-                focus: None,
+                focus: a
+                    .frame
+                    .focus
+                    .filter(|f| intent.answers_focus(*f))
+                    .or_else(|| intent.answers.first().copied())
+                    .map(|f| f.name().to_string()),
                 detail: Some(outcome.to_string()),
                 confidence,
                 options: vec![],
@@ -910,6 +878,98 @@ fn quick_replies(ctx: &TurnContext, intent: &Intent, slots: &Slots) -> Vec<Strin
         .map(|t| t.render(&values, Style::Text))
         .take(ctx.channel.quick_replies)
         .collect()
+}
+
+/// The honest reply to a question understood well enough to say what
+/// cannot be answered: a topic the data does not hold, a limit no intent
+/// honours, or a focus no intent answers. It goes on the unanswered list.
+fn not_covered(ctx: &TurnContext, a: &Analysis, gap: &Gap, near: Option<&Intent>) -> Reply {
+    let mut values = HashMap::new();
+    let (key, default) = match gap {
+        Gap::Unheld(what) => {
+            values.insert("what".to_string(), Value::Text(people_words(ctx, a, what)));
+            ("not_covered", &ctx.catalog.service.not_covered)
+        }
+        Gap::Limits(limits) => {
+            values.insert(
+                "limits".to_string(),
+                Value::List(limits.iter().map(|l| Value::Text(l.clone())).collect()),
+            );
+            ("cannot_limit", &ctx.catalog.service.cannot_limit)
+        }
+        Gap::Focus(f) => {
+            values.insert("what".to_string(), Value::Text(focus_words(ctx.data, *f)));
+            ("cannot_answer", &ctx.catalog.service.cannot_answer)
+        }
+    };
+    let said = ctx.service(key, default, &values);
+    let confidence = a
+        .scores
+        .first()
+        .map(|s| s.score)
+        .unwrap_or(0.0)
+        .clamp(0.0, 1.0);
+    let mut r = plain_reply(said, Outcome::NotCovered, None, confidence, a);
+    r.focus = a.frame.focus.map(|f| f.name().to_string());
+    if let Some(i) = near {
+        r.detail = Some(format!("closest intent: {}", i.name));
+    }
+    r
+}
+
+/// A topic's name with "{people}" replaced by what the people asked about
+/// are called: the named person's sport noun ("athletes'", "candidates'"),
+/// else the scenario's most common one.
+fn people_words(ctx: &TurnContext, a: &Analysis, what: &str) -> String {
+    if !what.contains("{people}") {
+        return what.to_string();
+    }
+    let person = a.mentions.iter().find_map(|m| match m.candidates.first() {
+        Some((Target::Entity(EntityRef::Competitor(p), _), _)) => Some(*p),
+        _ => None,
+    });
+    let sport = person
+        .and_then(|p| ctx.data.sport(&ctx.data.competitors[p].sport))
+        .or_else(|| {
+            // The sport most people are in.
+            let mut counts = vec![0usize; ctx.data.sports.len()];
+            for c in &ctx.data.competitors {
+                if let Some(s) = ctx.data.sport(&c.sport) {
+                    counts[s] += 1;
+                }
+            }
+            (0..counts.len()).max_by_key(|&i| counts[i])
+        });
+    let noun = sport
+        .map(|s| crate::answers::words::plural(&ctx.data.sports[s].noun))
+        .unwrap_or_else(|| "people".to_string());
+    what.replace("{people}'s", &format!("{noun}'"))
+        .replace("{people}", &noun)
+}
+
+/// How a reply names what a question of this focus asks for.
+fn focus_words(data: &Dataset, f: Focus) -> String {
+    match f {
+        Focus::Who => "who that was".into(),
+        Focus::HowDid => "how that went".into(),
+        Focus::Results => "those results".into(),
+        Focus::Count => "that count".into(),
+        Focus::Rank => "that ranking".into(),
+        Focus::Table => "that table".into(),
+        Focus::Margin => "that margin".into(),
+        Focus::Mark => "that mark".into(),
+        Focus::When => "when that is".into(),
+        Focus::Where => "where that is".into(),
+        Focus::Schedule => "that schedule".into(),
+        Focus::Status => "how far along that is".into(),
+        Focus::Whether => "that".into(),
+        Focus::Compare => "how they compare".into(),
+        Focus::GroupOf => format!("which {} someone is in", data.scenario.group_noun),
+        Focus::SportOf => "what someone competes in".into(),
+        Focus::Profile => "more about them".into(),
+        Focus::Open => "what is still open".into(),
+        Focus::Chat | Focus::Other => "that".into(),
+    }
 }
 
 fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {

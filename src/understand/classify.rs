@@ -48,6 +48,12 @@ pub struct Scored {
     pub shared: Vec<String>,
 }
 
+/// Below this score no intent is taken to be meant.
+pub const MIN_SCORE: f32 = 0.45;
+/// Asking for a missing detail needs more certainty than answering: a
+/// question back to an off-topic message would only confuse.
+pub const MIN_SCORE_TO_ASK: f32 = 0.55;
+
 /// Weight of a word the catalog never uses: it still counts against the
 /// match, so a long unrelated message scores low.
 const UNKNOWN_WEIGHT: f32 = 2.0;

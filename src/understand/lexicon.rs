@@ -83,6 +83,11 @@ pub struct Lexicon {
     /// Words of the catalog's phrasings and other common words, which are
     /// never taken for a misspelt name.
     vocabulary: HashSet<String>,
+    /// The words of the catalog's phrasings alone.
+    phrasing: HashSet<String>,
+    /// Every surface form, sorted, for exact lookups of a single form
+    /// (a possessive "galkaces" is "galkace"'s).
+    surfaces: Vec<String>,
     /// The same words, for correcting misspelt question words.
     vocab_index: FuzzyIndex,
     vocab_words: Vec<String>,
@@ -260,9 +265,14 @@ const COMMON: &[&str] = &[
 
 impl Lexicon {
     /// Builds the lexicon from the data and the phrasing vocabulary.
-    pub fn build(data: &Dataset, phrasing_words: impl IntoIterator<Item = String>) -> Lexicon {
+    pub fn build(
+        data: &Dataset,
+        phrasing_words: impl IntoIterator<Item = String>,
+        vocab: &crate::understand::vocabulary::Vocabulary,
+    ) -> Lexicon {
+        let phrasing: HashSet<String> = phrasing_words.into_iter().collect();
         let mut vocabulary: HashSet<String> = COMMON.iter().map(|s| s.to_string()).collect();
-        vocabulary.extend(phrasing_words);
+        vocabulary.extend(phrasing.iter().cloned());
 
         let mut forms: HashMap<String, Vec<Target>> = HashMap::new();
         let mut add = |surface: &str, t: Target| {
@@ -317,6 +327,16 @@ impl Lexicon {
                 }
                 for v in short_forms(&normalize(&d.name)) {
                     add(&v, Target::Entity(e, Form::Alias));
+                }
+                // The scenario's shorter words for words of event names:
+                // "100 m butterfly" is also "100 m fly" and "100 fly".
+                for name in std::iter::once(&d.name).chain(&d.aliases) {
+                    for v in shortened(&normalize(name), &vocab.in_event_names) {
+                        for w in short_forms(&v) {
+                            add(&w, Target::Entity(e, Form::Alias));
+                        }
+                        add(&v, Target::Entity(e, Form::Alias));
+                    }
                 }
             }
         }
@@ -400,6 +420,8 @@ impl Lexicon {
         Lexicon {
             automaton,
             targets,
+            phrasing,
+            surfaces,
             fuzzy,
             fuzzy_targets,
             fuzzy_words,
@@ -413,6 +435,11 @@ impl Lexicon {
     /// Whether a word is an ordinary word of the catalog's questions.
     pub fn is_vocabulary(&self, word: &str) -> bool {
         self.vocabulary.contains(word)
+    }
+
+    /// Whether a word is used by some intent's phrasings.
+    pub fn is_phrasing_word(&self, word: &str) -> bool {
+        self.phrasing.contains(word)
     }
 
     /// The question word a misspelt word most likely is ("tomorow" →
@@ -476,12 +503,60 @@ impl Lexicon {
                 exact: true,
             });
         }
+        self.spot_possessive(tokens, &mut covered, &mut mentions);
         self.extend_events(tokens, &mut covered, &mut mentions);
         self.extend_first_names(tokens, &mut covered, &mut mentions);
         self.spot_glued(tokens, &mut covered, &mut mentions);
         self.spot_fuzzy(tokens, &mut covered, &mut mentions);
         mentions.sort_by_key(|m| m.start);
         mentions
+    }
+
+    /// A name written possessive, which loses its apostrophe in the
+    /// normal form: "galkaces time", "zoe quillons result". The form
+    /// without the final "s" must be a name exactly, and the word with it
+    /// must not be one.
+    fn spot_possessive(&self, tokens: &[&str], covered: &mut [bool], mentions: &mut Vec<Mention>) {
+        for i in 0..tokens.len() {
+            let t = tokens[i];
+            if covered[i] || t.len() < 4 || !t.ends_with('s') || self.vocabulary.contains(t) {
+                continue;
+            }
+            let stem = &t[..t.len() - 1];
+            // A full name: the words before, with the stem last.
+            for width in [3usize, 2, 1] {
+                if width > i + 1 || (i + 1 - width..i).any(|k| covered[k]) {
+                    continue;
+                }
+                let mut words: Vec<&str> = tokens[i + 1 - width..i].to_vec();
+                words.push(stem);
+                let query = words.join(" ");
+                let Ok(p) = self.surfaces.binary_search(&query) else {
+                    continue;
+                };
+                let mut candidates: Vec<(Target, f32)> = self.targets[p]
+                    .iter()
+                    .map(|t| {
+                        let w = match t {
+                            Target::Entity(_, f) => f.weight(),
+                            _ => 1.0,
+                        };
+                        (t.clone(), w)
+                    })
+                    .collect();
+                sort_candidates(&mut candidates);
+                covered[i + 1 - width..=i]
+                    .iter_mut()
+                    .for_each(|c| *c = true);
+                mentions.push(Mention {
+                    start: i + 1 - width,
+                    end: i + 1,
+                    candidates,
+                    exact: true,
+                });
+                break;
+            }
+        }
     }
 
     /// Event names are often half right: "200 m frestyle" matches "200 m"
@@ -784,6 +859,26 @@ fn short_forms(name: &str) -> Vec<String> {
     out
 }
 
+/// An event name with each of its words that has shorter forms replaced
+/// by them, one word at a time ("100 m butterfly" → "100 m fly").
+fn shortened(name: &str, short: &HashMap<String, Vec<String>>) -> Vec<String> {
+    if short.is_empty() {
+        return Vec::new();
+    }
+    let words: Vec<&str> = name.split(' ').collect();
+    let mut out = Vec::new();
+    for (i, w) in words.iter().enumerate() {
+        if let Some(forms) = short.get(*w) {
+            for f in forms {
+                let mut v: Vec<&str> = words.clone();
+                v[i] = f;
+                out.push(v.join(" "));
+            }
+        }
+    }
+    out
+}
+
 /// Words readers use for the usual categories.
 fn category_synonyms(cat: &str) -> &'static [&'static str] {
     match cat {
@@ -828,7 +923,11 @@ mod tests {
     #[test]
     fn a_name_split_into_pieces_is_glued_back() {
         let d = election();
-        let lex = Lexicon::build(&d, ["who", "won", "is", "winning", "in"].map(String::from));
+        let lex = Lexicon::build(
+            &d,
+            ["who", "won", "is", "winning", "in"].map(String::from),
+            &Default::default(),
+        );
         assert_eq!(
             spotted(&lex, &d, "who won dun varick"),
             vec![(2, 4, "council/dunvarrick".to_string())]
@@ -849,7 +948,7 @@ mod tests {
     #[test]
     fn a_first_name_that_starts_a_misspelt_longer_name_gives_way() {
         let d = election();
-        let lex = Lexicon::build(&d, ["who", "won"].map(String::from));
+        let lex = Lexicon::build(&d, ["who", "won"].map(String::from), &Default::default());
         // "Fenwick" alone is a candidate's first name; with "Green" it is the
         // ward Fennick Green, misspelt.
         assert_eq!(

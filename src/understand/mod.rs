@@ -10,10 +10,13 @@
 //! [`Understanding`] ties them together for one dataset and catalog.
 
 pub mod classify;
+pub mod english;
+pub mod frame;
 pub mod fuzzy;
 pub mod lexicon;
 pub mod normalize;
 pub mod slots;
+pub mod vocabulary;
 pub mod when;
 
 use jiff::civil::Date;
@@ -29,13 +32,19 @@ use lexicon::{Lexicon, Mention, Target};
 pub struct Understanding {
     pub lexicon: Lexicon,
     pub classifier: Classifier,
+    /// The scenario's own words.
+    pub vocabulary: vocabulary::Vocabulary,
 }
 
 /// What was read from one message.
 #[derive(Debug, Clone)]
 pub struct Analysis {
     pub normalized: String,
+    /// The words read: normalised, contractions and number words expanded,
+    /// the scenario's synonyms replaced, misspelt question words corrected.
     pub tokens: Vec<String>,
+    /// What is asked and the limits set ([`frame`]).
+    pub frame: frame::Frame,
     pub mentions: Vec<Mention>,
     pub days: Vec<when::DayMention>,
     pub count: Option<(usize, usize, u32)>,
@@ -58,6 +67,8 @@ pub fn placeholder(kind: EntityKind) -> &'static str {
         EntityKind::Award => "<award>",
         EntityKind::Date => "<date>",
         EntityKind::Count => "<count>",
+        EntityKind::Place => "<place>",
+        EntityKind::Round => "<phase>",
     }
 }
 
@@ -73,6 +84,15 @@ fn target_placeholder(t: &Target) -> &'static str {
     }
 }
 
+/// Normalises text and reads it as general English: contractions and chat
+/// short forms expanded, number words as figures. Questions and phrasings
+/// are read alike, so "who's" in one meets "who is" in the other.
+pub fn read_words(text: &str) -> Vec<String> {
+    let n = normalize::normalize(text);
+    let toks = normalize::tokens(&n);
+    english::numbers(english::expand(&toks))
+}
+
 /// Splits a phrasing into normalised words, with `{slot}` placeholders
 /// replaced by the token of the slot's kind.
 pub fn phrasing_tokens(
@@ -86,12 +106,7 @@ pub fn phrasing_tokens(
             Some(i) => (&rest[..i], Some(&rest[i + 1..])),
             None => (rest, None),
         };
-        out.extend(
-            normalize::normalize(lit)
-                .split(' ')
-                .filter(|s| !s.is_empty())
-                .map(String::from),
-        );
+        out.extend(read_words(lit));
         let Some(after) = after else { break };
         let close = after.find('}').unwrap_or(after.len());
         let name = after[..close].trim();
@@ -163,7 +178,7 @@ impl Understanding {
                 examples.push((i, p.clone(), toks));
             }
         }
-        let lexicon = Lexicon::build(data, words);
+        let lexicon = Lexicon::build(data, words, &catalog.vocabulary);
         let accepts = catalog
             .intents
             .iter()
@@ -184,14 +199,22 @@ impl Understanding {
         Understanding {
             lexicon,
             classifier,
+            vocabulary: catalog.vocabulary.clone(),
         }
     }
 
-    /// Reads one message.
+    /// Reads one message: normalise, read as English, replace the
+    /// scenario's synonyms, spot names, correct misspelt words, find days
+    /// and counts, read the frame, and score the intents.
     pub fn analyse(&self, text: &str, today: Date) -> Analysis {
         let normalized = normalize::normalize(text);
-        let toks: Vec<&str> = normalize::tokens(&normalized);
-        let mentions = self.lexicon.spot(&normalized, &toks);
+        let words = english::numbers(english::expand(&normalize::tokens(&normalized)));
+        let words = self
+            .vocabulary
+            .rewrite(words, &|w| self.lexicon.is_vocabulary(w));
+        let read = words.join(" ");
+        let toks: Vec<&str> = normalize::tokens(&read);
+        let mentions = self.lexicon.spot(&read, &toks);
         // Misspelt question words ("tomorow", "tabel") are corrected once
         // names have had their chance: a name is never "corrected".
         let mut covered = vec![false; toks.len()];
@@ -209,10 +232,55 @@ impl Understanding {
                 }
             })
             .collect();
-        let days = when::find_days(&toks, today);
+        let mut frame = frame::read(&toks, &mentions, &self.vocabulary.not_in_data);
+        // A topic an intent's phrasings name is one the editors answer.
+        if frame
+            .unheld
+            .as_ref()
+            .is_some_and(|u| (u.start..u.end).all(|k| self.lexicon.is_phrasing_word(toks[k])))
+        {
+            frame.unheld = None;
+            if frame.focus == Some(frame::Focus::Other) {
+                frame.focus = None;
+            }
+        }
+        let days = when::find_days(&toks, today, frame.past);
         let count = when::find_count(&toks);
+        for d in &days {
+            covered[d.start..d.end].iter_mut().for_each(|c| *c = true);
+        }
+        if let Some((s, e, _)) = count {
+            covered[s..e].iter_mut().for_each(|c| *c = true);
+        }
+        for i in frame.explained() {
+            if let Some(c) = covered.get_mut(i) {
+                *c = true;
+            }
+        }
+        // Content words nothing explains: not a name, a day, a count, a word
+        // of the frame, of a phrasing or of general English, and not in a
+        // chatty opening before the question starts.
+        frame.unexplained = (frame.onset..toks.len())
+            .filter(|&i| {
+                let t = toks[i];
+                !covered[i]
+                    && t.len() > 1
+                    && !t
+                        .chars()
+                        .all(|c| c.is_ascii_digit() || c == '.' || c == ':')
+                    && !english::is_filler(t)
+                    && !self.lexicon.is_vocabulary(t)
+                    && pointer_at(&toks, i).is_none()
+            })
+            .collect();
         let mut abstracted: Vec<String> = Vec::with_capacity(toks.len());
-        let mut i = 0;
+        // A chatty opening with no name in it is not part of the question
+        // the intents are scored on.
+        let mut i = if mentions.iter().any(|m| m.start < frame.onset) {
+            0
+        } else {
+            frame.onset
+        };
         while i < toks.len() {
             if let Some(m) = mentions.iter().find(|m| m.start == i) {
                 abstracted.push(
@@ -229,6 +297,9 @@ impl Understanding {
             } else if let Some((_, e, _)) = count.filter(|c| c.0 == i) {
                 abstracted.push("<count>".into());
                 i = e;
+            } else if let Some((_, e, _)) = frame.place.filter(|p| p.0 == i) {
+                abstracted.push("<place>".into());
+                i = e;
             } else if let Some((kind, len)) = pointer_at(&toks, i) {
                 abstracted.push(kind.into());
                 i += len;
@@ -241,6 +312,7 @@ impl Understanding {
         let scores = self.classifier.score(&abstracted);
         Analysis {
             tokens: toks.iter().map(|s| s.to_string()).collect(),
+            frame,
             normalized,
             mentions,
             days,

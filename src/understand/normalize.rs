@@ -194,7 +194,7 @@ fn tens(word: &str) -> Option<u64> {
         .map(|p| (p as u64 + 2) * 10)
 }
 
-fn is_number_word(word: &str) -> bool {
+pub(crate) fn is_number_word(word: &str) -> bool {
     matches!(word, "hundred" | "thousand" | "and")
         || small_number(word).is_some()
         || tens(word).is_some()
@@ -244,7 +244,7 @@ fn parse_below_10000(words: &[&str], i: &mut usize) -> Option<u64> {
 
 /// Value of a complete run of number words, or `None` if the run is not a
 /// well-formed number (every word must be consumed).
-fn parse_number_words(words: &[&str]) -> Option<u64> {
+pub(crate) fn parse_number_words(words: &[&str]) -> Option<u64> {
     if words == ["zero"] {
         return Some(0);
     }

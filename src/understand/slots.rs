@@ -5,6 +5,7 @@
 //! own question. Context narrows before asking: "Kovendal in the single
 //! sculls" only fits the rower.
 
+use super::frame::Place;
 use super::lexicon::{Mention, Target};
 use super::Analysis;
 use crate::answers::ops::{EntityKind, SlotValue, Slots};
@@ -182,6 +183,20 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                 }),
             EntityKind::Date => a.days.first().map(|d| SlotValue::Date { value: d.date }),
             EntityKind::Count => a.count.map(|c| SlotValue::Count { value: c.2 }),
+            EntityKind::Place => a.frame.place.map(|(_, _, p)| SlotValue::Place {
+                value: match p {
+                    Place::Nth(n) => n,
+                    Place::Last => crate::answers::ops::LAST_PLACE,
+                },
+            }),
+            EntityKind::Round => a
+                .mentions
+                .iter()
+                .flat_map(|m| m.candidates.first())
+                .find_map(|(t, _)| match t {
+                    Target::Phase(p) => Some(SlotValue::Round { value: p.clone() }),
+                    _ => None,
+                }),
             EntityKind::Contest => match resolve_contest(data, a, &slots) {
                 Ok(None) => None,
                 Ok(Some(ci)) => Some(SlotValue::Entity {

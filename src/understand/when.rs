@@ -36,6 +36,15 @@ const MONTHS: [&str; 12] = [
     "december",
 ];
 
+/// A day of the month at `tokens[i]`: "15", "15th", "fifteenth",
+/// "twenty first"; with how many tokens it spans.
+fn day_of_month_at(tokens: &[&str], i: usize) -> Option<(i8, usize)> {
+    if let Some((n, len)) = super::english::ordinal_at(tokens, i) {
+        return (1..=31).contains(&n).then_some((n as i8, len));
+    }
+    day_of_month(tokens.get(i)?).map(|d| (d, 1))
+}
+
 fn day_of_month(tok: &str) -> Option<i8> {
     let digits = tok
         .trim_end_matches("st")
@@ -56,10 +65,13 @@ fn month(tok: &str) -> Option<i8> {
 }
 
 /// Finds days in normalised tokens, relative to `today`. A bare weekday
-/// means the next such day, today included.
-pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
+/// means the next such day, today included, or, in a question about the
+/// past (`past`), the last such day: "who won on Friday" on a Saturday is
+/// yesterday.
+pub fn find_days(tokens: &[&str], today: Date, past: bool) -> Vec<DayMention> {
     let mut out = Vec::new();
     let mut i = 0;
+    let month_at = |k: usize| tokens.get(k).and_then(|n| month(n));
     while i < tokens.len() {
         let t = tokens[i];
         let found = match t {
@@ -68,31 +80,57 @@ pub fn find_days(tokens: &[&str], today: Date) -> Vec<DayMention> {
             "yesterday" => today.yesterday().ok().map(|d| (i + 1, d)),
             _ => {
                 if let Some((_, wd)) = WEEKDAYS.iter().find(|(n, _)| *n == t) {
-                    let ahead = (wd.to_monday_zero_offset()
+                    let mut ahead = (wd.to_monday_zero_offset()
                         - today.weekday().to_monday_zero_offset())
                     .rem_euclid(7);
+                    if past && ahead > 0 {
+                        ahead -= 7;
+                    }
                     today
                         .checked_add(jiff::Span::new().days(ahead as i64))
                         .ok()
                         .map(|d| (i + 1, d))
                 } else if let Ok(d) = t.parse::<Date>() {
                     Some((i + 1, d))
-                } else if let (Some(d), Some(m)) =
-                    (day_of_month(t), tokens.get(i + 1).and_then(|n| month(n)))
+                } else if let Some((d, len)) = day_of_month_at(tokens, i) {
+                    // "15 August", "the 15th of August", "fifteenth august".
+                    let of = usize::from(tokens.get(i + len) == Some(&"of"));
+                    if let Some(m) = month_at(i + len + of) {
+                        Date::new(today.year(), m, d)
+                            .ok()
+                            .map(|date| (i + len + of + 1, date))
+                    } else if i > 0
+                        && tokens[i - 1] == "the"
+                        && if t.starts_with(|c: char| c.is_ascii_digit()) {
+                            !t.chars().all(|c| c.is_ascii_digit())
+                        } else {
+                            // A word ("the fifteenth") only when nothing
+                            // else follows or "on" precedes: "the second
+                            // heat" is a round.
+                            i + len == tokens.len() || (i >= 2 && tokens[i - 2] == "on")
+                        }
+                    {
+                        // "on the 18th", "the fifteenth": this month.
+                        Date::new(today.year(), today.month(), d)
+                            .ok()
+                            .map(|date| (i + len, date))
+                    } else {
+                        None
+                    }
+                } else if let (Some(m), Some((d, len))) = (month(t), day_of_month_at(tokens, i + 1))
                 {
-                    Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
-                } else if let (Some(m), Some(d)) =
-                    (month(t), tokens.get(i + 1).and_then(|n| day_of_month(n)))
-                {
-                    Date::new(today.year(), m, d).ok().map(|date| (i + 2, date))
-                } else if let (true, Some(d)) = (
-                    i > 0 && tokens[i - 1] == "the" && t.ends_with(['h', 't', 'd']),
-                    day_of_month(t),
-                ) {
-                    // "on the 18th": this month.
-                    Date::new(today.year(), today.month(), d)
+                    // "August 15", "august the fifteenth".
+                    Date::new(today.year(), m, d)
                         .ok()
-                        .map(|date| (i + 1, date))
+                        .map(|date| (i + 1 + len, date))
+                } else if let (Some(m), true, Some((d, len))) = (
+                    month(t),
+                    tokens.get(i + 1) == Some(&"the"),
+                    day_of_month_at(tokens, i + 2),
+                ) {
+                    Date::new(today.year(), m, d)
+                        .ok()
+                        .map(|date| (i + 2 + len, date))
                 } else {
                     None
                 }
@@ -147,7 +185,7 @@ mod tests {
         // 2027-08-14 is a Saturday.
         let today = date(2027, 8, 14);
         let f = |s: &str| {
-            find_days(&s.split(' ').collect::<Vec<_>>(), today)
+            find_days(&s.split(' ').collect::<Vec<_>>(), today, s.contains("won"))
                 .first()
                 .map(|m| m.date)
         };
@@ -160,6 +198,17 @@ mod tests {
         assert_eq!(f("on 2027-08-12"), Some(date(2027, 8, 12)));
         assert_eq!(f("whats on on the 18th"), Some(date(2027, 8, 18)));
         assert_eq!(f("who won"), None);
+        assert_eq!(f("whats on the fifteenth"), Some(date(2027, 8, 15)));
+        assert_eq!(f("on the 15th of august"), Some(date(2027, 8, 15)));
+        assert_eq!(f("on august the fifteenth"), Some(date(2027, 8, 15)));
+        assert_eq!(f("the twenty first of august"), Some(date(2027, 8, 21)));
+        // In the past tense a weekday is the last one.
+        assert_eq!(f("who won on friday"), Some(date(2027, 8, 13)));
+        assert_eq!(f("who won on saturday"), Some(today));
+        assert_eq!(f("whats on on friday"), Some(date(2027, 8, 20)));
+        assert_eq!(f("who won the second heat"), None);
+        // A count or a place is not a day.
+        assert_eq!(f("top 5 in the 100 m"), None);
     }
 
     #[test]

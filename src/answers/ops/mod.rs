@@ -50,11 +50,15 @@ pub enum EntityKind {
     Date,
     /// A small whole number ("top five").
     Count,
+    /// A place in a contest ("fifth", "last").
+    Place,
+    /// A round of a contest ("heats", "final", "semifinal").
+    Round,
 }
 
 impl EntityKind {
     /// Every kind, for error messages and docs.
-    pub const ALL: [EntityKind; 9] = [
+    pub const ALL: [EntityKind; 11] = [
         EntityKind::Competitor,
         EntityKind::Group,
         EntityKind::Contest,
@@ -64,6 +68,8 @@ impl EntityKind {
         EntityKind::Award,
         EntityKind::Date,
         EntityKind::Count,
+        EntityKind::Place,
+        EntityKind::Round,
     ];
 
     /// The name editors write in YAML.
@@ -78,6 +84,8 @@ impl EntityKind {
             EntityKind::Award => "award",
             EntityKind::Date => "date",
             EntityKind::Count => "count",
+            EntityKind::Place => "place",
+            EntityKind::Round => "round",
         }
     }
 
@@ -91,12 +99,33 @@ impl EntityKind {
 #[derive(Debug, Clone, PartialEq, Serialize)]
 #[serde(tag = "kind", rename_all = "snake_case")]
 pub enum SlotValue {
-    Entity { entity: EntityRef },
-    Category { value: String },
-    Award { value: String },
-    Date { value: jiff::civil::Date },
-    Count { value: u32 },
+    Entity {
+        entity: EntityRef,
+    },
+    Category {
+        value: String,
+    },
+    Award {
+        value: String,
+    },
+    Date {
+        value: jiff::civil::Date,
+    },
+    Count {
+        value: u32,
+    },
+    /// A place: 1 for first, 0 for last.
+    Place {
+        value: u32,
+    },
+    /// A round, as the data names phases ("heat", "final").
+    Round {
+        value: String,
+    },
 }
+
+/// The place value that means "last".
+pub const LAST_PLACE: u32 = 0;
 
 impl SlotValue {
     /// The kind of value held.
@@ -113,6 +142,8 @@ impl SlotValue {
             SlotValue::Award { .. } => EntityKind::Award,
             SlotValue::Date { .. } => EntityKind::Date,
             SlotValue::Count { .. } => EntityKind::Count,
+            SlotValue::Place { .. } => EntityKind::Place,
+            SlotValue::Round { .. } => EntityKind::Round,
         }
     }
 
@@ -131,6 +162,9 @@ impl SlotValue {
             SlotValue::Category { value } | SlotValue::Award { value } => value.clone(),
             SlotValue::Date { value } => value.to_string(),
             SlotValue::Count { value } => value.to_string(),
+            SlotValue::Place { value: LAST_PLACE } => "last".to_string(),
+            SlotValue::Place { value } => value.to_string(),
+            SlotValue::Round { value } => value.clone(),
         }
     }
 
@@ -141,6 +175,9 @@ impl SlotValue {
             SlotValue::Category { value } | SlotValue::Award { value } => value.clone(),
             SlotValue::Date { value } => value.strftime("%A %-d %B").to_string(),
             SlotValue::Count { value } => value.to_string(),
+            SlotValue::Place { value: LAST_PLACE } => "last".to_string(),
+            SlotValue::Place { value } => crate::answers::words::ordinal_figure(*value as u64),
+            SlotValue::Round { value } => value.clone(),
         }
     }
 }

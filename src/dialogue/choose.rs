@@ -1,0 +1,360 @@
+//! Choosing the intent that answers the question that was asked.
+//!
+//! The scorer ([`crate::understand::classify`]) ranks intents by how their
+//! phrasings look like the message. That alone answers nearby questions
+//! with confidence: "which team is X in" looks like "how did X do", "how
+//! many medals has X won in swimming" like "how many medals has X won".
+//! So an intent is only chosen when it also *covers* the question's frame:
+//! it answers the frame's focus (its `answers:`), and every name, day,
+//! count, place, superlative and negation in the question is taken by one
+//! of its slots, describes a value a slot holds (the sport of the person
+//! asked about), or is a limit it declares it honours (`honours:`). When
+//! the best intents all leave part of the question out, the reply says what
+//! cannot be answered instead of answering less.
+
+use crate::answers::ops::{EntityKind, SlotValue};
+use crate::catalog::{Catalog, Intent};
+use crate::dataset::{Dataset, EntityRef};
+use crate::understand::classify::{MIN_SCORE, MIN_SCORE_TO_ASK};
+use crate::understand::frame::{Focus, Place};
+use crate::understand::lexicon::{Mention, Target};
+use crate::understand::slots::{Filled, Need};
+use crate::understand::Analysis;
+
+use super::context::fill_in_context;
+use super::session::Session;
+
+/// Intents scoring below this share of the best score are not tried: a
+/// weak match that happens to cover the question is still a weak match.
+const TRY_SHARE: f32 = 0.5;
+/// How many intents are tried at most.
+const TRY_MAX: usize = 6;
+/// What an unexplained content word costs in confidence.
+const UNEXPLAINED_COST: f32 = 0.85;
+
+/// What a question could not be answered for.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Gap {
+    /// A topic the data does not hold, as a reply names it.
+    Unheld(String),
+    /// No intent answers this focus.
+    Focus(Focus),
+    /// The best intent cannot honour these limits (as a reply names them).
+    Limits(Vec<String>),
+}
+
+/// The intent chosen and its slots.
+#[derive(Debug)]
+pub struct Chosen<'c> {
+    pub intent: &'c Intent,
+    pub filled: Filled,
+    pub confidence: f32,
+}
+
+/// The outcome of choosing.
+#[derive(Debug)]
+pub enum Choice<'c> {
+    Intent(Chosen<'c>),
+    /// The question is understood well enough to say what cannot be
+    /// answered; `near` is the intent that came closest.
+    NotCovered {
+        gap: Gap,
+        near: Option<&'c Intent>,
+    },
+    NotUnderstood,
+}
+
+/// Chooses the intent for a message that is not a follow-up of the last
+/// one.
+pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysis) -> Choice<'c> {
+    if let Some(u) = &a.frame.unheld {
+        let near = a.scores.first().and_then(|b| catalog.intent(&b.intent));
+        return Choice::NotCovered {
+            gap: Gap::Unheld(u.what.clone()),
+            near,
+        };
+    }
+    let Some(best) = a.scores.first().filter(|b| b.score >= MIN_SCORE) else {
+        return Choice::NotUnderstood;
+    };
+    let mut focus_gap: Option<&Intent> = None;
+    let mut limit_gap: Option<(&Intent, Vec<String>)> = None;
+    for scored in a
+        .scores
+        .iter()
+        .take(TRY_MAX)
+        .filter(|x| x.score >= MIN_SCORE && x.score >= best.score * TRY_SHARE)
+    {
+        let Some(intent) = catalog.intent(&scored.intent) else {
+            continue;
+        };
+        if let Some(f) = a.frame.focus {
+            if !intent.answers_focus(f) {
+                focus_gap.get_or_insert(intent);
+                continue;
+            }
+        }
+        let filled = fill_in_context(data, s, intent, a);
+        if matches!(filled.need, Some(Need::Missing { .. }))
+            && scored.score < MIN_SCORE_TO_ASK
+            && a.mentions.is_empty()
+        {
+            continue;
+        }
+        // A greeting that says more than a greeting ("translate hello
+        // into Spanish") is a question the service does not understand.
+        if intent.answers.iter().all(|f| *f == Focus::Chat) && !a.frame.unexplained.is_empty() {
+            continue;
+        }
+        let left = leftover(data, intent, a, &filled);
+        if !left.is_empty() {
+            limit_gap.get_or_insert((intent, left));
+            continue;
+        }
+        let unexplained = a.frame.unexplained.len() as i32;
+        let confidence =
+            scored.score.min(1.0) * filled.certainty * UNEXPLAINED_COST.powi(unexplained);
+        return Choice::Intent(Chosen {
+            intent,
+            filled,
+            confidence,
+        });
+    }
+    if let Some((intent, limits)) = limit_gap {
+        return Choice::NotCovered {
+            gap: Gap::Limits(limits),
+            near: Some(intent),
+        };
+    }
+    match (a.frame.focus, focus_gap) {
+        (Some(f), Some(near)) if f != Focus::Chat => Choice::NotCovered {
+            gap: Gap::Focus(f),
+            near: Some(near),
+        },
+        _ => Choice::NotUnderstood,
+    }
+}
+
+/// The parts of the question the intent, with these slots, leaves out, as
+/// a reply names them. Empty when it covers the whole question.
+pub fn leftover(data: &Dataset, intent: &Intent, a: &Analysis, filled: &Filled) -> Vec<String> {
+    let values: Vec<&SlotValue> = filled.slots.values().collect();
+    // A slot still to be asked for takes what would narrow it: "who won
+    // yesterday?" asks which event, among yesterday's.
+    let pending_kind = match &filled.need {
+        Some(Need::Missing { slot } | Need::Choose { slot, .. } | Need::NoMatch { slot, .. }) => {
+            intent.slot(slot).map(|d| d.kind)
+        }
+        None => None,
+    };
+    let takes = |k: EntityKind| intent.slots.iter().any(|d| d.kind == k);
+    let mut out = Vec::new();
+    for m in &a.mentions {
+        if mention_covered(data, m, &values, pending_kind, &takes) {
+            continue;
+        }
+        out.push(mention_words(data, a, m));
+    }
+    for d in &a.days {
+        let covered = takes(EntityKind::Date)
+            || matches!(pending_kind, Some(EntityKind::Contest))
+            || values.iter().any(|v| match v {
+                SlotValue::Entity {
+                    entity: EntityRef::Contest(ci),
+                } => data.facts[*ci].start.date() == d.date,
+                _ => false,
+            });
+        if !covered {
+            out.push(d.date.strftime("%A %-d %B").to_string());
+        }
+    }
+    if let Some((_, _, n)) = a.count {
+        if !takes(EntityKind::Count) {
+            out.push(format!("the top {n}"));
+        }
+    }
+    if let Some((_, _, p)) = a.frame.place {
+        // "who was first" asks for the winner or the leader.
+        let first = p == Place::Nth(1) && intent.answers_focus(Focus::Who);
+        if !takes(EntityKind::Place) && !first {
+            out.push(match p {
+                Place::Nth(n) => {
+                    format!("{} place", crate::answers::words::ordinal_figure(n as u64))
+                }
+                Place::Last => "last place".to_string(),
+            });
+        }
+    }
+    if let Some((_, w)) = &a.frame.extreme {
+        if !intent.honours_extreme(w) {
+            out.push(format!("the {w}"));
+        }
+    }
+    if a.frame.negation.is_some()
+        && !intent.honours_negation()
+        && !intent
+            .answers
+            .iter()
+            .any(|f| matches!(f, Focus::Whether | Focus::Status | Focus::Open))
+    {
+        out.push("what did not happen".to_string());
+    }
+    out
+}
+
+/// Whether a name in the message is taken by the intent: a slot holds it,
+/// it describes what a slot holds (the person's team, the event's sport),
+/// or a slot still to be asked for would take it.
+fn mention_covered(
+    data: &Dataset,
+    m: &Mention,
+    values: &[&SlotValue],
+    pending: Option<EntityKind>,
+    takes: &dyn Fn(EntityKind) -> bool,
+) -> bool {
+    m.candidates.iter().any(|(t, _)| {
+        // The scenario's only award ("seat") narrows nothing.
+        if let Target::Award(_) = t {
+            if data.awards().len() == 1 {
+                return true;
+            }
+        }
+        if let Some(k) = pending {
+            if target_fits_kind(t, k) {
+                return true;
+            }
+        }
+        // A kind the intent takes but left empty (a follow-up carried it,
+        // or it narrowed a person) is not a part left out.
+        if let Target::Category(_) = t {
+            if takes(EntityKind::Category) {
+                return true;
+            }
+        }
+        values.iter().any(|v| implied(data, t, v))
+    })
+}
+
+/// Whether a slot of kind `k` would take a name of this target.
+fn target_fits_kind(t: &Target, k: EntityKind) -> bool {
+    matches!(
+        (t, k),
+        (
+            Target::Entity(EntityRef::Competitor(_), _),
+            EntityKind::Competitor
+        ) | (Target::Entity(EntityRef::Group(_), _), EntityKind::Group)
+            | (
+                Target::Entity(EntityRef::Sport(_), _) | Target::SportNoun(_),
+                EntityKind::Sport
+            )
+            | (
+                Target::Entity(EntityRef::Discipline(..), _),
+                EntityKind::Discipline
+            )
+            | (
+                Target::Entity(
+                    EntityRef::Contest(_) | EntityRef::Discipline(..) | EntityRef::Sport(_),
+                    _
+                ) | Target::Category(_)
+                    | Target::Phase(_),
+                EntityKind::Contest
+            )
+            | (Target::Category(_), EntityKind::Category)
+            | (Target::Award(_), EntityKind::Award)
+            | (Target::Phase(_), EntityKind::Round)
+    )
+}
+
+/// Whether naming `t` is said by the slot value `v`: the value itself, or
+/// a fact of it (a person's team, sport and category; a contest's sport,
+/// discipline, category and round).
+fn implied(data: &Dataset, t: &Target, v: &SlotValue) -> bool {
+    match (t, v) {
+        (Target::Entity(e, _), SlotValue::Entity { entity }) if e == entity => true,
+        (
+            Target::Entity(e, _),
+            SlotValue::Entity {
+                entity: EntityRef::Competitor(p),
+            },
+        ) => {
+            let c = &data.competitors[*p];
+            match e {
+                EntityRef::Group(g) => data.group(&c.group) == Some(*g),
+                EntityRef::Sport(s) => data.sport(&c.sport) == Some(*s),
+                _ => false,
+            }
+        }
+        (
+            Target::SportNoun(s),
+            SlotValue::Entity {
+                entity: EntityRef::Competitor(p),
+            },
+        ) => data.sport(&data.competitors[*p].sport) == Some(*s),
+        (
+            Target::Category(cat),
+            SlotValue::Entity {
+                entity: EntityRef::Competitor(p),
+            },
+        ) => data.competitors[*p].category.as_deref() == Some(cat.as_str()),
+        (
+            Target::Entity(e, _),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        ) => {
+            let (s, d) = data.discipline_ref(*ci);
+            matches!(e, EntityRef::Sport(x) if *x == s)
+                || matches!(e, EntityRef::Discipline(x, y) if (*x, *y) == (s, d))
+        }
+        (
+            Target::SportNoun(sn),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        ) => data.discipline_ref(*ci).0 == *sn,
+        (
+            Target::Category(cat),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        ) => data.contests[*ci].category.as_deref() == Some(cat.as_str()),
+        (
+            Target::Phase(p),
+            SlotValue::Entity {
+                entity: EntityRef::Contest(ci),
+            },
+        ) => {
+            let phase = &data.contests[*ci].phase;
+            phase == p || phase.starts_with(&format!("{p} "))
+        }
+        (
+            Target::Entity(EntityRef::Sport(s), _),
+            SlotValue::Entity {
+                entity: EntityRef::Discipline(x, _),
+            },
+        ) => s == x,
+        (
+            Target::SportNoun(s),
+            SlotValue::Entity {
+                entity: EntityRef::Sport(x),
+            },
+        ) => s == x,
+        (Target::Category(c), SlotValue::Category { value }) => c == value,
+        (Target::Award(x), SlotValue::Award { value }) => x == value,
+        (Target::Phase(p), SlotValue::Round { value }) => p == value,
+        _ => false,
+    }
+}
+
+/// How a reply names a part of the question left out: the name as the
+/// data writes it, else the reader's words.
+fn mention_words(data: &Dataset, a: &Analysis, m: &Mention) -> String {
+    match m.candidates.first() {
+        Some((Target::Entity(e, _), _)) => data.entity_name(*e),
+        Some((Target::Category(c), _)) => c.clone(),
+        Some((Target::Phase(p), _)) => p.clone(),
+        Some((Target::Award(x), _)) => x.clone(),
+        Some((Target::SportNoun(s), _)) => data.sports[*s].name.clone(),
+        None => a.tokens[m.start..m.end].join(" "),
+    }
+}
