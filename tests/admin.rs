@@ -351,7 +351,7 @@ async fn the_unanswered_list_counts_questions_without_readers() {
     let rows = body["unanswered"].as_array().unwrap();
     assert_eq!(rows[0]["text"], "what is the weather like");
     assert_eq!(rows[0]["count"], 2);
-    assert_eq!(rows[0]["kind"], "not_understood");
+    assert_eq!(rows[0]["kind"], "not_covered");
     assert!(
         rows.iter()
             .any(|r| r["kind"] == "abandoned" && r["text"] == "when does zoe compete next"),
