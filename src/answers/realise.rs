@@ -312,6 +312,7 @@ fn emphasised(values: &HashMap<String, Value>) -> HashMap<String, Value> {
                 ssml: ssml.clone(),
             },
             Value::Text(t) => Value::Text(format!("**{t}**")),
+            Value::Plural(t) => Value::Plural(format!("**{t}**")),
             other => other.clone(),
         }
     }

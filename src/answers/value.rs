@@ -93,6 +93,9 @@ pub fn speakable(s: &str) -> String {
 pub enum Value {
     /// Running text, printed as is.
     Text(String),
+    /// A name that takes a plural verb ("Moorland Progressives have"), as
+    /// the data say of some groups; otherwise like `Text`.
+    Plural(String),
     /// A whole number; in running text one to nine are written as words.
     Int(i64),
     /// A value with a written form, a spoken form and an SSML form (an
@@ -114,7 +117,7 @@ impl Value {
     /// empty text, an empty list and zero count as absent.
     pub fn is_present(&self) -> bool {
         match self {
-            Value::Text(s) => !s.is_empty(),
+            Value::Text(s) | Value::Plural(s) => !s.is_empty(),
             Value::Int(n) => *n != 0,
             Value::Dual { text, .. } | Value::Said { text, .. } => !text.is_empty(),
             Value::List(v) => !v.is_empty(),
@@ -126,6 +129,7 @@ impl Value {
         match self {
             Value::Int(n) => *n,
             Value::List(v) => v.len() as i64,
+            Value::Plural(_) => 2,
             _ => 1,
         }
     }
@@ -140,9 +144,11 @@ impl Value {
     /// is not run together.
     pub fn render_joined(&self, style: Style, conj: &str) -> String {
         match (self, style) {
-            (Value::Text(s), Style::Text) => s.clone(),
-            (Value::Text(s), Style::Spoken) => words::speak_numbers(s),
-            (Value::Text(s), Style::Ssml) => xml_escape(&speakable(&words::speak_numbers(s))),
+            (Value::Text(s) | Value::Plural(s), Style::Text) => s.clone(),
+            (Value::Text(s) | Value::Plural(s), Style::Spoken) => words::speak_numbers(s),
+            (Value::Text(s) | Value::Plural(s), Style::Ssml) => {
+                xml_escape(&speakable(&words::speak_numbers(s)))
+            }
             (Value::Int(n), Style::Ssml) => xml_escape(&int_words(*n, style, false)),
             (Value::Int(n), _) => int_words(*n, style, false),
             (Value::Dual { text, .. } | Value::Said { text, .. }, Style::Text) => text.clone(),

@@ -117,6 +117,17 @@ impl Dataset {
             .and_then(|c| self.group(&self.competitors[c].group))
     }
 
+    /// A group's name as a value: plural names ("Moorland Progressives")
+    /// take plural verbs.
+    pub fn group_name_value(&self, g: usize) -> crate::answers::value::Value {
+        let name = self.groups[g].name.clone();
+        if self.groups[g].plural {
+            crate::answers::value::Value::Plural(name)
+        } else {
+            crate::answers::value::Value::Text(name)
+        }
+    }
+
     /// The entry's name as printed: a person's full name or a group's name.
     pub fn entry_name(&self, entry: &Entry) -> String {
         if let Some(c) = entry.competitor.as_deref().and_then(|c| self.competitor(c)) {

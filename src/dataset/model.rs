@@ -81,6 +81,10 @@ pub struct Group {
     pub code: Option<String>,
     #[serde(default)]
     pub aliases: Vec<String>,
+    /// Whether the name takes a plural verb ("Moorland Progressives
+    /// have", "the Civic Greens are").
+    #[serde(default, skip_serializing_if = "std::ops::Not::not")]
+    pub plural: bool,
 }
 
 /// A person who competes.

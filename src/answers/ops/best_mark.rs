@@ -19,6 +19,12 @@ pub static SPEC: OpSpec = OpSpec {
             kind: EntityKind::Category,
             required: false,
         },
+        // One round only ("the fastest time in the heats").
+        Param {
+            name: "round",
+            kind: EntityKind::Round,
+            required: false,
+        },
     ],
     outcomes: &[
         answered(
@@ -48,6 +54,13 @@ fn run(input: &OpInput) -> OpOutput {
             }
         );
     }
+    let round = match input.slots.get("round") {
+        Some(SlotValue::Round { value }) => Some(value.as_str()),
+        _ => None,
+    };
+    if let Some(r) = round {
+        name = format!("{name} {}", super::support::round_plural(r));
+    }
     let f = Facts::new().set("discipline_name", name);
     let mut best: Option<(usize, usize)> = None;
     // Everyone who shares the best mark: a tie is reported, not broken.
@@ -57,6 +70,9 @@ fn run(input: &OpInput) -> OpOutput {
             continue;
         }
         if category.is_some_and(|cat| c.category.as_deref() != Some(cat)) {
+            continue;
+        }
+        if round.is_some_and(|r| c.phase != r && !c.phase.starts_with(&format!("{r} "))) {
             continue;
         }
         for (ei, e) in c.entries.iter().enumerate() {

@@ -68,7 +68,7 @@ fn run(input: &OpInput) -> OpOutput {
     let c = &data.contests[ci];
     let mentioned = vec![EntityRef::Group(gi), EntityRef::Contest(ci)];
     let mut f = Facts::new()
-        .set("name", data.groups[gi].name.as_str())
+        .set("name", data.group_name_value(gi))
         .set("contest_name", data.contest_name(ci));
     let ours: Vec<usize> = (0..c.entries.len())
         .filter(|&i| data.entry_group(&c.entries[i]) == Some(gi))

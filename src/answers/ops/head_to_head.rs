@@ -49,6 +49,21 @@ pub static SPEC: OpSpec = OpSpec {
             ],
         ),
         answered("level", &["names", "place", "contest_name"]),
+        // Both placed in a contest still under way: who is ahead so far.
+        no_data(
+            "ahead_so_far",
+            &[
+                "ahead",
+                "behind",
+                "ahead_place",
+                "behind_place",
+                "ahead_mark",
+                "behind_mark",
+                "contest_name",
+                "counted",
+                "stale",
+            ],
+        ),
         no_data("undecided", &["contest_name"]),
         no_data("never_met", &["names"]),
         // Both named, both competed, but not both in the event asked about.
@@ -111,11 +126,38 @@ fn run(input: &OpInput) -> OpOutput {
     let mut mentioned = mentioned;
     mentioned.push(EntityRef::Contest(ci));
     // Standings in a contest still under way are not a result: "did A beat
-    // B" is only answered once it is final.
+    // B" is only answered once it is final, and while it is live the reply
+    // says who is ahead so far.
+    let (xa, xb) = (&c.entries[ea], &c.entries[eb]);
+    if c.status == Status::Live && !super::support::no_votes_yet(data, ci) {
+        if let (Some(pa), Some(pb)) = (xa.place, xb.place) {
+            if pa != pb {
+                let ((w, wp, we), (l, lp, le)) = if pa < pb {
+                    ((a, pa, ea), (b, pb, eb))
+                } else {
+                    ((b, pb, eb), (a, pa, ea))
+                };
+                f.put("ahead", data.competitors[w].name());
+                f.put("behind", data.competitors[l].name());
+                f.put("ahead_place", place_value(wp));
+                f.put("behind_place", place_value(lp));
+                if let Some(m) = mark_value(data, ci, we) {
+                    f.put("ahead_mark", m);
+                }
+                if let Some(m) = mark_value(data, ci, le) {
+                    f.put("behind_mark", m);
+                }
+                super::support::vote_facts(data, ci, None, &mut f);
+                if let Some(s) = super::support::staleness(data, ci, input.now, input.stale_after) {
+                    f.put("stale", s);
+                }
+                return OpOutput::done("ahead_so_far", f, mentioned);
+            }
+        }
+    }
     if c.status != Status::Final {
         return OpOutput::done("undecided", f, mentioned);
     }
-    let (xa, xb) = (&c.entries[ea], &c.entries[eb]);
     match (xa.place, xb.place) {
         (Some(pa), Some(pb)) if pa == pb => {
             f.put("names", names);

@@ -1,6 +1,6 @@
 //! `medal_table`: who leads the medal table, and the top N.
 
-use super::support::{breakdown, medal_table, MedalRow};
+use super::support::{breakdown, contest_scope, medal_table_of, MedalRow};
 use super::*;
 use crate::answers::value::Style;
 use crate::answers::words;
@@ -8,11 +8,30 @@ use crate::answers::words;
 pub static SPEC: OpSpec = OpSpec {
     name: "medal_table",
     summary: "the medal table leader and the top of the table",
-    params: &[Param {
-        name: "count",
-        kind: EntityKind::Count,
-        required: false,
-    }],
+    params: &[
+        Param {
+            name: "count",
+            kind: EntityKind::Count,
+            required: false,
+        },
+        // Optional limits: the table for one sport or one day.
+        Param {
+            name: "sport",
+            kind: EntityKind::Sport,
+            required: false,
+        },
+        Param {
+            name: "date",
+            kind: EntityKind::Date,
+            required: false,
+        },
+        // Ranked by one award: "who has the most golds?", "most seats".
+        Param {
+            name: "award",
+            kind: EntityKind::Award,
+            required: false,
+        },
+    ],
     outcomes: &[
         answered(
             "answered",
@@ -24,9 +43,10 @@ pub static SPEC: OpSpec = OpSpec {
                 "top",
                 "shown",
                 "still_open",
+                "scope",
             ],
         ),
-        no_data("empty", &["still_open"]),
+        no_data("empty", &["still_open", "scope"]),
     ],
     run,
 };
@@ -37,7 +57,8 @@ const DEFAULT_ROWS: usize = 3;
 
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
-    let mut table = medal_table(data);
+    let (keep, scope) = contest_scope(input);
+    let mut table = medal_table_of(data, &keep);
     // `order: total` ranks by the number of medals of any colour, for "who
     // has the most medals?"; ties then fall back to the usual order.
     if input.settings.get("order").map(String::as_str) == Some("total") {
@@ -55,13 +76,37 @@ fn run(input: &OpInput) -> OpOutput {
             };
         }
     }
+    if let Some(k) = input
+        .text("award")
+        .and_then(|a| data.awards().iter().position(|x| x == a))
+    {
+        // By that award first; the usual order breaks ties. Groups with
+        // none of it are not in this table.
+        table.retain(|r| r.counts[k] > 0);
+        table.sort_by(|a, b| {
+            b.counts[k]
+                .cmp(&a.counts[k])
+                .then(b.counts.cmp(&a.counts))
+                .then_with(|| data.groups[a.group].name.cmp(&data.groups[b.group].name))
+        });
+        for i in 0..table.len() {
+            table[i].rank = if i > 0 && table[i].counts[k] == table[i - 1].counts[k] {
+                table[i - 1].rank
+            } else {
+                i as u32 + 1
+            };
+        }
+    }
     let still_open = Value::Int(super::support::awards_still_open(data) as i64);
+    let mut f = Facts::new().set("still_open", still_open);
+    if let Some(s) = scope {
+        f.put("scope", s);
+    }
     if table.is_empty() {
-        return OpOutput::done("empty", Facts::new().set("still_open", still_open), vec![]);
+        return OpOutput::done("empty", f, vec![]);
     }
     let n = input.rows(DEFAULT_ROWS);
     let leaders: Vec<&MedalRow> = table.iter().filter(|r| r.rank == 1).collect();
-    let mut f = Facts::new().set("still_open", still_open);
     f.put(
         "leader",
         Value::List(
@@ -72,11 +117,24 @@ fn run(input: &OpInput) -> OpOutput {
         ),
     );
     f.put("leaders_count", Value::Int(leaders.len() as i64));
+    // Leaders tied on the total may hold different medals: one breakdown
+    // would then be wrong for all but one of them.
+    if leaders.iter().all(|r| r.counts == leaders[0].counts) {
+        f.put(
+            "leader_breakdown",
+            breakdown(data, &leaders[0].counts, true),
+        );
+    }
+    let award_k = input
+        .text("award")
+        .and_then(|a| data.awards().iter().position(|x| x == a));
     f.put(
-        "leader_breakdown",
-        breakdown(data, &leaders[0].counts, true),
+        "leader_total",
+        Value::Int(match award_k {
+            Some(k) => leaders[0].counts[k],
+            None => leaders[0].total(),
+        } as i64),
     );
-    f.put("leader_total", Value::Int(leaders[0].total() as i64));
     // Include every row tied with the last one shown, so a cut never splits
     // a shared rank.
     let cutoff_rank = table

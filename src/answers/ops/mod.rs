@@ -8,6 +8,7 @@
 //! catalog can reject an intent that uses something the operation cannot
 //! give before the service starts.
 
+mod about;
 mod best_mark;
 mod builtin;
 mod contest_time;
@@ -16,9 +17,11 @@ mod group_medals;
 mod group_result;
 mod head_to_head;
 mod leader;
+mod margin_of;
 mod medal_table;
 mod next_for;
 mod open_contests;
+mod placed;
 mod podium;
 mod profile;
 mod result;
@@ -388,6 +391,9 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &standings::SPEC,
     &open_contests::SPEC,
     &group_result::SPEC,
+    &placed::SPEC,
+    &margin_of::SPEC,
+    &about::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,

@@ -8,11 +8,19 @@ use crate::dataset::{EntryStatus, Status};
 pub static SPEC: OpSpec = OpSpec {
     name: "profile",
     summary: "a competitor's results and medals so far",
-    params: &[Param {
-        name: "competitor",
-        kind: EntityKind::Competitor,
-        required: true,
-    }],
+    params: &[
+        Param {
+            name: "competitor",
+            kind: EntityKind::Competitor,
+            required: true,
+        },
+        // One award only: "how many golds has she won?"
+        Param {
+            name: "award",
+            kind: EntityKind::Award,
+            required: false,
+        },
+    ],
     outcomes: &[
         answered(
             "answered",
@@ -41,6 +49,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "next",
             ],
         ),
+        answered("award", &["name", "award", "award_count"]),
         no_data(
             "nothing_yet",
             &["name", "group", "sport_noun", "live", "next"],
@@ -119,6 +128,16 @@ fn run(input: &OpInput) -> OpOutput {
         );
     }
     let mentioned = vec![EntityRef::Competitor(pi)];
+    if let Some(award) = input.text("award") {
+        let n = data
+            .awards()
+            .iter()
+            .position(|a| a == award)
+            .map_or(0, |k| counts[k]);
+        f.put("award", award);
+        f.put("award_count", super::support::award_count(award, n));
+        return OpOutput::done("award", f, mentioned);
+    }
     if results.is_empty() {
         return OpOutput::done("nothing_yet", f, mentioned);
     }

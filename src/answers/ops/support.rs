@@ -334,9 +334,20 @@ impl MedalRow {
 /// counts share a rank, and the next rank skips (1, 2, 2, 4): standard
 /// competition ranking, common practice for medal tables.
 pub fn medal_table(data: &Dataset) -> Vec<MedalRow> {
+    medal_table_of(data, &|_| true)
+}
+
+/// The medal table over the contests that pass `keep` (one sport, one
+/// day), ranked the same way.
+pub fn medal_table_of(data: &Dataset, keep: &dyn Fn(usize) -> bool) -> Vec<MedalRow> {
     let awards = data.awards();
     let mut counts = vec![vec![0u32; awards.len()]; data.groups.len()];
-    for c in data.contests.iter().filter(|c| c.status == Status::Final) {
+    for (_, c) in data
+        .contests
+        .iter()
+        .enumerate()
+        .filter(|(i, c)| c.status == Status::Final && keep(*i))
+    {
         for e in &c.entries {
             let (Some(a), Some(g)) = (e.award.as_deref(), data.entry_group(e)) else {
                 continue;
@@ -371,6 +382,70 @@ pub fn awards_still_open(data: &Dataset) -> usize {
     (0..data.contests.len())
         .filter(|&c| data.awards_in(c) && data.contests[c].status != Status::Final)
         .count()
+}
+
+/// A limit on which contests count, read from optional `sport` and `date`
+/// slots: the filter, and how a reply says it ("in swimming", "on Friday 13
+/// August", "in swimming yesterday"); `None` when neither is given.
+pub fn contest_scope<'a>(
+    input: &super::OpInput<'a>,
+) -> (Box<dyn Fn(usize) -> bool + 'a>, Option<Value>) {
+    let data = input.data;
+    let sport = match input.entity("sport") {
+        Some(EntityRef::Sport(s)) => Some(s),
+        _ => None,
+    };
+    let date = match input.slots.get("date") {
+        Some(super::SlotValue::Date { value }) => Some(*value),
+        _ => None,
+    };
+    let keep = move |ci: usize| {
+        sport.is_none_or(|s| data.discipline_ref(ci).0 == s)
+            && date.is_none_or(|d| data.facts[ci].start.date() == d)
+    };
+    let mut parts: Vec<Value> = Vec::new();
+    if let Some(s) = sport {
+        parts.push(Value::Text(format!("in {}", data.sports[s].name)));
+    }
+    if let Some(d) = date {
+        parts.push(day_value(d, input.now));
+    }
+    let scope = match parts.len() {
+        0 => None,
+        1 => parts.pop(),
+        _ => {
+            let day = parts.pop().expect("two parts");
+            let sport = parts.pop().expect("two parts");
+            Some(sport.then(" ", &day))
+        }
+    };
+    (Box::new(keep), scope)
+}
+
+/// A count of one award: "two golds", "one silver", "three seats", "no
+/// gold".
+pub fn award_count(award: &str, n: u32) -> Value {
+    if n == 0 {
+        return Value::Text(format!("no {award}"));
+    }
+    let noun = if n == 1 {
+        award.to_string()
+    } else {
+        words::plural(award)
+    };
+    Value::Dual {
+        text: format!("{} {noun}", int_words(n as i64, Style::Text, false)),
+        spoken: format!("{} {noun}", int_words(n as i64, Style::Spoken, false)),
+    }
+}
+
+/// How a round reads after an event's name: "heats", "semifinals",
+/// "final".
+pub fn round_plural(r: &str) -> String {
+    match r {
+        "final" => "final".into(),
+        other => crate::answers::words::plural(other),
+    }
 }
 
 /// Standard competition ranking over rows already in order.
