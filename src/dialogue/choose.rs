@@ -27,6 +27,9 @@ use super::session::Session;
 /// Intents scoring below this share of the best score are not tried: a
 /// weak match that happens to cover the question is still a weak match.
 const TRY_SHARE: f32 = 0.5;
+/// The lowest score tried when the question states its focus and the
+/// intent answers it.
+const FOCUS_FLOOR: f32 = 0.35;
 /// How many intents are tried at most.
 const TRY_MAX: usize = 6;
 /// What an unexplained content word costs in confidence.
@@ -77,27 +80,48 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
     let Some(best) = a.scores.first().filter(|b| b.score >= MIN_SCORE) else {
         return Choice::NotUnderstood;
     };
+    // With a stated focus, a weaker intent that answers it is worth trying
+    // after a stronger one that does not ("who won on Friday?" scores
+    // highest on the day's schedule, which says what is on, not who won).
+    let floor = if a.frame.focus.is_some() {
+        FOCUS_FLOOR
+    } else {
+        MIN_SCORE
+    };
     let mut focus_gap: Option<&Intent> = None;
     let mut limit_gap: Option<(&Intent, Vec<String>)> = None;
     for scored in a
         .scores
         .iter()
         .take(TRY_MAX)
-        .filter(|x| x.score >= MIN_SCORE && x.score >= best.score * TRY_SHARE)
+        .filter(|x| x.score >= floor && x.score >= best.score * TRY_SHARE)
     {
         let Some(intent) = catalog.intent(&scored.intent) else {
             continue;
         };
+        // The other reading holds when the conversation has an event to
+        // read it against.
+        let in_context = a
+            .frame
+            .focus_in_context
+            .filter(|_| has_last_contest(s))
+            .is_some_and(|f| intent.answers_focus(f));
         if let Some(f) = a.frame.focus {
-            if !intent.answers_focus(f) {
+            if !intent.answers_focus(f) && !in_context {
                 focus_gap.get_or_insert(intent);
                 continue;
             }
         }
         let filled = fill_in_context(data, s, intent, a);
+        // Asking back on a weak match risks a question about nothing; a
+        // stated focus the intent answers ("who was the winner?") is
+        // evidence enough to ask which one.
+        let focus_fits = a.frame.focus.is_some_and(|f| f != Focus::Chat);
         if matches!(filled.need, Some(Need::Missing { .. }))
             && scored.score < MIN_SCORE_TO_ASK
+            && !focus_fits
             && a.mentions.is_empty()
+            && a.days.is_empty()
         {
             continue;
         }
@@ -133,6 +157,13 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
         },
         _ => Choice::NotUnderstood,
     }
+}
+
+/// Whether the last answer was about an event.
+fn has_last_contest(s: &Session) -> bool {
+    s.last_slots.values().any(|v| {
+        matches!(v, crate::dialogue::session::StoredSlot::Entity { entity } if entity.kind == "contest")
+    })
 }
 
 /// The parts of the question the intent, with these slots, leaves out, as
@@ -174,7 +205,7 @@ pub fn leftover(data: &Dataset, intent: &Intent, a: &Analysis, filled: &Filled) 
         }
     }
     if let Some((_, _, p)) = a.frame.place {
-        // "who was first" asks for the winner or the leader.
+        // "first in the medal table" is its leader.
         let first = p == Place::Nth(1) && intent.answers_focus(Focus::Who);
         if !takes(EntityKind::Place) && !first {
             out.push(match p {

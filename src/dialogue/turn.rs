@@ -305,7 +305,10 @@ fn proceed(
             let text = if what.is_empty() {
                 "I could not find that event in the results.".to_string()
             } else {
-                format!("I could not find a {what} event in the results.")
+                format!(
+                    "I don't have {} {what} in the results.",
+                    crate::answers::words::indefinite_article(&what)
+                )
             };
             s.last_intent = Some(intent.name.clone());
             s.last_slots = store_slots(ctx.data, &slots);

@@ -212,8 +212,23 @@ impl Classifier {
     }
 }
 
+/// The Snowball (Porter2) English stemmer, so "leads", "leading" and
+/// "lead" are one word to the scorer; placeholders stay as they are.
+static STEMMER: std::sync::LazyLock<rust_stemmers::Stemmer> =
+    std::sync::LazyLock::new(|| rust_stemmers::Stemmer::create(rust_stemmers::Algorithm::English));
+
+/// A word's stem for scoring.
+pub fn stem(word: &str) -> String {
+    if word.starts_with('<') {
+        word.to_string()
+    } else {
+        STEMMER.stem(word).into_owned()
+    }
+}
+
 fn features(tokens: &[String]) -> Vec<String> {
-    let mut out: Vec<String> = tokens.to_vec();
+    let tokens: Vec<String> = tokens.iter().map(|t| stem(t)).collect();
+    let mut out: Vec<String> = tokens.clone();
     for w in tokens.windows(2) {
         out.push(format!("{} {}", w[0], w[1]));
     }

@@ -180,6 +180,10 @@ pub struct Frame {
     pub focus: Option<Focus>,
     /// The tokens that said it.
     pub focus_words: Vec<usize>,
+    /// Another reading of the focus that the conversation may pick: a bare
+    /// "top 3" is the medal table in a fresh conversation, but the top of
+    /// the results just given after an event.
+    pub focus_in_context: Option<Focus>,
     /// Where the question proper starts; words before it are a chatty
     /// opening.
     pub onset: usize,
@@ -373,6 +377,13 @@ const UNHELD: &[(&[&str], &str)] = &[
     (&["train"], "travel and parking"),
 ];
 
+/// Whether a word is one of the built-in topics the data does not hold,
+/// or a word of one: such a word is never "corrected" into a question word
+/// ("tall" is not "tally").
+pub fn is_unheld_word(w: &str) -> bool {
+    UNHELD.iter().any(|(words, _)| words.contains(&w))
+}
+
 fn at<'a>(tokens: &[&'a str], i: usize) -> &'a str {
     tokens.get(i).copied().unwrap_or("")
 }
@@ -426,7 +437,17 @@ pub fn read(
         .find(|(i, t)| !named(*i) && matches!(**t, "not" | "never" | "without" | "nobody" | "none"))
         .map(|(i, _)| i);
     f.unheld = unheld(tokens, &named, extra_unheld);
-    let (focus, words) = focus(tokens, onset, mentions, &f);
+    let (focus, mut words) = focus(tokens, onset, mentions, &f);
+    // "who was first" asks for the winner or the leader: no place to look
+    // up beyond the top.
+    if let (Some(Focus::Who), Some((s, e, Place::Nth(1)))) = (focus, f.place) {
+        words.extend(s..e);
+        f.place = None;
+    }
+    if focus == Some(Focus::Table) && !words.is_empty() && words.iter().all(|&i| tokens[i] == "top")
+    {
+        f.focus_in_context = Some(Focus::Results);
+    }
     f.focus = focus;
     f.focus_words = words;
     if f.focus.is_none() && f.unheld.is_some() {
@@ -678,6 +699,12 @@ fn focus(
         && !(t1 == "many" && has("medals")))
         || has("progress")
         || has("status")
+        // "are the results in (yet)", "is it all in": arrived, declared.
+        || (matches!(t0, "is" | "are" | "has" | "have")
+            && matches!(
+                tokens.get(onset..).unwrap_or(&[]).iter().rev().find(|t| !matches!(**t, "yet" | "now" | "already")),
+                Some(&"in")
+            ))
         || (t0 == "how"
             && tokens.iter().any(|t| matches!(*t, "count" | "counting"))
             && !has("votes"))
@@ -1229,6 +1256,8 @@ mod tests {
         assert_eq!(f("where is the final"), Some(Focus::Where));
         assert_eq!(f("what is on today"), Some(Focus::Schedule));
         assert_eq!(f("is it over"), Some(Focus::Status));
+        assert_eq!(f("are all the results in yet"), Some(Focus::Status));
+        assert_eq!(f("is the result in"), Some(Focus::Status));
         assert_eq!(f("has it happened"), Some(Focus::Status));
         assert_eq!(f("has she won"), Some(Focus::Whether));
         assert_eq!(f("which wards are still open"), Some(Focus::Open));

@@ -356,9 +356,18 @@ impl Lexicon {
         add("heat", Target::Phase("heat".into()));
         add("semis", Target::Phase("semifinal".into()));
         add("semi final", Target::Phase("semifinal".into()));
-        for a in data.awards() {
+        // With one award only ("seat"), naming it narrows nothing: the word
+        // stays a word of the question, as phrasings use it.
+        let awards = if data.awards().len() > 1 {
+            data.awards()
+        } else {
+            &[]
+        };
+        for a in awards {
             add(a, Target::Award(a.clone()));
+            add(&crate::answers::words::plural(a), Target::Award(a.clone()));
             add(&format!("{a} medal"), Target::Award(a.clone()));
+            add(&format!("{a} medals"), Target::Award(a.clone()));
         }
 
         // A first or family name that is also an everyday word of the
@@ -386,13 +395,13 @@ impl Lexicon {
         let mut fuzzy_words = Vec::new();
         let mut name_shapes = HashSet::new();
         for (surface, ts) in surfaces.iter().zip(&targets) {
+            // Rounds and categories only when long enough that a close
+            // spelling is not another word ("finall", "womans").
             let keep: Vec<Target> = ts
                 .iter()
-                .filter(|t| {
-                    matches!(
-                        t,
-                        Target::Entity(..) | Target::SportNoun(_) | Target::Award(_)
-                    )
+                .filter(|t| match t {
+                    Target::Entity(..) | Target::SportNoun(_) | Target::Award(_) => true,
+                    Target::Phase(_) | Target::Category(_) => surface.len() >= 5,
                 })
                 .cloned()
                 .collect();
@@ -448,8 +457,18 @@ impl Lexicon {
         if word.len() < 4 || self.vocabulary.contains(word) {
             return None;
         }
-        let hit = self.vocab_index.lookup(word, 0.88, 1).into_iter().next()?;
-        self.vocab_words.get(hit.id as usize).map(String::as_str)
+        if let Some(hit) = self.vocab_index.lookup(word, 0.88, 1).into_iter().next() {
+            return self.vocab_words.get(hit.id as usize).map(String::as_str);
+        }
+        // A short word typed with one letter doubled ("wonn", "whoo") is
+        // too short for the similarity index: undouble it and look it up.
+        let b = word.as_bytes();
+        (1..b.len())
+            .filter(|&i| b[i] == b[i - 1] && word.is_char_boundary(i))
+            .find_map(|i| {
+                let w = format!("{}{}", &word[..i], &word[i + 1..]);
+                self.vocabulary.get(&w).map(String::as_str)
+            })
     }
 
     /// Finds names in normalised text split into tokens.

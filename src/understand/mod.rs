@@ -225,7 +225,17 @@ impl Understanding {
             .iter()
             .enumerate()
             .map(|(i, t)| {
-                if covered[i] {
+                // Words of general English and topics the data does not
+                // hold are words already, not misspellings.
+                if covered[i]
+                    || english::is_filler(t)
+                    || frame::is_unheld_word(t)
+                    || self
+                        .vocabulary
+                        .not_in_data
+                        .iter()
+                        .any(|(w, _)| w.iter().any(|x| x == t))
+                {
                     *t
                 } else {
                     self.lexicon.correct(t).unwrap_or(t)

@@ -198,7 +198,29 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                     _ => None,
                 }),
             EntityKind::Contest => match resolve_contest(data, a, &slots) {
-                Ok(None) => None,
+                // Only a day named: which event that day?
+                Ok(None) => match day_contests(data, a).as_deref() {
+                    None => None,
+                    Some([]) => {
+                        need.get_or_insert(Need::NoMatch {
+                            slot: def.name.clone(),
+                            what: String::new(),
+                        });
+                        None
+                    }
+                    Some([one]) => Some(SlotValue::Entity {
+                        entity: EntityRef::Contest(*one),
+                    }),
+                    // Too many to list: the intent's own question.
+                    Some(many) if many.len() > MAX_OPTIONS => None,
+                    Some(many) => {
+                        need.get_or_insert(Need::Choose {
+                            slot: def.name.clone(),
+                            options: many.iter().map(|c| EntityRef::Contest(*c)).collect(),
+                        });
+                        None
+                    }
+                },
                 Ok(Some(ci)) => Some(SlotValue::Entity {
                     entity: EntityRef::Contest(ci),
                 }),
@@ -212,7 +234,7 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                 Err(None) => {
                     need.get_or_insert(Need::NoMatch {
                         slot: def.name.clone(),
-                        what: event_words(a),
+                        what: event_words(data, a),
                     });
                     None
                 }
@@ -323,19 +345,72 @@ fn mentioned_sport(a: &Analysis) -> Option<usize> {
         })
 }
 
-fn event_words(a: &Analysis) -> String {
-    let mut words = Vec::new();
-    for m in &a.mentions {
-        if let Some((t, _)) = m.candidates.first() {
-            if matches!(
-                t,
+/// An unexplained word right next to a part of an event's name ("relay"
+/// in "the men's 1500 m relay", "mixed" in "the mixed 100 m"): its token
+/// index.
+pub fn odd_event_word(a: &Analysis) -> Option<usize> {
+    let part = |m: &Mention| {
+        matches!(
+            m.candidates.first(),
+            Some((
                 Target::Category(_)
                     | Target::Phase(_)
-                    | Target::Entity(EntityRef::Discipline(..) | EntityRef::Sport(_), _)
-            ) {
-                words.extend(a.tokens[m.start..m.end].iter().cloned());
-            }
+                    | Target::Entity(EntityRef::Discipline(..), _),
+                _
+            ))
+        )
+    };
+    a.frame.unexplained.iter().copied().find(|&j| {
+        a.mentions
+            .iter()
+            .any(|m| part(m) && (m.end == j || j + 1 == m.start))
+    })
+}
+
+/// Contests on the day the message names, when it names a day but no
+/// event ("who won yesterday?"): finals first, as an unqualified event
+/// means its final. `None` without a day.
+pub fn day_contests(data: &Dataset, a: &Analysis) -> Option<Vec<usize>> {
+    let d = a.days.first()?;
+    let on: Vec<usize> = (0..data.contests.len())
+        .filter(|&ci| data.facts[ci].start.date() == d.date)
+        .collect();
+    let finals: Vec<usize> = on
+        .iter()
+        .copied()
+        .filter(|&ci| data.contests[ci].phase == "final")
+        .collect();
+    Some(if finals.is_empty() { on } else { finals })
+}
+
+/// How a reply names an event the data does not have, from the parts the
+/// reader named, in their order, as the data write them ("women's", "1500
+/// m"), with the word nothing explained ("relay") where it stood, and the
+/// day named ("on Friday 13 August").
+fn event_words(data: &Dataset, a: &Analysis) -> String {
+    let mut words: Vec<String> = Vec::new();
+    let odd = odd_event_word(a);
+    for m in &a.mentions {
+        let Some((t, _)) = m.candidates.first() else {
+            continue;
+        };
+        if odd.is_some_and(|j| j + 1 == m.start) {
+            words.push(a.tokens[m.start - 1].clone());
         }
+        match t {
+            Target::Category(c) if c == "men" || c == "women" => words.push(format!("{c}'s")),
+            Target::Category(c) | Target::Phase(c) => words.push(c.clone()),
+            Target::Entity(e @ (EntityRef::Discipline(..) | EntityRef::Sport(_)), _) => {
+                words.push(data.entity_name(*e))
+            }
+            _ => continue,
+        }
+        if odd == Some(m.end) {
+            words.push(a.tokens[m.end].clone());
+        }
+    }
+    if let Some(d) = a.days.first() {
+        words.push(format!("on {}", d.date.strftime("%A %-d %B")));
     }
     words.join(" ")
 }
@@ -378,6 +453,12 @@ pub fn resolve_contest(
     if disciplines.is_empty() && sport.is_none() {
         return Ok(None);
     }
+    // A word next to the event's name that nothing explains ("the men's
+    // 1500 m relay") names an event the data does not have: never the
+    // event without it.
+    if odd_event_word(a).is_some() {
+        return Err(None);
+    }
     let person = match slots.get("competitor") {
         Some(SlotValue::Entity {
             entity: EntityRef::Competitor(p),
@@ -406,6 +487,63 @@ pub fn resolve_contest(
             .collect();
         if !theirs.is_empty() {
             fits = theirs;
+        }
+    }
+    // A day narrows to the contests on it; none on it is no match.
+    if let Some(d) = a.days.first() {
+        fits.retain(|&ci| data.facts[ci].start.date() == d.date);
+        if fits.is_empty() {
+            return Err(None);
+        }
+    }
+    // A team or party named narrows to the contests it is in.
+    let groups: Vec<usize> = a
+        .mentions
+        .iter()
+        .filter_map(|m| match m.candidates.first() {
+            Some((Target::Entity(EntityRef::Group(g), _), _)) => Some(*g),
+            _ => None,
+        })
+        .collect();
+    if fits.len() > 1 && !groups.is_empty() {
+        let theirs: Vec<usize> = fits
+            .iter()
+            .copied()
+            .filter(|&ci| {
+                data.contests[ci]
+                    .entries
+                    .iter()
+                    .any(|e| data.entry_group(e).is_some_and(|g| groups.contains(&g)))
+            })
+            .collect();
+        if !theirs.is_empty() {
+            fits = theirs;
+        }
+    }
+    // "right now": the contest that is live. "Leading" or "ahead" only
+    // rules out contests not yet started: a finished one has a leader too,
+    // so the reader is asked which they mean.
+    if a.frame.live && fits.len() > 1 {
+        let now = a.tokens.iter().any(|t| {
+            matches!(
+                t.as_str(),
+                "now" | "currently" | "live" | "ongoing" | "moment"
+            )
+        });
+        let live: Vec<usize> = fits
+            .iter()
+            .copied()
+            .filter(|&ci| match data.contests[ci].status {
+                Status::Live => true,
+                Status::Final => !now,
+                Status::Scheduled => false,
+            })
+            .collect();
+        if live
+            .iter()
+            .any(|&ci| data.contests[ci].status == Status::Live)
+        {
+            fits = live;
         }
     }
     if phase.is_none() && fits.len() > 1 {
