@@ -99,6 +99,7 @@ replies:
   no_result: "Nothing yet."
   placings: "{first|and} first."
   no_awards: "No medals in this round."
+answers: [who, results]
 "#;
 
 fn expect_error(file_text: &str, needle: &str, line: u32) {
@@ -320,5 +321,5 @@ fn paths_are_checked_with_every_problem_located() {
 #[test]
 fn wording_for_a_channel_that_does_not_exist_is_located() {
     let text = format!("{GOOD}channel_replies:\n  pigeon:\n    answered: \"Coo.\"\n");
-    expect_error(&text, "no channel \"pigeon\"", 21);
+    expect_error(&text, "no channel \"pigeon\"", 22);
 }

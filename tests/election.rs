@@ -399,11 +399,11 @@ async fn check_moment(
     let t = text(&r);
     assert_eq!(r["intent"], "party_seats", "{moment}: {r}");
     match seats.get("Moorland Progressives") {
-        None => assert!(t.contains("has not won a seat yet"), "{moment}: {t}"),
+        None => assert!(t.contains("have not won a seat yet"), "{moment}: {t}"),
         Some(&n) => {
             assert!(
                 t.contains(&format!(
-                    "Moorland Progressives has won {}",
+                    "Moorland Progressives have won {}",
                     count(n, "seat")
                 )),
                 "{moment}: {t}"

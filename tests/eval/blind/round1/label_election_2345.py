@@ -319,7 +319,7 @@ def compute(t):
     if intent == "ward_leader":
         if not is_live(S, kid) and not is_final(S, kid):
             nv = prev_next_figures(kid, "leader_votes") + prev_next_figures(kid, "margin")
-            return "no_data", [], safe_never(kid, nv, minlen=2)
+            return "no_data", [], safe_never(kid, nv)
         says = [cname(leader(S, kid)), fmt_votes(margin(S, kid))]
         never = safe_never(kid, prev_next_figures(kid, "margin"))
         return "answered", says, never
@@ -328,7 +328,7 @@ def compute(t):
         r = ranked(S, kid)
         if not r:
             nv = prev_next_figures(kid, "leader_votes")
-            return "no_data", [], safe_never(kid, nv, minlen=2)
+            return "no_data", [], safe_never(kid, nv)
         if asks is None:
             for e in r:
                 says += [cname(e["competitor"]), fmt_votes(votes_of(e))]
@@ -359,7 +359,7 @@ def compute(t):
     if intent == "count_progress":
         p = counted_pct(S, kid)
         if p is None:
-            return "no_data", [], safe_never(kid, prev_next_figures(kid, "pct"), minlen=2)
+            return "no_data", [], safe_never(kid, prev_next_figures(kid, "pct"))
         return "answered", [p], safe_never(kid, prev_next_figures(kid, "pct"))
 
     if intent == "party_in_ward":
@@ -369,7 +369,7 @@ def compute(t):
             return "no_data", [], []
         pe = party_entry(S, gid, kid)
         if pe is None:      # standing, but counting not started
-            return "no_data", [], safe_never(kid, prev_next_figures(kid, "party_votes", gid), minlen=2)
+            return "no_data", [], safe_never(kid, prev_next_figures(kid, "party_votes", gid))
         cid, place, v = pe
         says = [fmt_votes(v), ordinal(place)]
         if asks and asks[0] == "share":
@@ -582,6 +582,14 @@ SINGLES = [
     T("what's still to come tonight?", "open_races", {}, "open", tags=["relative_day", "contraction"]),
     T("any wards called yet?", "open_races", {}, "status", tags=["trade_word"]),
     T("which races are still up for grabs", "open_races", {}, "open", tags=["chatty"]),
+
+    # missing details and shared place words
+    T("results please", "ward_results", {}, "results", outcome="clarify",
+      tags=["missing_slot", "clarify", "terse"]),
+    T("has she won yet?", "candidate_result", {}, "whether", outcome="clarify",
+      tags=["missing_slot", "clarify", "pronoun"]),
+    T("how's the Alliance getting on in Ashvenny", "party_in_ward", {"group": HAL}, "how_did",
+      outcome="clarify", options=ASHVENNY, tags=["ambiguous", "clarify", "alias", "partial"]),
 
     # chat
     T("hi there", "greeting", {}, "chat", tags=["chatty"]),
@@ -863,6 +871,24 @@ CONVERSATIONS = [
       T("when do they start counting", "none", focus="when", outcome=NC,
         tags=[FU, "pronoun", "uncovered"])],
      ["conversation"]),
+
+    ([T("how are the lanterns doing in their ward", "party_in_ward", {"group": LAN}, "how_did",
+        outcome="clarify", tags=["missing_slot", "clarify", "alias"]),
+      T("pellin heath", "party_in_ward", {"group": LAN, "contest": PH}, "how_did",
+        tags=[FU, "answer_to_clarify", "party_not_standing"]),
+      T("oh are they not standing there? try caddenmill then", "party_in_ward",
+        {"group": LAN, "contest": CM}, "how_did", tags=[FU, "chatty", "pronoun"])],
+     ["conversation", "missing_slot"]),
+
+    ([T("what's the result so far in Gorsevane", "ward_results", {"contest": GV}, "results",
+        tags=["exact", "contraction"]),
+      T("cheers mate", "thanks", {}, "chat", tags=["thanks_between", "chatty"]),
+      T("and has anyone actually won a seat tonight", "seat_totals", {}, "table",
+        tags=["new_question", "relative_day", "not_yet"]),
+      T("what about ashvenny, how much is counted", "count_progress", {}, "status",
+        outcome="clarify", options=ASHVENNY, tags=["ambiguous", "clarify", "new_question"]),
+      T("south", "count_progress", {"contest": AS_}, "status", tags=[FU, "answer_to_clarify", "terse"])],
+     ["conversation", "thanks_between", "ambiguous"]),
 ]
 
 # ---------------------------------------------------------------- checks
