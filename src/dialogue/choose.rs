@@ -89,6 +89,7 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
         MIN_SCORE
     };
     let mut focus_gap: Option<&Intent> = None;
+    let mut ask_later: Option<Chosen> = None;
     let mut limit_gap: Option<(&Intent, Vec<String>)> = None;
     for scored in a
         .scores
@@ -138,11 +139,28 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
         let unexplained = a.frame.unexplained.len() as i32;
         let confidence =
             scored.score.min(1.0) * filled.certainty * UNEXPLAINED_COST.powi(unexplained);
-        return Choice::Intent(Chosen {
+        let chosen = Chosen {
             intent,
             filled,
             confidence,
-        });
+        };
+        // Asking back for a detail waits for the other intents tried: one
+        // that the question fills completely answers it as asked ("who's in
+        // front in the all-around and by how much" needs no athlete).
+        if matches!(chosen.filled.need, Some(Need::Missing { .. })) {
+            ask_later.get_or_insert(chosen);
+            continue;
+        }
+        // Only an intent that uses what the question names may go before
+        // asking: "who is leading?" asks which event rather than answering
+        // with the medal table.
+        if ask_later.is_some() && chosen.filled.slots.is_empty() {
+            break;
+        }
+        return Choice::Intent(chosen);
+    }
+    if let Some(chosen) = ask_later {
+        return Choice::Intent(chosen);
     }
     if let Some((intent, limits)) = limit_gap {
         return Choice::NotCovered {
@@ -244,9 +262,14 @@ fn mention_covered(
     takes: &dyn Fn(EntityKind) -> bool,
 ) -> bool {
     m.candidates.iter().any(|(t, _)| {
-        // The scenario's only award ("seat") narrows nothing.
+        // The scenario's only award ("seat") narrows nothing; several
+        // awards named ("gold, silver and bronze") ask for all of them,
+        // which an intent that takes an award gives without one.
         if let Target::Award(_) = t {
-            if data.awards().len() == 1 {
+            if data.awards().len() == 1
+                || (takes(EntityKind::Award)
+                    && !values.iter().any(|v| matches!(v, SlotValue::Award { .. })))
+            {
                 return true;
             }
         }

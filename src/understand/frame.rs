@@ -421,7 +421,16 @@ pub fn read(
         || tokens.iter().any(|t| {
             matches!(
                 *t,
-                "currently" | "live" | "leading" | "winning" | "ahead" | "now" | "ongoing"
+                "currently"
+                    | "live"
+                    | "leading"
+                    | "leader"
+                    | "leads"
+                    | "winning"
+                    | "ahead"
+                    | "front"
+                    | "now"
+                    | "ongoing"
             )
         });
     f.place = place(tokens, &named);
@@ -507,6 +516,11 @@ fn place(tokens: &[&str], named: &dyn Fn(usize) -> bool) -> Option<(usize, usize
             continue;
         }
         let t = tokens[i];
+        // "the runner-up" is second (common practice).
+        if t == "runnerup" || (t == "runner" && at(tokens, i + 1) == "up") {
+            let end = if t == "runner" { i + 2 } else { i + 1 };
+            return Some((i, end, Place::Nth(2)));
+        }
         if t == "last" || t == "bottom" {
             let before = i.checked_sub(1).map(|p| tokens[p]).unwrap_or("");
             let after = at(tokens, i + 1);
@@ -1278,6 +1292,7 @@ mod tests {
         assert_eq!(p("what is on on the 15th"), None);
         assert_eq!(p("the 15th of august"), None);
         assert_eq!(p("who won the second heat"), None);
+        assert_eq!(p("who was runner up"), Some(Place::Nth(2)));
         assert_eq!(p("who won last night"), None);
         assert_eq!(p("who won the last race"), None);
     }

@@ -173,14 +173,25 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
             EntityKind::Category => categories
                 .first()
                 .map(|c| SlotValue::Category { value: c.clone() }),
-            EntityKind::Award => a
-                .mentions
-                .iter()
-                .flat_map(|m| m.candidates.first())
-                .find_map(|(t, _)| match t {
-                    Target::Award(x) => Some(SlotValue::Award { value: x.clone() }),
+            // "gold, silver and bronze" asks for all of them: no one award.
+            EntityKind::Award => {
+                let mut named: Vec<&String> = a
+                    .mentions
+                    .iter()
+                    .flat_map(|m| m.candidates.first())
+                    .filter_map(|(t, _)| match t {
+                        Target::Award(x) => Some(x),
+                        _ => None,
+                    })
+                    .collect();
+                named.dedup();
+                match named.as_slice() {
+                    [one] => Some(SlotValue::Award {
+                        value: (*one).clone(),
+                    }),
                     _ => None,
-                }),
+                }
+            }
             EntityKind::Date => a.days.first().map(|d| SlotValue::Date { value: d.date }),
             EntityKind::Count => a.count.map(|c| SlotValue::Count { value: c.2 }),
             EntityKind::Place => a.frame.place.map(|(_, _, p)| SlotValue::Place {
@@ -198,6 +209,22 @@ pub fn fill(data: &Dataset, intent: &Intent, a: &Analysis, carried: &Slots) -> F
                     _ => None,
                 }),
             EntityKind::Contest => match resolve_contest(data, a, &slots) {
+                // Words where an event's name would be that name no event
+                // of the data ("the shot put", "the women's 800 m"): the
+                // data has no such event, which is said, not asked.
+                Ok(None) | Err(Some(_)) if a.days.is_empty() && unknown_event(a).is_some() => {
+                    let mut what = event_words(data, a);
+                    for w in unknown_event(a).unwrap_or_default().split(' ') {
+                        if !what.split(' ').any(|x| x == w) {
+                            what = format!("{what} {w}");
+                        }
+                    }
+                    need.get_or_insert(Need::NoMatch {
+                        slot: def.name.clone(),
+                        what: what.trim().to_string(),
+                    });
+                    None
+                }
                 // Only a day named: which event that day?
                 Ok(None) => match day_contests(data, a).as_deref() {
                     None => None,
@@ -365,6 +392,37 @@ pub fn odd_event_word(a: &Analysis) -> Option<usize> {
             .iter()
             .any(|m| part(m) && (m.end == j || j + 1 == m.start))
     })
+}
+
+/// Words that read as the name of an event the data does not have: a
+/// distance no discipline has ("800 m"), or unexplained words after "the"
+/// or next to a category or round ("the shot put", "women's triathlon").
+/// `None` when there are none.
+pub fn unknown_event(a: &Analysis) -> Option<String> {
+    let t = &a.tokens;
+    let named = |i: usize| a.mentions.iter().any(|m| m.start <= i && i < m.end);
+    for i in a.frame.onset..t.len() {
+        let is_figure = !t[i].is_empty() && t[i].chars().all(|c| c.is_ascii_digit());
+        if is_figure
+            && !named(i)
+            && matches!(t.get(i + 1).map(String::as_str), Some("m" | "km"))
+            && !named(i + 1)
+        {
+            return Some(format!("{} {}", t[i], t[i + 1]));
+        }
+    }
+    let unexplained = &a.frame.unexplained;
+    let start = odd_event_word(a).or_else(|| {
+        unexplained
+            .iter()
+            .copied()
+            .find(|&j| j > 0 && t[j - 1] == "the")
+    })?;
+    let mut end = start + 1;
+    while unexplained.contains(&end) {
+        end += 1;
+    }
+    Some(t[start..end].join(" "))
 }
 
 /// Contests on the day the message names, when it names a day but no
