@@ -91,6 +91,37 @@ impl SessionOptions {
     }
 }
 
+/// `serve`'s limits on connections (see `http::Limits`).
+#[derive(Debug, Args)]
+pub struct ConnectionOptions {
+    /// Seconds a request's headers may take to arrive in full.
+    #[arg(long, env = "TIDINGS_HEADER_TIMEOUT", default_value_t = 10)]
+    pub header_timeout: u64,
+    /// Seconds a connection with no request in progress may stay silent.
+    #[arg(long, env = "TIDINGS_IDLE_TIMEOUT", default_value_t = 5)]
+    pub idle_timeout: u64,
+    /// Most connections open at once; more are refused with a 503.
+    #[arg(long, env = "TIDINGS_MAX_CONNECTIONS", default_value_t = 512)]
+    pub max_connections: usize,
+    /// Seconds shutdown waits for open connections to finish.
+    #[arg(long, env = "TIDINGS_DRAIN_TIMEOUT", default_value_t = 10)]
+    pub drain_timeout: u64,
+}
+
+impl ConnectionOptions {
+    /// The limits these options set; zero durations become one second, so
+    /// a typo cannot switch a timeout off.
+    pub fn limits(&self) -> crate::http::Limits {
+        let secs = |s: u64| Duration::from_secs(s.max(1));
+        crate::http::Limits {
+            header_read_timeout: secs(self.header_timeout),
+            idle_timeout: secs(self.idle_timeout),
+            max_connections: self.max_connections.max(1),
+            drain_timeout: secs(self.drain_timeout),
+        }
+    }
+}
+
 #[derive(Debug, Subcommand)]
 pub enum Command {
     /// Serve the HTTP API.
@@ -102,6 +133,8 @@ pub enum Command {
         listen: SocketAddr,
         #[command(flatten)]
         sessions: SessionOptions,
+        #[command(flatten)]
+        connections: ConnectionOptions,
         /// Read the --data and --intents folders again when their files
         /// change; a broken file keeps the last good version serving.
         #[arg(long, env = "TIDINGS_WATCH")]
@@ -315,6 +348,7 @@ pub async fn run(cli: Cli) -> i32 {
             common,
             listen,
             sessions,
+            connections,
             watch,
         } => {
             if watch && common.data.is_none() && common.intents.is_none() {
@@ -362,7 +396,8 @@ pub async fn run(cli: Cli) -> i32 {
                 intents = snap.catalog.intents.len(),
                 "serving"
             );
-            match crate::http::run(listener, engine, shutdown_signal()).await {
+            let limits = connections.limits();
+            match crate::http::run_with(listener, engine, limits, shutdown_signal()).await {
                 Ok(()) => 0,
                 Err(e) => {
                     eprintln!("server error: {e}");

@@ -9,6 +9,7 @@
 mod admin;
 mod desk;
 mod error;
+mod serve;
 
 use std::future::Future;
 use std::time::Duration;
@@ -27,6 +28,7 @@ use tower_http::timeout::TimeoutLayer;
 use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
+pub use serve::Limits;
 
 use crate::engine::{Engine, Incoming};
 
@@ -193,13 +195,24 @@ pub fn app(engine: Engine) -> Router {
         }))
 }
 
-/// Serves the API on `listener` until `shutdown` completes.
+/// Serves the API on `listener` with the default [`Limits`] until
+/// `shutdown` completes.
 pub async fn run(
     listener: TcpListener,
     engine: Engine,
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
-    axum::serve(listener, app(engine))
-        .with_graceful_shutdown(shutdown)
-        .await
+    run_with(listener, engine, Limits::default(), shutdown).await
+}
+
+/// Serves the API on `listener` within `limits` until `shutdown`
+/// completes, then drains open connections for at most
+/// `limits.drain_timeout`.
+pub async fn run_with(
+    listener: TcpListener,
+    engine: Engine,
+    limits: Limits,
+    shutdown: impl Future<Output = ()> + Send + 'static,
+) -> std::io::Result<()> {
+    serve::serve(listener, app(engine), limits, shutdown).await
 }
