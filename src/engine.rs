@@ -491,7 +491,7 @@ impl Engine {
                 Err(e) => {
                     tracing::warn!(error = %e, "session store unavailable; answering without context");
                     let (answer, _) = self.answer(ch, None, m.text, &key);
-                    self.note_unanswered(&answer.reply).await;
+                    self.note_unanswered(&answer.reply, &key).await;
                     return Ok(Answer {
                         degraded: true,
                         ..answer
@@ -534,7 +534,7 @@ impl Engine {
             };
             match saved {
                 Ok(Saved::Stored) => {
-                    self.note_unanswered(&answer.reply).await;
+                    self.note_unanswered(&answer.reply, &key).await;
                     return Ok(answer);
                 }
                 Ok(Saved::Answered(earlier)) => {
@@ -566,7 +566,7 @@ impl Engine {
 
     /// Adds what a turn left unanswered to the editors' list. The list is
     /// a help, not a record: a failure is logged and the reply goes out.
-    async fn note_unanswered(&self, reply: &Reply) {
+    async fn note_unanswered(&self, reply: &Reply, key: &str) {
         if reply.unanswered.is_empty() {
             return;
         }
@@ -574,9 +574,10 @@ impl Engine {
         // store would delay it for nothing).
         let store = Arc::clone(&self.store);
         let notes = reply.unanswered.clone();
+        let key = key.to_string();
         tokio::spawn(async move {
             for (text, kind) in notes {
-                if let Err(e) = store.note_unanswered(&text, kind).await {
+                if let Err(e) = store.note_unanswered(&key, &text, kind).await {
                     tracing::debug!(error = %e, "unanswered question not noted");
                 }
             }
