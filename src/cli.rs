@@ -91,9 +91,9 @@ impl SessionOptions {
     }
 }
 
-/// `serve`'s limits on connections (see `http::Limits`).
+/// `serve`'s limits on connections and request rates (see `http::Edge`).
 #[derive(Debug, Args)]
-pub struct ConnectionOptions {
+pub struct EdgeOptions {
     /// Seconds a request's headers may take to arrive in full.
     #[arg(long, env = "TIDINGS_HEADER_TIMEOUT", default_value_t = 10)]
     pub header_timeout: u64,
@@ -106,18 +106,41 @@ pub struct ConnectionOptions {
     /// Seconds shutdown waits for open connections to finish.
     #[arg(long, env = "TIDINGS_DRAIN_TIMEOUT", default_value_t = 10)]
     pub drain_timeout: u64,
+    /// Requests per second from one source address (0: no limit).
+    #[arg(long, env = "TIDINGS_SOURCE_RATE", default_value_t = 50.0)]
+    pub source_rate: f64,
+    /// Requests one source address may send at once after a pause.
+    #[arg(long, env = "TIDINGS_SOURCE_BURST", default_value_t = 100.0)]
+    pub source_burst: f64,
+    /// Messages per second from one reader (0: no limit).
+    #[arg(long, env = "TIDINGS_READER_RATE", default_value_t = 1.0)]
+    pub reader_rate: f64,
+    /// Messages one reader may send at once after a pause.
+    #[arg(long, env = "TIDINGS_READER_BURST", default_value_t = 8.0)]
+    pub reader_burst: f64,
 }
 
-impl ConnectionOptions {
-    /// The limits these options set; zero durations become one second, so
-    /// a typo cannot switch a timeout off.
-    pub fn limits(&self) -> crate::http::Limits {
+impl EdgeOptions {
+    /// The edge these options set. Zero durations become one second, so a
+    /// typo cannot switch a timeout off; a zero (or negative) rate turns
+    /// that rate limit off.
+    pub fn edge(&self) -> crate::http::Edge {
         let secs = |s: u64| Duration::from_secs(s.max(1));
-        crate::http::Limits {
-            header_read_timeout: secs(self.header_timeout),
-            idle_timeout: secs(self.idle_timeout),
-            max_connections: self.max_connections.max(1),
-            drain_timeout: secs(self.drain_timeout),
+        let rate = |per_second: f64, burst: f64| {
+            (per_second > 0.0).then(|| crate::http::Rate::new(per_second, burst.max(1.0)))
+        };
+        crate::http::Edge {
+            connections: crate::http::Limits {
+                header_read_timeout: secs(self.header_timeout),
+                idle_timeout: secs(self.idle_timeout),
+                max_connections: self.max_connections.max(1),
+                drain_timeout: secs(self.drain_timeout),
+            },
+            rates: crate::http::Rates {
+                per_source: rate(self.source_rate, self.source_burst),
+                per_reader: rate(self.reader_rate, self.reader_burst),
+                ..crate::http::Rates::default()
+            },
         }
     }
 }
@@ -134,7 +157,7 @@ pub enum Command {
         #[command(flatten)]
         sessions: SessionOptions,
         #[command(flatten)]
-        connections: ConnectionOptions,
+        edge: EdgeOptions,
         /// Read the --data and --intents folders again when their files
         /// change; a broken file keeps the last good version serving.
         #[arg(long, env = "TIDINGS_WATCH")]
@@ -348,7 +371,7 @@ pub async fn run(cli: Cli) -> i32 {
             common,
             listen,
             sessions,
-            connections,
+            edge,
             watch,
         } => {
             if watch && common.data.is_none() && common.intents.is_none() {
@@ -396,8 +419,7 @@ pub async fn run(cli: Cli) -> i32 {
                 intents = snap.catalog.intents.len(),
                 "serving"
             );
-            let limits = connections.limits();
-            match crate::http::run_with(listener, engine, limits, shutdown_signal()).await {
+            match crate::http::run_with(listener, engine, edge.edge(), shutdown_signal()).await {
                 Ok(()) => 0,
                 Err(e) => {
                     eprintln!("server error: {e}");

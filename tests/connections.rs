@@ -38,7 +38,10 @@ async fn start(limits: Limits) -> Started {
     let done = tokio::spawn(tidings::http::run_with(
         listener,
         common::demo_engine(),
-        limits,
+        tidings::http::Edge {
+            connections: limits,
+            ..tidings::http::Edge::without_rate_limits()
+        },
         async {
             let _ = rx.await;
         },

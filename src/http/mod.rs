@@ -9,18 +9,22 @@
 mod admin;
 mod desk;
 mod error;
+pub mod limit;
 mod serve;
 
 use std::future::Future;
+use std::net::SocketAddr;
+use std::sync::Arc;
 use std::time::Duration;
 
 use axum::extract::{
-    DefaultBodyLimit, FromRequest, FromRequestParts, MatchedPath, Path, Request, State,
+    ConnectInfo, DefaultBodyLimit, FromRequest, FromRequestParts, MatchedPath, Path, Request, State,
 };
 use axum::http::StatusCode;
-use axum::response::IntoResponse;
+use axum::middleware::Next;
+use axum::response::{IntoResponse, Response};
 use axum::routing::{delete, get, post};
-use axum::{Json, Router};
+use axum::{Extension, Json, Router};
 use serde::Deserialize;
 use serde_json::json;
 use tokio::net::TcpListener;
@@ -28,6 +32,7 @@ use tower_http::timeout::TimeoutLayer;
 use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
+pub use limit::{Rate, Rates};
 pub use serve::Limits;
 
 use crate::engine::{Engine, Incoming};
@@ -36,6 +41,95 @@ use crate::engine::{Engine, Incoming};
 pub const MAX_BODY: usize = 16 * 1024;
 /// Longest message text accepted, in characters.
 pub const MAX_TEXT: usize = 500;
+
+/// How the edge of the service is set up: limits on connections and on
+/// request rates.
+#[derive(Debug, Clone, Default)]
+pub struct Edge {
+    /// Timeouts, the connection cap and the drain on shutdown.
+    pub connections: Limits,
+    /// Rate limits.
+    pub rates: Rates,
+}
+
+impl Edge {
+    /// The default connection limits and no rate limits: for tools and
+    /// tests that send many messages as one reader on purpose.
+    pub fn without_rate_limits() -> Edge {
+        Edge {
+            connections: Limits::default(),
+            rates: Rates {
+                per_source: None,
+                per_reader: None,
+                per_key: None,
+                ..Rates::default()
+            },
+        }
+    }
+}
+
+/// What the edge keeps while serving: its settings and the rate limits'
+/// buckets. Shared by every request through an `Arc` in the request
+/// extensions.
+#[derive(Debug)]
+pub struct EdgeState {
+    rates: Rates,
+    sources: limit::Buckets,
+    readers: limit::Buckets,
+    admin_failures: limit::Buckets,
+    /// One log line per interval when clients are being limited.
+    limited_log: crate::log_gate::SharedLogGate,
+}
+
+impl EdgeState {
+    fn new(edge: &Edge) -> EdgeState {
+        EdgeState {
+            rates: edge.rates.clone(),
+            sources: limit::Buckets::default(),
+            readers: limit::Buckets::default(),
+            admin_failures: limit::Buckets::default(),
+            limited_log: crate::log_gate::SharedLogGate::new(Duration::from_secs(10)),
+        }
+    }
+
+    /// Takes a token from `buckets` for `key`, or the 429 to answer.
+    fn take(
+        &self,
+        buckets: &limit::Buckets,
+        key: &str,
+        rate: Option<Rate>,
+        what: &'static str,
+    ) -> Result<(), ApiError> {
+        let Some(rate) = rate else { return Ok(()) };
+        buckets.take(key, rate).map_err(|wait| {
+            if let Some(held) = self.limited_log.pass() {
+                tracing::info!(limit = what, held_back = held, "rate limit reached");
+            }
+            ApiError::rate_limited(what, wait)
+        })
+    }
+}
+
+/// The source address of a request, when it came over a socket.
+fn source(extensions: &axum::http::Extensions) -> Option<String> {
+    extensions
+        .get::<ConnectInfo<SocketAddr>>()
+        .map(|c| c.0.ip().to_string())
+}
+
+/// The per-source rate limit, before anything else is read. The health
+/// checks are left out: a load balancer polls them from one address.
+async fn limit_source(State(edge): State<Arc<EdgeState>>, req: Request, next: Next) -> Response {
+    let path = req.uri().path();
+    if path != "/healthz" && path != "/readyz" {
+        if let Some(src) = source(req.extensions()) {
+            if let Err(e) = edge.take(&edge.sources, &src, edge.rates.per_source, "this address") {
+                return e.into_response();
+            }
+        }
+    }
+    next.run(req).await
+}
 
 /// JSON body extractor that answers bad JSON in the service's own format.
 #[derive(FromRequest)]
@@ -64,6 +158,7 @@ pub struct MessageIn {
 
 async fn messages(
     State(engine): State<Engine>,
+    Extension(edge): Extension<Arc<EdgeState>>,
     AppJson(m): AppJson<MessageIn>,
 ) -> Result<impl IntoResponse, ApiError> {
     if m.user.trim().is_empty() {
@@ -94,6 +189,9 @@ async fn messages(
         }
     }
     let channel = m.channel.as_deref().unwrap_or("chat");
+    // By the hashed key, so the buckets hold no reader id.
+    let reader = engine.user_key(channel, &m.user);
+    edge.take(&edge.readers, &reader, edge.rates.per_reader, "this reader")?;
     let answer = engine
         .handle_message(Incoming {
             user: &m.user,
@@ -154,6 +252,7 @@ async fn not_found() -> ApiError {
         status: StatusCode::NOT_FOUND,
         code: "not_found",
         message: "no such endpoint".into(),
+        retry_after: None,
     }
 }
 
@@ -162,11 +261,19 @@ async fn wrong_method() -> ApiError {
         status: StatusCode::METHOD_NOT_ALLOWED,
         code: "method_not_allowed",
         message: "this endpoint does not take that method; see the allow header".into(),
+        retry_after: None,
     }
 }
 
-/// The application's routes and layers.
+/// The application's routes and layers, without rate limits (see
+/// [`Edge::without_rate_limits`]).
 pub fn app(engine: Engine) -> Router {
+    app_with(engine, &Edge::without_rate_limits())
+}
+
+/// The application's routes and layers, limited as `edge` says.
+pub fn app_with(engine: Engine, edge: &Edge) -> Router {
+    let state = Arc::new(EdgeState::new(edge));
     Router::new()
         .route("/v1/messages", post(messages))
         .route("/v1/users/{channel}/{user}", delete(erase_user))
@@ -178,9 +285,16 @@ pub fn app(engine: Engine) -> Router {
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)
         // Layers run outside-in: the trace span wraps everything, then the
-        // timeout (so a stuck request cannot hold shutdown forever), then the
-        // body limit that the JSON extractor reports as 413.
+        // timeout (so a stuck request cannot hold shutdown forever), then
+        // the edge's state for handlers, the per-source rate limit (before
+        // any body is read), then the body limit that the JSON extractor
+        // reports as 413.
         .layer(DefaultBodyLimit::max(MAX_BODY))
+        .layer(axum::middleware::from_fn_with_state(
+            Arc::clone(&state),
+            limit_source,
+        ))
+        .layer(Extension(state))
         .layer(TimeoutLayer::with_status_code(
             StatusCode::SERVICE_UNAVAILABLE,
             Duration::from_secs(10),
@@ -195,24 +309,25 @@ pub fn app(engine: Engine) -> Router {
         }))
 }
 
-/// Serves the API on `listener` with the default [`Limits`] until
-/// `shutdown` completes.
+/// Serves the API on `listener` with the default connection limits and no
+/// rate limits until `shutdown` completes.
 pub async fn run(
     listener: TcpListener,
     engine: Engine,
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
-    run_with(listener, engine, Limits::default(), shutdown).await
+    run_with(listener, engine, Edge::without_rate_limits(), shutdown).await
 }
 
-/// Serves the API on `listener` within `limits` until `shutdown`
+/// Serves the API on `listener` as `edge` says until `shutdown`
 /// completes, then drains open connections for at most
-/// `limits.drain_timeout`.
+/// `edge.connections.drain_timeout`.
 pub async fn run_with(
     listener: TcpListener,
     engine: Engine,
-    limits: Limits,
+    edge: Edge,
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
-    serve::serve(listener, app(engine), limits, shutdown).await
+    let router = app_with(engine, &edge);
+    serve::serve(listener, router, edge.connections, shutdown).await
 }
