@@ -622,7 +622,12 @@ impl Engine {
             channel: profile,
             stale_after: self.settings.stale_after,
         };
-        let (reply, session) = turn(&ctx, session, text);
+        let (mut reply, session) = turn(&ctx, session, text);
+        // Measured on the final text, whatever wording or service reply it
+        // came from: an SMS reply always goes out as one segment.
+        if profile.one_sms_segment {
+            reply.text = crate::answers::sms::fit_one_segment(&reply.text);
+        }
         let reply_text = reply.text.clone();
         tracing::debug!(user = %key, intent = ?reply.intent, outcome = ?reply.outcome, "turn");
         let answer = Answer {
