@@ -625,6 +625,11 @@ impl Engine {
         let (mut reply, session) = turn(&ctx, session, text);
         // Measured on the final text, whatever wording or service reply it
         // came from: an SMS reply always goes out as one segment.
+        // Plain-text fields stay plain text whatever the data's names hold.
+        reply.text = crate::answers::channel::plain_text(&reply.text);
+        for q in &mut reply.quick_replies {
+            *q = crate::answers::channel::plain_text(q);
+        }
         if profile.one_sms_segment {
             reply.text = crate::answers::sms::fit_one_segment(&reply.text);
         }
