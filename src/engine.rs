@@ -223,6 +223,21 @@ pub struct SmsFit {
     pub limit: usize,
 }
 
+/// The store-outage warnings, at most one per 10 seconds.
+static STORE_DOWN_LOG: std::sync::LazyLock<crate::log_gate::SharedLogGate> =
+    std::sync::LazyLock::new(|| crate::log_gate::SharedLogGate::new(Duration::from_secs(10)));
+
+/// Serialises a map in key order, so the same reply is the same bytes
+/// every time: a retried message gets its stored reply back parsed and
+/// written again, and a hash map's order differs between the two.
+pub fn in_key_order<S: serde::Serializer, V: Serialize>(
+    map: &std::collections::HashMap<String, V>,
+    s: S,
+) -> Result<S::Ok, S::Error> {
+    let sorted: std::collections::BTreeMap<&String, &V> = map.iter().collect();
+    sorted.serialize(s)
+}
+
 /// A handled message with the version facts answers can cite.
 #[derive(Debug, Clone, Serialize, Deserialize)]
 pub struct Answer {
@@ -489,9 +504,14 @@ impl Engine {
             let loaded = match self.store.load(&key, message.as_deref()).await {
                 Ok(l) => l,
                 Err(e) => {
-                    tracing::warn!(error = %e, "session store unavailable; answering without context");
+                    // One line per interval: an outage would otherwise
+                    // write one for every message.
+                    if let Some(held) = STORE_DOWN_LOG.pass() {
+                        tracing::warn!(error = %e, held_back = held, "session store unavailable; answering without context");
+                    }
                     let (answer, _) = self.answer(ch, None, m.text, &key);
-                    self.note_unanswered(&answer.reply, &key).await;
+                    // Not noted as unanswered: without its context a
+                    // follow-up looks like a question not understood.
                     return Ok(Answer {
                         degraded: true,
                         ..answer
@@ -553,7 +573,9 @@ impl Engine {
                     // The answer used the context, but this turn is not
                     // remembered; it is marked like any degraded reply,
                     // since the next follow-up may lack its context.
-                    tracing::warn!(error = %e, "session not saved");
+                    if let Some(held) = STORE_DOWN_LOG.pass() {
+                        tracing::warn!(error = %e, held_back = held, "session not saved");
+                    }
                     return Ok(Answer {
                         degraded: true,
                         ..answer

@@ -80,6 +80,7 @@ pub struct Reply {
     /// Options of a clarifying question.
     pub options: Vec<OptionOut>,
     /// Facts behind the answer, for checking and for richer clients.
+    #[serde(serialize_with = "crate::engine::in_key_order")]
     pub facts: HashMap<String, Value>,
     /// The best intents and why.
     pub candidates: Vec<Scored>,

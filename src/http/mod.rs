@@ -28,7 +28,6 @@ use axum::{Extension, Json, Router};
 use serde::Deserialize;
 use serde_json::json;
 use tokio::net::TcpListener;
-use tower_http::timeout::TimeoutLayer;
 use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
@@ -129,6 +128,50 @@ async fn limit_source(State(edge): State<Arc<EdgeState>>, req: Request, next: Ne
         }
     }
     next.run(req).await
+}
+
+/// How long one request may take.
+pub const REQUEST_TIMEOUT: Duration = Duration::from_secs(10);
+
+/// Largest request head (request line and headers) accepted; larger is a
+/// 431 in the service's error shape.
+pub const MAX_HEAD: usize = 16 * 1024;
+
+/// The per-request time limit, answered in the service's error shape (a
+/// stuck request cannot hold a connection or shutdown for ever), and the
+/// head size limit, checked first.
+async fn time_limit(req: Request, next: Next) -> Response {
+    let head: usize = req.uri().to_string().len()
+        + req
+            .headers()
+            .iter()
+            .map(|(k, v)| k.as_str().len() + v.len() + 4)
+            .sum::<usize>();
+    if head > MAX_HEAD {
+        return ApiError {
+            status: StatusCode::REQUEST_HEADER_FIELDS_TOO_LARGE,
+            code: "headers_too_large",
+            message: format!(
+                "the request line and headers must be at most {} KiB",
+                MAX_HEAD / 1024
+            ),
+            retry_after: None,
+        }
+        .into_response();
+    }
+    match tokio::time::timeout(REQUEST_TIMEOUT, next.run(req)).await {
+        Ok(r) => r,
+        Err(_) => ApiError {
+            status: StatusCode::SERVICE_UNAVAILABLE,
+            code: "timeout",
+            message: format!(
+                "the request took longer than {} seconds; try again",
+                REQUEST_TIMEOUT.as_secs()
+            ),
+            retry_after: Some(Duration::from_secs(1)),
+        }
+        .into_response(),
+    }
 }
 
 /// JSON body extractor that answers bad JSON in the service's own format.
@@ -295,10 +338,7 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
             limit_source,
         ))
         .layer(Extension(state))
-        .layer(TimeoutLayer::with_status_code(
-            StatusCode::SERVICE_UNAVAILABLE,
-            Duration::from_secs(10),
-        ))
+        .layer(axum::middleware::from_fn(time_limit))
         .layer(TraceLayer::new_for_http().make_span_with(|req: &Request| {
             let route = req
                 .extensions()
