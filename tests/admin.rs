@@ -95,6 +95,24 @@ async fn a_batch_is_applied_and_answers_change() {
 }
 
 #[tokio::test]
+async fn a_batch_giving_a_person_a_delegations_name_is_refused() {
+    let s = Server::start(admin_server_engine()).await;
+    let clash = json!({"changes": [
+        {"change": "aliases", "of": "competitor", "id": "p005", "add": ["Quessary"]}
+    ]});
+    let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(clash)).await;
+    assert_eq!(status, 422, "{body}");
+    assert_eq!(body["error"]["code"], "invalid_batch");
+    let msg = body["error"]["message"].as_str().unwrap();
+    assert!(
+        msg.contains("competitors.json") && msg.contains("p005") && msg.contains("aliases"),
+        "{msg}"
+    );
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 1);
+}
+
+#[tokio::test]
 async fn an_invalid_batch_changes_nothing_and_lists_every_problem() {
     let s = Server::start(admin_server_engine()).await;
     let bad = json!({"changes": [
