@@ -71,6 +71,10 @@ pub struct SessionOptions {
     /// to be old in answers, in seconds.
     #[arg(long, env = "TIDINGS_STALE_AFTER", default_value_t = 600)]
     pub stale_after: u64,
+    /// Most of any kind of record (0 to 1) a whole-dataset replacement
+    /// through the admin API may remove unless sent with ?force=true.
+    #[arg(long, env = "TIDINGS_MAX_REMOVED_SHARE", default_value_t = 0.5)]
+    pub max_removed_share: f64,
     /// Bearer token for the admin API (/v1/admin/...); without one the
     /// admin API is off.
     #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
@@ -86,6 +90,7 @@ impl SessionOptions {
             session_ttl,
             retry_window: 600,
             stale_after: 600,
+            max_removed_share: 0.5,
             admin_token: None,
         }
     }
@@ -304,6 +309,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         id_secret: id_secret(),
         admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
         stale_after: Duration::from_secs(o.stale_after),
+        max_removed_share: o.max_removed_share.clamp(0.0, 1.0),
     };
     // With Redis, replicas share the sessions and the dataset, both through
     // one link, so a change posted to one replica is served by all.

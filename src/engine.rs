@@ -152,6 +152,9 @@ pub struct Settings {
     /// After how long without an update a live contest's figures are said
     /// to be old.
     pub stale_after: Duration,
+    /// Most of any kind of record (0 to 1) that a whole-dataset replacement
+    /// may remove without being forced.
+    pub max_removed_share: f64,
 }
 
 impl std::fmt::Debug for Settings {
@@ -178,6 +181,7 @@ impl Settings {
             id_secret,
             admin_token: None,
             stale_after: Duration::from_secs(600),
+            max_removed_share: 0.5,
         }
     }
 }
@@ -694,6 +698,25 @@ impl Engine {
 
     /// Replaces the whole dataset with checked records; the version moves
     /// on from the current one.
+    /// [`Engine::replace_records`] for the admin API: refused, with a
+    /// problem per kind of record, when it removes more than
+    /// `max_removed_share` of any kind, unless `force`.
+    pub async fn replace_records_checked(
+        &self,
+        records: Records,
+        force: bool,
+    ) -> Result<u64, ChangeError> {
+        if !force {
+            let current = Records::of(&self.snapshot().data);
+            let problems =
+                changes::removes_too_much(&current, &records, self.settings.max_removed_share);
+            if !problems.is_empty() {
+                return Err(ChangeError::Invalid(problems));
+            }
+        }
+        self.replace_records(records).await
+    }
+
     pub async fn replace_records(&self, records: Records) -> Result<u64, ChangeError> {
         self.change(|data, _| {
             records

@@ -96,12 +96,26 @@ async fn apply_batch(
     }
 }
 
+/// `?force=true` on a dataset replacement.
+#[derive(Debug, serde::Deserialize)]
+struct Force {
+    #[serde(default)]
+    force: bool,
+}
+
 async fn replace_dataset(
     _: Admin,
     State(engine): State<Engine>,
+    force: Result<Query<Force>, axum::extract::rejection::QueryRejection>,
     AppJson(records): AppJson<Records>,
 ) -> Result<impl IntoResponse, ApiError> {
-    match engine.replace_records(records).await {
+    let Ok(Query(Force { force })) = force else {
+        return Err(ApiError::invalid(
+            "bad_force",
+            "?force= must be true or false",
+        ));
+    };
+    match engine.replace_records_checked(records, force).await {
         Ok(version) => Ok(Json(json!({ "dataset_version": version }))),
         Err(e) => Err(change_error(
             "invalid_dataset",
