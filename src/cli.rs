@@ -71,6 +71,10 @@ pub struct SessionOptions {
     /// to be old in answers, in seconds.
     #[arg(long, env = "TIDINGS_STALE_AFTER", default_value_t = 600)]
     pub stale_after: u64,
+    /// Most of any kind of record (0 to 1) a whole-dataset replacement
+    /// through the admin API may remove unless sent with ?force=true.
+    #[arg(long, env = "TIDINGS_MAX_REMOVED_SHARE", default_value_t = 0.5)]
+    pub max_removed_share: f64,
     /// Bearer token for the admin API (/v1/admin/...); without one the
     /// admin API is off.
     #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
@@ -86,7 +90,62 @@ impl SessionOptions {
             session_ttl,
             retry_window: 600,
             stale_after: 600,
+            max_removed_share: 0.5,
             admin_token: None,
+        }
+    }
+}
+
+/// `serve`'s limits on connections and request rates (see `http::Edge`).
+#[derive(Debug, Args)]
+pub struct EdgeOptions {
+    /// Seconds a request's headers may take to arrive in full.
+    #[arg(long, env = "TIDINGS_HEADER_TIMEOUT", default_value_t = 10)]
+    pub header_timeout: u64,
+    /// Seconds a connection with no request in progress may stay silent.
+    #[arg(long, env = "TIDINGS_IDLE_TIMEOUT", default_value_t = 5)]
+    pub idle_timeout: u64,
+    /// Most connections open at once; more are refused with a 503.
+    #[arg(long, env = "TIDINGS_MAX_CONNECTIONS", default_value_t = 512)]
+    pub max_connections: usize,
+    /// Seconds shutdown waits for open connections to finish.
+    #[arg(long, env = "TIDINGS_DRAIN_TIMEOUT", default_value_t = 10)]
+    pub drain_timeout: u64,
+    /// Requests per second from one source address (0: no limit).
+    #[arg(long, env = "TIDINGS_SOURCE_RATE", default_value_t = 50.0)]
+    pub source_rate: f64,
+    /// Requests one source address may send at once after a pause.
+    #[arg(long, env = "TIDINGS_SOURCE_BURST", default_value_t = 100.0)]
+    pub source_burst: f64,
+    /// Messages per second from one reader (0: no limit).
+    #[arg(long, env = "TIDINGS_READER_RATE", default_value_t = 1.0)]
+    pub reader_rate: f64,
+    /// Messages one reader may send at once after a pause.
+    #[arg(long, env = "TIDINGS_READER_BURST", default_value_t = 8.0)]
+    pub reader_burst: f64,
+}
+
+impl EdgeOptions {
+    /// The edge these options set. Zero durations become one second, so a
+    /// typo cannot switch a timeout off; a zero (or negative) rate turns
+    /// that rate limit off.
+    pub fn edge(&self) -> crate::http::Edge {
+        let secs = |s: u64| Duration::from_secs(s.max(1));
+        let rate = |per_second: f64, burst: f64| {
+            (per_second > 0.0).then(|| crate::http::Rate::new(per_second, burst.max(1.0)))
+        };
+        crate::http::Edge {
+            connections: crate::http::Limits {
+                header_read_timeout: secs(self.header_timeout),
+                idle_timeout: secs(self.idle_timeout),
+                max_connections: self.max_connections.max(1),
+                drain_timeout: secs(self.drain_timeout),
+            },
+            rates: crate::http::Rates {
+                per_source: rate(self.source_rate, self.source_burst),
+                per_reader: rate(self.reader_rate, self.reader_burst),
+                ..crate::http::Rates::default()
+            },
         }
     }
 }
@@ -102,6 +161,8 @@ pub enum Command {
         listen: SocketAddr,
         #[command(flatten)]
         sessions: SessionOptions,
+        #[command(flatten)]
+        edge: EdgeOptions,
         /// Read the --data and --intents folders again when their files
         /// change; a broken file keeps the last good version serving.
         #[arg(long, env = "TIDINGS_WATCH")]
@@ -248,6 +309,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         id_secret: id_secret(),
         admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
         stale_after: Duration::from_secs(o.stale_after),
+        max_removed_share: o.max_removed_share.clamp(0.0, 1.0),
     };
     // With Redis, replicas share the sessions and the dataset, both through
     // one link, so a change posted to one replica is served by all.
@@ -315,6 +377,7 @@ pub async fn run(cli: Cli) -> i32 {
             common,
             listen,
             sessions,
+            edge,
             watch,
         } => {
             if watch && common.data.is_none() && common.intents.is_none() {
@@ -362,7 +425,7 @@ pub async fn run(cli: Cli) -> i32 {
                 intents = snap.catalog.intents.len(),
                 "serving"
             );
-            match crate::http::run(listener, engine, shutdown_signal()).await {
+            match crate::http::run_with(listener, engine, edge.edge(), shutdown_signal()).await {
                 Ok(()) => 0,
                 Err(e) => {
                     eprintln!("server error: {e}");

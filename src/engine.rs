@@ -152,6 +152,9 @@ pub struct Settings {
     /// After how long without an update a live contest's figures are said
     /// to be old.
     pub stale_after: Duration,
+    /// Most of any kind of record (0 to 1) that a whole-dataset replacement
+    /// may remove without being forced.
+    pub max_removed_share: f64,
 }
 
 impl std::fmt::Debug for Settings {
@@ -178,6 +181,7 @@ impl Settings {
             id_secret,
             admin_token: None,
             stale_after: Duration::from_secs(600),
+            max_removed_share: 0.5,
         }
     }
 }
@@ -221,6 +225,21 @@ pub struct SmsFit {
     pub encoding: String,
     pub units: usize,
     pub limit: usize,
+}
+
+/// The store-outage warnings, at most one per 10 seconds.
+static STORE_DOWN_LOG: std::sync::LazyLock<crate::log_gate::SharedLogGate> =
+    std::sync::LazyLock::new(|| crate::log_gate::SharedLogGate::new(Duration::from_secs(10)));
+
+/// Serialises a map in key order, so the same reply is the same bytes
+/// every time: a retried message gets its stored reply back parsed and
+/// written again, and a hash map's order differs between the two.
+pub fn in_key_order<S: serde::Serializer, V: Serialize>(
+    map: &std::collections::HashMap<String, V>,
+    s: S,
+) -> Result<S::Ok, S::Error> {
+    let sorted: std::collections::BTreeMap<&String, &V> = map.iter().collect();
+    sorted.serialize(s)
 }
 
 /// A handled message with the version facts answers can cite.
@@ -489,9 +508,14 @@ impl Engine {
             let loaded = match self.store.load(&key, message.as_deref()).await {
                 Ok(l) => l,
                 Err(e) => {
-                    tracing::warn!(error = %e, "session store unavailable; answering without context");
+                    // One line per interval: an outage would otherwise
+                    // write one for every message.
+                    if let Some(held) = STORE_DOWN_LOG.pass() {
+                        tracing::warn!(error = %e, held_back = held, "session store unavailable; answering without context");
+                    }
                     let (answer, _) = self.answer(ch, None, m.text, &key);
-                    self.note_unanswered(&answer.reply).await;
+                    // Not noted as unanswered: without its context a
+                    // follow-up looks like a question not understood.
                     return Ok(Answer {
                         degraded: true,
                         ..answer
@@ -534,7 +558,7 @@ impl Engine {
             };
             match saved {
                 Ok(Saved::Stored) => {
-                    self.note_unanswered(&answer.reply).await;
+                    self.note_unanswered(&answer.reply, &key).await;
                     return Ok(answer);
                 }
                 Ok(Saved::Answered(earlier)) => {
@@ -553,7 +577,9 @@ impl Engine {
                     // The answer used the context, but this turn is not
                     // remembered; it is marked like any degraded reply,
                     // since the next follow-up may lack its context.
-                    tracing::warn!(error = %e, "session not saved");
+                    if let Some(held) = STORE_DOWN_LOG.pass() {
+                        tracing::warn!(error = %e, held_back = held, "session not saved");
+                    }
                     return Ok(Answer {
                         degraded: true,
                         ..answer
@@ -566,7 +592,7 @@ impl Engine {
 
     /// Adds what a turn left unanswered to the editors' list. The list is
     /// a help, not a record: a failure is logged and the reply goes out.
-    async fn note_unanswered(&self, reply: &Reply) {
+    async fn note_unanswered(&self, reply: &Reply, key: &str) {
         if reply.unanswered.is_empty() {
             return;
         }
@@ -574,9 +600,10 @@ impl Engine {
         // store would delay it for nothing).
         let store = Arc::clone(&self.store);
         let notes = reply.unanswered.clone();
+        let key = key.to_string();
         tokio::spawn(async move {
             for (text, kind) in notes {
-                if let Err(e) = store.note_unanswered(&text, kind).await {
+                if let Err(e) = store.note_unanswered(&key, &text, kind).await {
                     tracing::debug!(error = %e, "unanswered question not noted");
                 }
             }
@@ -621,7 +648,17 @@ impl Engine {
             channel: profile,
             stale_after: self.settings.stale_after,
         };
-        let (reply, session) = turn(&ctx, session, text);
+        let (mut reply, session) = turn(&ctx, session, text);
+        // Measured on the final text, whatever wording or service reply it
+        // came from: an SMS reply always goes out as one segment.
+        // Plain-text fields stay plain text whatever the data's names hold.
+        reply.text = crate::answers::channel::plain_text(&reply.text);
+        for q in &mut reply.quick_replies {
+            *q = crate::answers::channel::plain_text(q);
+        }
+        if profile.one_sms_segment {
+            reply.text = crate::answers::sms::fit_one_segment(&reply.text);
+        }
         let reply_text = reply.text.clone();
         tracing::debug!(user = %key, intent = ?reply.intent, outcome = ?reply.outcome, "turn");
         let answer = Answer {
@@ -661,6 +698,25 @@ impl Engine {
 
     /// Replaces the whole dataset with checked records; the version moves
     /// on from the current one.
+    /// [`Engine::replace_records`] for the admin API: refused, with a
+    /// problem per kind of record, when it removes more than
+    /// `max_removed_share` of any kind, unless `force`.
+    pub async fn replace_records_checked(
+        &self,
+        records: Records,
+        force: bool,
+    ) -> Result<u64, ChangeError> {
+        if !force {
+            let current = Records::of(&self.snapshot().data);
+            let problems =
+                changes::removes_too_much(&current, &records, self.settings.max_removed_share);
+            if !problems.is_empty() {
+                return Err(ChangeError::Invalid(problems));
+            }
+        }
+        self.replace_records(records).await
+    }
+
     pub async fn replace_records(&self, records: Records) -> Result<u64, ChangeError> {
         self.change(|data, _| {
             records

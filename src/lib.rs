@@ -23,6 +23,8 @@
 //!   [`watch`]: reloading changed files while serving. [`check`]:
 //!   checking editors' files (`tidings check PATHS`). [`replay`]: feeding
 //!   a night's change batches to a running server (`tidings replay`).
+//!   [`log_gate`]: one log line per interval for faults that repeat.
+//!   [`privacy`]: masking personal data in readers' words before any is kept.
 //!
 //! # Quick example
 //!
@@ -51,6 +53,8 @@ pub mod dialogue;
 pub mod engine;
 pub mod eval;
 pub mod http;
+pub mod log_gate;
+pub mod privacy;
 pub mod replay;
 pub mod scripts;
 pub mod understand;

@@ -95,6 +95,24 @@ async fn a_batch_is_applied_and_answers_change() {
 }
 
 #[tokio::test]
+async fn a_batch_giving_a_person_a_delegations_name_is_refused() {
+    let s = Server::start(admin_server_engine()).await;
+    let clash = json!({"changes": [
+        {"change": "aliases", "of": "competitor", "id": "p005", "add": ["Quessary"]}
+    ]});
+    let (status, body) = admin(&s, "POST", "/v1/admin/batches", Some(clash)).await;
+    assert_eq!(status, 422, "{body}");
+    assert_eq!(body["error"]["code"], "invalid_batch");
+    let msg = body["error"]["message"].as_str().unwrap();
+    assert!(
+        msg.contains("competitors.json") && msg.contains("p005") && msg.contains("aliases"),
+        "{msg}"
+    );
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 1);
+}
+
+#[tokio::test]
 async fn an_invalid_batch_changes_nothing_and_lists_every_problem() {
     let s = Server::start(admin_server_engine()).await;
     let bad = json!({"changes": [
@@ -139,6 +157,35 @@ async fn an_invalid_batch_changes_nothing_and_lists_every_problem() {
         .await
         .unwrap();
     assert_eq!(r.status(), 400);
+}
+
+#[tokio::test]
+async fn a_replacement_that_removes_most_records_is_refused_unless_forced() {
+    let s = Server::start(admin_server_engine()).await;
+    let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+    let scenario: Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("scenario.json")).unwrap()).unwrap();
+    let empty = json!({
+        "scenario": scenario, "sports": [], "groups": [], "competitors": [], "contests": [],
+    });
+    let (status, body) = admin(&s, "PUT", "/v1/admin/dataset", Some(empty.clone())).await;
+    assert_eq!(status, 422, "{body}");
+    let msg = body["error"]["message"].as_str().unwrap();
+    for file in [
+        "sports.json",
+        "groups.json",
+        "competitors.json",
+        "contests.json",
+    ] {
+        assert!(msg.contains(file), "{file}: {msg}");
+    }
+    assert!(msg.contains("removes 300 of 300 competitors"), "{msg}");
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 1);
+    // Forced, it is checked like any dataset and served.
+    let (status, body) = admin(&s, "PUT", "/v1/admin/dataset?force=true", Some(empty)).await;
+    assert_eq!(status, 200, "{body}");
+    assert_eq!(body["dataset_version"], 2);
 }
 
 #[tokio::test]

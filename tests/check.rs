@@ -231,6 +231,20 @@ fn data_problems_name_file_record_and_field() {
 }
 
 #[test]
+fn an_alias_that_is_also_a_delegations_name_is_reported() {
+    let dir = data_with("competitors.json", |mut v| {
+        v[0]["aliases"] = serde_json::json!(["quessary"]);
+        v
+    });
+    let (code, out) = check(&["--data", dir.path().to_str().unwrap()]);
+    assert_eq!(code, 1);
+    assert!(
+        out.contains("competitors.json: record p001: field aliases: alias \"quessary\" is also a name of group"),
+        "{out}"
+    );
+}
+
+#[test]
 fn an_award_that_contradicts_the_places_is_reported() {
     let dir = data_with("contests.json", |mut v| {
         let ix = v

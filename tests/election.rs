@@ -224,6 +224,9 @@ fn election_server() -> ServeProcess {
             data.to_str().unwrap(),
             "--intents",
             intents.to_str().unwrap(),
+            // One reader asks the whole night's questions in a burst.
+            "--reader-rate",
+            "0",
         ],
         &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
     )

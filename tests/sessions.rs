@@ -168,10 +168,11 @@ impl SessionStore for Paused {
     }
     fn note_unanswered<'a>(
         &'a self,
+        reader: &'a str,
         text: &'a str,
         kind: &'a str,
     ) -> BoxFuture<'a, Result<(), StoreError>> {
-        self.0.note_unanswered(text, kind)
+        self.0.note_unanswered(reader, text, kind)
     }
     fn unanswered(
         &self,

@@ -338,15 +338,19 @@ async fn concurrent_updates_of_one_reader_are_never_lost(store: Arc<dyn SessionS
 
 async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn SessionStore>) {
     use tidings::dialogue::store::UNANSWERED_CAP;
-    for _ in 0..3 {
+    let ns = new_reader();
+    for r in 0..3 {
         store
-            .note_unanswered("what is the weather", "not_understood")
+            .note_unanswered(&format!("{ns}{r}"), "what is the weather", "not_understood")
             .await
             .unwrap();
     }
-    store.note_unanswered("who won", "abandoned").await.unwrap();
     store
-        .note_unanswered("what is the weather", "abandoned")
+        .note_unanswered(&format!("{ns}0"), "who won", "abandoned")
+        .await
+        .unwrap();
+    store
+        .note_unanswered(&format!("{ns}0"), "what is the weather", "abandoned")
         .await
         .unwrap();
     let top = store.unanswered(2).await.unwrap();
@@ -359,7 +363,11 @@ async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn Sess
     // Capped: the least asked go first; the most asked stay.
     for i in 0..UNANSWERED_CAP + 5 {
         store
-            .note_unanswered(&format!("filler {i}"), "not_understood")
+            .note_unanswered(
+                &format!("{ns}filler-{i}"),
+                &format!("filler {i}"),
+                "not_understood",
+            )
             .await
             .unwrap();
     }
@@ -368,9 +376,9 @@ async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn Sess
     assert_eq!(all[0].text, "what is the weather");
     assert_eq!(all[0].count, 3);
     // A new question on a full list is kept and can climb.
-    for _ in 0..5 {
+    for r in 0..5 {
         store
-            .note_unanswered("a brand new question", "abandoned")
+            .note_unanswered(&format!("{ns}new-{r}"), "a brand new question", "abandoned")
             .await
             .unwrap();
     }
@@ -378,6 +386,68 @@ async fn unanswered_questions_are_counted_grouped_and_capped(store: Arc<dyn Sess
     assert_eq!(
         (top[0].text.as_str(), top[0].count),
         ("a brand new question", 5)
+    );
+}
+
+async fn one_reader_counts_once_per_question_and_for_a_share_only(store: Arc<dyn SessionStore>) {
+    use tidings::dialogue::store::UNANSWERED_PER_READER;
+    let reader = new_reader();
+    for _ in 0..5 {
+        store
+            .note_unanswered(&reader, "the same garbage", "not_understood")
+            .await
+            .unwrap();
+    }
+    for i in 0..UNANSWERED_PER_READER * 3 {
+        store
+            .note_unanswered(&reader, &format!("garbage {i}"), "not_understood")
+            .await
+            .unwrap();
+    }
+    let all = store.unanswered(10_000).await.unwrap();
+    let same = all.iter().find(|u| u.text == "the same garbage").unwrap();
+    assert_eq!(
+        same.count, 1,
+        "one reader asking again is not a second reader"
+    );
+    let theirs = all
+        .iter()
+        .filter(|u| u.text == "the same garbage" || u.text.starts_with("garbage "))
+        .count();
+    assert_eq!(theirs, UNANSWERED_PER_READER);
+}
+
+async fn erasing_a_reader_takes_their_questions_off_the_unanswered_list(
+    store: Arc<dyn SessionStore>,
+) {
+    let (a, b) = (new_reader(), new_reader());
+    let only_a = format!("only asked by {a}");
+    store
+        .note_unanswered(&a, &only_a, "not_understood")
+        .await
+        .unwrap();
+    store
+        .note_unanswered(&a, "asked by both", "not_understood")
+        .await
+        .unwrap();
+    store
+        .note_unanswered(&b, "asked by both", "not_understood")
+        .await
+        .unwrap();
+    store.erase(&a).await.unwrap();
+    let all = store.unanswered(10_000).await.unwrap();
+    assert!(all.iter().all(|u| u.text != only_a), "{all:?}");
+    let both = all.iter().find(|u| u.text == "asked by both").unwrap();
+    assert!(both.count >= 1);
+    // Erasing again changes nothing more.
+    store.erase(&a).await.unwrap();
+    let again = store.unanswered(10_000).await.unwrap();
+    assert_eq!(
+        again
+            .iter()
+            .find(|u| u.text == "asked by both")
+            .map(|u| u.count),
+        Some(both.count)
     );
 }
 
@@ -416,6 +486,8 @@ contract!(
     erase_removes_a_readers_session_and_replies_and_nobody_elses,
     concurrent_updates_of_one_reader_are_never_lost,
     unanswered_questions_are_counted_grouped_and_capped,
+    one_reader_counts_once_per_question_and_for_a_share_only,
+    erasing_a_reader_takes_their_questions_off_the_unanswered_list,
 );
 
 // ---------------------------------------------------------------------------

@@ -44,7 +44,16 @@ async fn changed_files_are_served_and_a_broken_one_keeps_the_last_good_version()
     let (d, i) = (data.display().to_string(), intents.display().to_string());
     let server = ServeProcess::start(
         env!("CARGO_BIN_EXE_tidings"),
-        &["--watch", "--data", &d, "--intents", &i],
+        // One reader polls for each reload, faster than a reader's rate.
+        &[
+            "--watch",
+            "--data",
+            &d,
+            "--intents",
+            &i,
+            "--reader-rate",
+            "0",
+        ],
         &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
     );
     let client = reqwest::Client::new();

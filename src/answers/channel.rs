@@ -240,6 +240,90 @@ fn parse(file: &str, text: &str, problems: &mut Vec<CatalogProblem>) -> BTreeMap
     out
 }
 
+/// Marks where emphasis opens in a reply being rendered for Markdown,
+/// before escaping: private-use characters no data or wording holds (they
+/// are removed from values first), turned into `**` by [`markdown`].
+pub const EMPHASIS_OPEN: char = '\u{E000}';
+/// Marks where emphasis closes; see [`EMPHASIS_OPEN`].
+pub const EMPHASIS_CLOSE: char = '\u{E001}';
+
+/// A reply's text as CommonMark that shows exactly that text: every
+/// character that could open markup (links, images, raw HTML and
+/// autolinks, entities, emphasis, code, and GFM strikethrough and tables)
+/// is backslash-escaped (an image's `!` needs no escape once its `[` has
+/// one; CommonMark 0.31, §2.4 "Backslash escapes": any
+/// ASCII punctuation may be escaped), and so is what would start a block at
+/// the start of a line (headings, quotes, list items). The emphasis marks
+/// become `**`. Names from the data therefore reach a chat client as text,
+/// never as a live link or tag.
+pub fn markdown(text: &str) -> String {
+    let mut out = String::with_capacity(text.len() + 8);
+    let mut line_start = true;
+    let chars: Vec<char> = text.chars().collect();
+    for (i, &c) in chars.iter().enumerate() {
+        match c {
+            EMPHASIS_OPEN | EMPHASIS_CLOSE => out.push_str("**"),
+            // As in plain text: no controls, no bidirectional overrides.
+            _ if hidden_control(c) => {}
+            '\\' | '`' | '*' | '_' | '[' | ']' | '<' | '>' | '&' | '~' | '|' => {
+                out.push('\\');
+                out.push(c);
+            }
+            '#' | '+' | '-' | '=' if line_start => {
+                out.push('\\');
+                out.push(c);
+            }
+            // "1." or "1)" opening a line would start an ordered list.
+            '.' | ')' if line_start_digits(&chars, i) => {
+                out.push('\\');
+                out.push(c);
+            }
+            _ => out.push(c),
+        }
+        if c == '\n' {
+            line_start = true;
+        } else if !(c == ' ' || (line_start && c.is_ascii_digit())) {
+            line_start = false;
+        }
+    }
+    out
+}
+
+/// Whether `chars[..i]` is only spaces and digits since the line began.
+fn line_start_digits(chars: &[char], i: usize) -> bool {
+    let mut j = i;
+    let mut digits = 0;
+    while j > 0 && chars[j - 1].is_ascii_digit() {
+        j -= 1;
+        digits += 1;
+    }
+    while j > 0 && chars[j - 1] == ' ' {
+        j -= 1;
+    }
+    digits > 0 && (j == 0 || chars[j - 1] == '\n')
+}
+
+/// Text for fields that clients show as plain text (`text`, quick
+/// replies): no markup is added or escaped, and characters that would
+/// change how the rest is shown are removed: control characters and the
+/// Unicode bidirectional controls (which can make a name read backwards)
+/// and the emphasis marks.
+pub fn plain_text(text: &str) -> String {
+    text.chars()
+        .filter(|&c| !hidden_control(c) && c != EMPHASIS_OPEN && c != EMPHASIS_CLOSE)
+        .collect()
+}
+
+/// Control characters (but the line break) and the Unicode bidirectional
+/// controls.
+fn hidden_control(c: char) -> bool {
+    (c.is_control() && c != '\n')
+        || matches!(
+            c,
+            '\u{202A}'..='\u{202E}' | '\u{2066}'..='\u{2069}' | '\u{200E}' | '\u{200F}' | '\u{061C}'
+        )
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -115,7 +115,7 @@ fn from_text(profile: &Profile, text: String) -> Realised {
         ssml: profile
             .ssml
             .then(|| ssml::document(&profile.language, &[xml_escape(&text)])),
-        markdown: profile.emphasis.then(|| text.clone()),
+        markdown: profile.emphasis.then(|| super::channel::markdown(&text)),
         text,
     }
 }
@@ -164,7 +164,7 @@ fn realise_fitting(
         });
         let markdown = profile.emphasis.then(|| {
             let bold = emphasised(values);
-            render_text(profile, template, &bold, freshness, c)
+            super::channel::markdown(&render_text(profile, template, &bold, freshness, c))
         });
         return Some(Realised {
             text,
@@ -299,20 +299,26 @@ fn split_sentences(text: &str) -> Vec<String> {
 /// Names and marks in bold for the emphasised copy: list items (people,
 /// teams) and values with a spoken form (marks, times, places).
 fn emphasised(values: &HashMap<String, Value>) -> HashMap<String, Value> {
+    use super::channel::{EMPHASIS_CLOSE as C, EMPHASIS_OPEN as O};
+    // Marks, not `**`: the whole text is escaped for Markdown afterwards
+    // and the marks become `**` then (channel::markdown).
+    fn wrap(t: &str) -> String {
+        format!("{O}{}{C}", t.replace([O, C], ""))
+    }
     fn bold(v: &Value) -> Value {
         match v {
             Value::List(items) => Value::List(items.iter().map(bold).collect()),
             Value::Dual { text, spoken } => Value::Dual {
-                text: format!("**{text}**"),
+                text: wrap(text),
                 spoken: spoken.clone(),
             },
             Value::Said { text, spoken, ssml } => Value::Said {
-                text: format!("**{text}**"),
+                text: wrap(text),
                 spoken: spoken.clone(),
                 ssml: ssml.clone(),
             },
-            Value::Text(t) => Value::Text(format!("**{t}**")),
-            Value::Plural(t) => Value::Plural(format!("**{t}**")),
+            Value::Text(t) => Value::Text(wrap(t)),
+            Value::Plural(t) => Value::Plural(wrap(t)),
             other => other.clone(),
         }
     }

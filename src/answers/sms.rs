@@ -292,8 +292,142 @@ pub fn plain_typography(text: &str) -> String {
     out
 }
 
+/// `text` made to fit one segment, whatever it holds: the fit is measured
+/// on this final text, and shortening goes on until it fits. In order:
+///
+/// 1. as it is, with plain typography;
+/// 2. letters outside the GSM 7-bit tables written without their marks
+///    ("Renée" keeps its é, which the alphabet has; "Zoë" becomes "Zoe" and
+///    "Łukasz" "Lukasz"),
+///    and any other character outside them as `?`, so the reply is sent in
+///    GSM 7-bit with its 160 septets instead of UCS-2 with 70 units;
+/// 3. trailing sentences dropped, keeping the first;
+/// 4. trailing words dropped and "..." put in their place, never cutting a
+///    word or a number.
+pub fn fit_one_segment(text: &str) -> String {
+    let plain = plain_typography(text);
+    if measure(&plain).fits_one_segment() {
+        return plain;
+    }
+    let gsm = transliterate(&plain);
+    if measure(&gsm).fits_one_segment() {
+        return gsm;
+    }
+    // Sentences end at ". ", "? " or "! ".
+    let mut ends: Vec<usize> = gsm
+        .match_indices(['.', '?', '!'])
+        .map(|(i, _)| i + 1)
+        .filter(|&i| gsm[i..].starts_with(' '))
+        .collect();
+    ends.reverse();
+    for end in ends {
+        let t = &gsm[..end];
+        if measure(t).fits_one_segment() {
+            return t.to_string();
+        }
+    }
+    let words: Vec<&str> = gsm.split(' ').collect();
+    for n in (1..words.len()).rev() {
+        let t = format!(
+            "{}...",
+            words[..n].join(" ").trim_end_matches([',', ';', ':'])
+        );
+        if measure(&t).fits_one_segment() {
+            return t;
+        }
+    }
+    // One word longer than a segment: only a made-up name could be.
+    gsm.chars()
+        .scan(0usize, |units, c| {
+            *units += septets(c).unwrap_or(1);
+            (*units <= GSM7_LIMIT - 3).then_some(c)
+        })
+        .collect::<String>()
+        + "..."
+}
+
+/// Characters outside the GSM 7-bit tables replaced: a letter by itself
+/// without its marks when that is in the tables, anything else by `?`.
+fn transliterate(text: &str) -> String {
+    use unicode_normalization::char::is_combining_mark;
+    use unicode_normalization::UnicodeNormalization;
+    let mut out = String::with_capacity(text.len());
+    for c in text.chars() {
+        if septets(c).is_some() {
+            out.push(c);
+            continue;
+        }
+        let bare: String = std::iter::once(c)
+            .nfd()
+            .filter(|m| !is_combining_mark(*m))
+            .collect();
+        let bare = match c {
+            'ł' => "l".to_string(),
+            'Ł' => "L".to_string(),
+            'đ' => "d".to_string(),
+            'Đ' => "D".to_string(),
+            'ı' => "i".to_string(),
+            'œ' => "oe".to_string(),
+            'Œ' => "OE".to_string(),
+            'þ' => "th".to_string(),
+            'Þ' => "Th".to_string(),
+            _ => bare,
+        };
+        if !bare.is_empty() && bare.chars().all(|b| septets(b).is_some()) {
+            out.push_str(&bare);
+        } else {
+            out.push('?');
+        }
+    }
+    out
+}
+
 #[cfg(test)]
 mod tests {
+    use proptest::prelude::*;
+
+    proptest! {
+        /// Whatever the text, the result fits one segment
+        /// (3GPP TS 23.038 alphabet, TS 23.040 limits).
+        #[test]
+        fn any_text_is_made_to_fit_one_segment(text in "\\PC{0,400}") {
+            let fitted = fit_one_segment(&text);
+            prop_assert!(measure(&fitted).fits_one_segment(), "{fitted:?}");
+        }
+
+        #[test]
+        fn a_text_that_fits_is_kept(text in "[A-Za-z0-9 .,]{0,160}") {
+            prop_assert_eq!(fit_one_segment(&text), text);
+        }
+    }
+
+    #[test]
+    fn a_name_outside_the_alphabet_is_transliterated_before_anything_is_dropped() {
+        // ë and ó are not in the default alphabet, é is (3GPP TS 23.038
+        // §6.2.1).
+        assert!(in_default_alphabet('é') && !in_default_alphabet('ë'));
+        let text = "Łukasz Wróblewski (Kalvenmark) won the men's 100 m final, with Zoë Quillon second and Bandan Zorvren third.";
+        assert_eq!(measure(text).encoding, Encoding::Ucs2);
+        let fitted = fit_one_segment(text);
+        assert_eq!(
+            fitted,
+            "Lukasz Wroblewski (Kalvenmark) won the men's 100 m final, with Zoe Quillon second and Bandan Zorvren third."
+        );
+        assert_eq!(measure(&fitted).encoding, Encoding::Gsm7);
+    }
+
+    #[test]
+    fn a_long_text_loses_whole_sentences_then_whole_words() {
+        let long = format!("{}. {}", "a".repeat(100), "b ".repeat(60));
+        assert_eq!(fit_one_segment(&long), format!("{}.", "a".repeat(100)));
+        let words = "word ".repeat(50);
+        let fitted = fit_one_segment(&words);
+        assert!(
+            fitted.ends_with("word...") && measure(&fitted).fits_one_segment(),
+            "{fitted}"
+        );
+    }
+
     use super::*;
     use std::collections::HashMap;
 

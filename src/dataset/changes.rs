@@ -75,6 +75,53 @@ pub struct Records {
     pub contests: Vec<Contest>,
 }
 
+/// Whether replacing `current` by `new` removes more than `share` (0 to 1)
+/// of the sports, groups, competitors or contests: a whole-dataset
+/// replacement that drops most records is more likely a broken export than
+/// a real change. Each kind over the share is one problem, naming its file.
+pub fn removes_too_much(current: &Records, new: &Records, share: f64) -> Vec<DataProblem> {
+    fn removed<T>(old: &[T], new: &[T], id: impl Fn(&T) -> &str) -> (usize, usize) {
+        let kept: std::collections::HashSet<&str> = new.iter().map(&id).collect();
+        let gone = old.iter().filter(|r| !kept.contains(id(r))).count();
+        (gone, old.len())
+    }
+    let kinds = [
+        (
+            "sports.json",
+            "sports",
+            removed(&current.sports, &new.sports, |r| &r.id),
+        ),
+        (
+            "groups.json",
+            "groups",
+            removed(&current.groups, &new.groups, |r| &r.id),
+        ),
+        (
+            "competitors.json",
+            "competitors",
+            removed(&current.competitors, &new.competitors, |r| &r.id),
+        ),
+        (
+            "contests.json",
+            "contests",
+            removed(&current.contests, &new.contests, |r| &r.id),
+        ),
+    ];
+    kinds
+        .into_iter()
+        .filter(|(_, _, (gone, of))| *of > 0 && (*gone as f64) > share * (*of as f64))
+        .map(|(file, what, (gone, of))| DataProblem {
+            file: file.into(),
+            record: String::new(),
+            field: "id".into(),
+            message: format!(
+                "the replacement removes {gone} of {of} {what}, more than {:.0}%; send it with ?force=true if that is meant",
+                share * 100.0
+            ),
+        })
+        .collect()
+}
+
 impl Records {
     /// The records of a loaded dataset.
     pub fn of(data: &Dataset) -> Records {

@@ -220,6 +220,8 @@ pub fn build(
         }
     }
 
+    check_alias_clashes(&groups, &competitors, &mut p);
+
     let mut facts = Vec::with_capacity(contests.len());
     for c in &contests {
         facts.push(check_contest(
@@ -306,6 +308,53 @@ fn contest_name(
         out.push_str(&c.phase);
     }
     out
+}
+
+/// A name that means a group must not also mean a person, and the other
+/// way round: a competitor's alias equal to a delegation's name (or code or
+/// alias) would send questions about the delegation to the person. Names
+/// are compared in their matching form (`understand::normalize`).
+fn check_alias_clashes(groups: &[Group], competitors: &[Competitor], p: &mut Problems) {
+    use crate::understand::normalize::normalize;
+    let mut group_names: HashMap<String, &str> = HashMap::new();
+    for g in groups {
+        for n in std::iter::once(&g.name)
+            .chain(&g.aliases)
+            .chain(g.code.as_ref())
+        {
+            group_names.entry(normalize(n)).or_insert(&g.id);
+        }
+    }
+    let mut people: HashMap<String, &str> = HashMap::new();
+    for c in competitors {
+        people
+            .entry(normalize(&format!("{} {}", c.given, c.family)))
+            .or_insert(&c.id);
+        for a in &c.aliases {
+            if let Some(g) = group_names.get(&normalize(a)) {
+                p.add(
+                    "competitors.json",
+                    &c.id,
+                    "aliases",
+                    format!(
+                        "alias {a:?} is also a name of group {g:?}: a name must mean one thing"
+                    ),
+                );
+            }
+        }
+    }
+    for g in groups {
+        for a in &g.aliases {
+            if let Some(c) = people.get(&normalize(a)) {
+                p.add(
+                    "groups.json",
+                    &g.id,
+                    "aliases",
+                    format!("alias {a:?} is also the name of competitor {c:?}: a name must mean one thing"),
+                );
+            }
+        }
+    }
 }
 
 #[allow(clippy::too_many_arguments)]

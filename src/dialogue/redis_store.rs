@@ -110,7 +110,7 @@ return {'stored'}
 /// existed and were deleted (the index is bookkeeping and not counted, as
 /// the memory store counts records, not keys).
 const ERASE_LUA: &str = r#"
-local removed = 0
+local removed = redis.call('DEL', KEYS[3])
 for _, key in ipairs(redis.call('SMEMBERS', KEYS[2])) do
   removed = removed + redis.call('DEL', key)
 end
@@ -207,6 +207,8 @@ pub struct RedisStore {
     save_script: Script,
     erase_script: Script,
     unanswered_script: Script,
+    noted_script: Script,
+    unnote_script: Script,
     // An atomic counter, not a lock: it is only ever added to and read, for
     // the round-trips-per-turn figure in `benches/sessions.rs`.
     round_trips: std::sync::atomic::AtomicU64,
@@ -243,6 +245,8 @@ impl RedisStore {
             save_script: Script::new(SAVE_LUA),
             erase_script: Script::new(ERASE_LUA),
             unanswered_script: Script::new(UNANSWERED_LUA),
+            noted_script: Script::new(NOTED_LUA),
+            unnote_script: Script::new(UNNOTE_LUA),
             round_trips: std::sync::atomic::AtomicU64::new(0),
         })
     }
@@ -312,6 +316,35 @@ end
 redis.call('EXPIRE', KEYS[1], ARGV[3])
 return 0
 "#;
+
+/// Notes that a reader asked an unanswered question, on the reader's own
+/// slot: 1 if they had not been counted for it (and are under their
+/// share), else 0. KEYS: the reader's set. ARGV: member, share, TTL.
+const NOTED_LUA: &str = r#"
+if redis.call('SISMEMBER', KEYS[1], ARGV[1]) == 1 then return 0 end
+if redis.call('SCARD', KEYS[1]) >= tonumber(ARGV[2]) then return 0 end
+redis.call('SADD', KEYS[1], ARGV[1])
+redis.call('EXPIRE', KEYS[1], ARGV[3])
+return 1
+"#;
+
+/// Takes an erased reader's questions off the unanswered list: one reader
+/// less for each, and a question no reader is left for goes. KEYS: the
+/// sorted set. ARGV: the members.
+const UNNOTE_LUA: &str = r#"
+for _, m in ipairs(ARGV) do
+  if tonumber(redis.call('ZINCRBY', KEYS[1], -1, m)) <= 0 then
+    redis.call('ZREM', KEYS[1], m)
+  end
+end
+return 0
+"#;
+
+/// The set of a reader's questions counted on the unanswered list (kept as
+/// long as the list), so an erasure can take them off.
+fn noted_key(prefix: &str, reader: &str) -> String {
+    format!("{prefix}{{{reader}}}:u")
+}
 
 /// The sorted set of unanswered questions: member `kind\ttext`, score the
 /// times asked. Not a reader's key: it holds no reader id.
@@ -481,10 +514,37 @@ impl SessionStore for RedisStore {
 
     fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>> {
         Box::pin(async move {
+            // The list lives on another slot than the reader's keys, so it
+            // is a call of its own, before the reader's set is deleted: a
+            // failure here leaves the set for the erasure to be retried.
+            let noted = noted_key(&self.prefix, reader);
+            let members: Vec<String> = self
+                .call("erase: read unanswered", |mut con| {
+                    let noted = noted.clone();
+                    async move {
+                        redis::cmd("SMEMBERS")
+                            .arg(noted)
+                            .query_async(&mut con)
+                            .await
+                    }
+                })
+                .await?;
+            if !members.is_empty() {
+                let mut unnote = self.unnote_script.prepare_invoke();
+                unnote.key(unanswered_key(&self.prefix));
+                for m in &members {
+                    unnote.arg(m);
+                }
+                self.call("erase: unanswered", |mut con| async move {
+                    unnote.invoke_async::<()>(&mut con).await
+                })
+                .await?;
+            }
             let mut invocation = self.erase_script.prepare_invoke();
             invocation
                 .key(session_key(&self.prefix, reader))
-                .key(index_key(&self.prefix, reader));
+                .key(index_key(&self.prefix, reader))
+                .key(noted);
             self.call("erase", |mut con| async move {
                 invocation.invoke_async(&mut con).await
             })
@@ -494,14 +554,32 @@ impl SessionStore for RedisStore {
 
     fn note_unanswered<'a>(
         &'a self,
+        reader: &'a str,
         text: &'a str,
         kind: &'a str,
     ) -> BoxFuture<'a, Result<(), StoreError>> {
         Box::pin(async move {
+            let member = format!("{kind}\t{text}");
+            // Two calls, on two slots: first the reader's own set, so one
+            // reader is counted once per question and for a share only.
+            let mut noted = self.noted_script.prepare_invoke();
+            noted
+                .key(noted_key(&self.prefix, reader))
+                .arg(&member)
+                .arg(super::store::UNANSWERED_PER_READER)
+                .arg(UNANSWERED_TTL_SECS);
+            let new: i64 = self
+                .call("note unanswered: reader", |mut con| async move {
+                    noted.invoke_async(&mut con).await
+                })
+                .await?;
+            if new == 0 {
+                return Ok(());
+            }
             let mut invocation = self.unanswered_script.prepare_invoke();
             invocation
                 .key(unanswered_key(&self.prefix))
-                .arg(format!("{kind}\t{text}"))
+                .arg(member)
                 .arg(UNANSWERED_CAP)
                 .arg(UNANSWERED_TTL_SECS);
             self.call("note unanswered", |mut con| async move {

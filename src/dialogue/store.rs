@@ -16,7 +16,11 @@
 //!   is there already (set-if-absent), so a retried message gets the first
 //!   reply back;
 //! - sessions expire after an idle TTL, remembered replies after theirs;
-//! - [`SessionStore::erase`] removes everything kept for a reader.
+//! - [`SessionStore::erase`] removes everything kept for a reader,
+//!   including their share of the unanswered list;
+//! - the unanswered list counts readers, not messages: one reader asking
+//!   the same thing twice counts once, and one reader adds at most
+//!   [`UNANSWERED_PER_READER`] questions, so one reader cannot fill it.
 
 use std::collections::HashMap;
 use std::future::Future;
@@ -77,8 +81,8 @@ pub enum Saved {
     Answered(String),
 }
 
-/// A question readers asked that got no answer, with how often it was
-/// asked. No reader is named: only the normalised text is kept.
+/// A question readers asked that got no answer, with how many readers
+/// asked it. No reader is named: only the masked, normalised text is kept.
 #[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
 pub struct Unanswered {
     /// The question, normalised (case, accents and punctuation folded), so
@@ -93,6 +97,10 @@ pub struct Unanswered {
 /// At most this many distinct unanswered questions are kept; the least
 /// asked go first.
 pub const UNANSWERED_CAP: usize = 1000;
+
+/// At most this many questions of one reader are counted on the list;
+/// past it their unanswered questions are not noted.
+pub const UNANSWERED_PER_READER: usize = 20;
 
 /// Session storage keyed by an opaque reader key (already hashed).
 pub trait SessionStore: Send + Sync + 'static {
@@ -116,13 +124,17 @@ pub trait SessionStore: Send + Sync + 'static {
         reply: Option<KeepReply<'a>>,
     ) -> BoxFuture<'a, Result<Saved, StoreError>>;
 
-    /// Removes everything kept for the reader: session and remembered
-    /// replies. Returns how many records were removed.
+    /// Removes everything kept for the reader: session, remembered replies
+    /// and their counts on the unanswered list. Returns how many records
+    /// were removed.
     fn erase<'a>(&'a self, reader: &'a str) -> BoxFuture<'a, Result<u64, StoreError>>;
 
-    /// Counts one more unanswered `text` of `kind`.
+    /// Counts `reader` as one more reader who asked `text` (of `kind`) and
+    /// got no answer, unless they were counted for it already or have
+    /// [`UNANSWERED_PER_READER`] questions counted.
     fn note_unanswered<'a>(
         &'a self,
+        reader: &'a str,
         text: &'a str,
         kind: &'a str,
     ) -> BoxFuture<'a, Result<(), StoreError>>;
@@ -157,8 +169,10 @@ pub struct MemoryStore {
 
 #[derive(Debug, Default)]
 struct Maps {
-    /// (kind, normalised text) → times asked.
+    /// (kind, normalised text) → readers who asked.
     unanswered: HashMap<(String, String), u64>,
+    /// reader → the questions they are counted for, for erasure.
+    noted: HashMap<String, std::collections::HashSet<(String, String)>>,
     sessions: HashMap<String, Kept>,
     /// (reader, message) → reply.
     replies: HashMap<(String, String), (String, Instant)>,
@@ -278,17 +292,35 @@ impl SessionStore for MemoryStore {
             let before = maps.replies.len();
             maps.replies.retain(|(r, _), _| r != reader);
             removed += (before - maps.replies.len()) as u64;
+            if let Some(noted) = maps.noted.remove(reader) {
+                removed += 1;
+                for k in noted {
+                    if let Some(c) = maps.unanswered.get_mut(&k) {
+                        *c = c.saturating_sub(1);
+                        if *c == 0 {
+                            maps.unanswered.remove(&k);
+                        }
+                    }
+                }
+            }
             Ok(removed)
         })
     }
 
     fn note_unanswered<'a>(
         &'a self,
+        reader: &'a str,
         text: &'a str,
         kind: &'a str,
     ) -> BoxFuture<'a, Result<(), StoreError>> {
         Box::pin(async move {
             let mut maps = self.lock();
+            let key = (kind.to_string(), text.to_string());
+            let mine = maps.noted.entry(reader.to_string()).or_default();
+            if mine.contains(&key) || mine.len() >= UNANSWERED_PER_READER {
+                return Ok(());
+            }
+            mine.insert(key);
             *maps
                 .unanswered
                 .entry((kind.to_string(), text.to_string()))

@@ -80,6 +80,7 @@ pub struct Reply {
     /// Options of a clarifying question.
     pub options: Vec<OptionOut>,
     /// Facts behind the answer, for checking and for richer clients.
+    #[serde(serialize_with = "crate::engine::in_key_order")]
     pub facts: HashMap<String, Value>,
     /// The best intents and why.
     pub candidates: Vec<Scored>,
@@ -147,7 +148,7 @@ const RESET: &[&str] = &[
 pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session) {
     let before = session.pending.clone();
     let (mut reply, mut s, answered_pending) = turn_inner(ctx, session, text);
-    let asked = crate::understand::normalize::normalize(&mask_personal(text));
+    let asked = crate::understand::normalize::normalize(&crate::privacy::mask(text));
     if let Some(p) = s.pending.as_mut().filter(|p| p.asked.is_empty()) {
         // A question asked back while answering another is still about the
         // first question.
@@ -165,46 +166,6 @@ pub fn turn(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session)
         reply.unanswered.push((asked, "not_covered"));
     }
     (reply, s)
-}
-
-/// A reader's words as they may be kept on the unanswered list: e-mail
-/// addresses and long numbers (a phone number, an account) become the
-/// words "address" and "number", so
-/// the list helps editors without keeping a way to reach the reader.
-/// Short numbers ("100 m", "the 18th") stay: they are part of questions.
-pub fn mask_personal(text: &str) -> String {
-    let mut out: Vec<String> = Vec::new();
-    let mut digits_run: Vec<&str> = Vec::new();
-    let flush = |run: &mut Vec<&str>, out: &mut Vec<String>| {
-        let digits: usize = run
-            .iter()
-            .map(|t| t.chars().filter(char::is_ascii_digit).count())
-            .sum();
-        if digits >= 5 {
-            out.push("number".into());
-        } else {
-            out.extend(run.iter().map(|t| t.to_string()));
-        }
-        run.clear();
-    };
-    for token in text.split_whitespace() {
-        let numberish = token.chars().any(|c| c.is_ascii_digit())
-            && token
-                .chars()
-                .all(|c| c.is_ascii_digit() || "+-().,/".contains(c));
-        if numberish {
-            digits_run.push(token);
-            continue;
-        }
-        flush(&mut digits_run, &mut out);
-        if token.contains('@') {
-            out.push("address".into());
-        } else {
-            out.push(token.to_string());
-        }
-    }
-    flush(&mut digits_run, &mut out);
-    out.join(" ")
 }
 
 fn turn_inner(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Session, bool) {
@@ -1002,22 +963,4 @@ fn not_understood(ctx: &TurnContext, a: &Analysis) -> Reply {
         (1.0 - best).clamp(0.0, 1.0),
         a,
     )
-}
-
-#[cfg(test)]
-mod mask_tests {
-    use super::mask_personal;
-
-    #[test]
-    fn numbers_and_addresses_are_masked_but_not_short_numbers() {
-        assert_eq!(
-            mask_personal("call +44 7700 900123 or jane.doe@example.com"),
-            "call number or address"
-        );
-        assert_eq!(
-            mask_personal("who won the 100 m on the 18th?"),
-            "who won the 100 m on the 18th?"
-        );
-        assert_eq!(mask_personal("account 12345"), "account number");
-    }
 }

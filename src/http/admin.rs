@@ -38,17 +38,41 @@ impl FromRequestParts<Engine> for Admin {
                     .map(|_| &v[7..])
             })
             .unwrap_or("");
-        match engine.admin_allows(token) {
+        // Failed logins are limited per source address, checked before
+        // the token is: once a source has used up its failures, even the
+        // right token waits, so guessing runs at the limit's pace.
+        let limiter = parts
+            .extensions
+            .get::<std::sync::Arc<super::EdgeState>>()
+            .cloned();
+        let src = super::source(&parts.extensions);
+        if let (Some(edge), Some(src)) = (&limiter, &src) {
+            if let Err(wait) = edge.admin_failures.check(src, edge.rates.admin_failures) {
+                return Err(ApiError::rate_limited(
+                    "this address after failed admin logins",
+                    wait,
+                ));
+            }
+        }
+        let allowed = engine.admin_allows(token);
+        if allowed == Some(false) {
+            if let (Some(edge), Some(src)) = (&limiter, &src) {
+                let _ = edge.admin_failures.take(src, edge.rates.admin_failures);
+            }
+        }
+        match allowed {
             None => Err(ApiError {
                 status: StatusCode::FORBIDDEN,
                 code: "admin_off",
                 message: "the admin API is off: start the service with --admin-token".into(),
+                retry_after: None,
             }),
             Some(true) => Ok(Admin),
             Some(false) => Err(ApiError {
                 status: StatusCode::UNAUTHORIZED,
                 code: "unauthorized",
                 message: "send the admin token as Authorization: Bearer <token>".into(),
+                retry_after: None,
             }),
         }
     }
@@ -72,12 +96,26 @@ async fn apply_batch(
     }
 }
 
+/// `?force=true` on a dataset replacement.
+#[derive(Debug, serde::Deserialize)]
+struct Force {
+    #[serde(default)]
+    force: bool,
+}
+
 async fn replace_dataset(
     _: Admin,
     State(engine): State<Engine>,
+    force: Result<Query<Force>, axum::extract::rejection::QueryRejection>,
     AppJson(records): AppJson<Records>,
 ) -> Result<impl IntoResponse, ApiError> {
-    match engine.replace_records(records).await {
+    let Ok(Query(Force { force })) = force else {
+        return Err(ApiError::invalid(
+            "bad_force",
+            "?force= must be true or false",
+        ));
+    };
+    match engine.replace_records_checked(records, force).await {
         Ok(version) => Ok(Json(json!({ "dataset_version": version }))),
         Err(e) => Err(change_error(
             "invalid_dataset",
@@ -108,16 +146,19 @@ fn change_error(code: &'static str, what: &str, e: ChangeError) -> ApiError {
             message: format!(
                 "{what}: it could not be shared with the other replicas ({e}); nothing changed"
             ),
+            retry_after: None,
         },
         ChangeError::Unknown(_) => ApiError {
             status: StatusCode::SERVICE_UNAVAILABLE,
             code: "outcome_unknown",
             message: format!("{what}: {e}"),
+            retry_after: None,
         },
         ChangeError::Busy => ApiError {
             status: StatusCode::SERVICE_UNAVAILABLE,
             code: "busy",
             message: format!("{what}: {}", ChangeError::Busy),
+            retry_after: None,
         },
     }
 }

@@ -13,15 +13,32 @@ pub struct ApiError {
     pub status: StatusCode,
     pub code: &'static str,
     pub message: String,
+    /// When to try again, sent as `retry-after` (whole seconds, at least
+    /// one): with 429s and with 503s that will pass.
+    pub retry_after: Option<std::time::Duration>,
 }
 
 impl ApiError {
+    /// A 429 for a client over one of its rate limits (`what`: "this
+    /// source", "this reader", "this client key").
+    pub fn rate_limited(what: &str, retry_after: std::time::Duration) -> ApiError {
+        ApiError {
+            status: StatusCode::TOO_MANY_REQUESTS,
+            code: "rate_limited",
+            message: format!(
+                "too many requests from {what}; try again after the retry-after header's seconds"
+            ),
+            retry_after: Some(retry_after),
+        }
+    }
+
     /// A 422 for a request that parsed but cannot be used.
     pub fn invalid(code: &'static str, message: impl Into<String>) -> ApiError {
         ApiError {
             status: StatusCode::UNPROCESSABLE_ENTITY,
             code,
             message: message.into(),
+            retry_after: None,
         }
     }
 }
@@ -31,11 +48,19 @@ impl IntoResponse for ApiError {
         if self.status.is_server_error() {
             tracing::error!(code = self.code, message = %self.message, "request failed");
         }
-        (
+        let mut response = (
             self.status,
             Json(json!({ "error": { "code": self.code, "message": self.message } })),
         )
-            .into_response()
+            .into_response();
+        if let Some(after) = self.retry_after {
+            let secs = after.as_secs() + u64::from(after.subsec_nanos() > 0);
+            response.headers_mut().insert(
+                axum::http::header::RETRY_AFTER,
+                axum::http::HeaderValue::from(secs.max(1)),
+            );
+        }
+        response
     }
 }
 
@@ -59,6 +84,7 @@ impl From<JsonRejection> for ApiError {
             status,
             code,
             message,
+            retry_after: None,
         }
     }
 }
@@ -69,6 +95,7 @@ impl From<axum::extract::rejection::PathRejection> for ApiError {
             status: StatusCode::BAD_REQUEST,
             code: "bad_path",
             message: lowercase_first(&r.body_text()),
+            retry_after: None,
         }
     }
 }
@@ -82,11 +109,13 @@ impl From<crate::engine::EngineError> for ApiError {
                 status: StatusCode::SERVICE_UNAVAILABLE,
                 code: "store_unavailable",
                 message: "the session store cannot be reached; try again shortly".into(),
+                retry_after: None,
             },
             EngineError::Busy => ApiError {
                 status: StatusCode::SERVICE_UNAVAILABLE,
                 code: "busy",
                 message: e.to_string(),
+                retry_after: None,
             },
         }
     }

@@ -9,24 +9,30 @@
 mod admin;
 mod desk;
 mod error;
+pub mod limit;
+mod serve;
 
 use std::future::Future;
+use std::net::SocketAddr;
+use std::sync::Arc;
 use std::time::Duration;
 
 use axum::extract::{
-    DefaultBodyLimit, FromRequest, FromRequestParts, MatchedPath, Path, Request, State,
+    ConnectInfo, DefaultBodyLimit, FromRequest, FromRequestParts, MatchedPath, Path, Request, State,
 };
 use axum::http::StatusCode;
-use axum::response::IntoResponse;
+use axum::middleware::Next;
+use axum::response::{IntoResponse, Response};
 use axum::routing::{delete, get, post};
-use axum::{Json, Router};
+use axum::{Extension, Json, Router};
 use serde::Deserialize;
 use serde_json::json;
 use tokio::net::TcpListener;
-use tower_http::timeout::TimeoutLayer;
 use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
+pub use limit::{Rate, Rates};
+pub use serve::Limits;
 
 use crate::engine::{Engine, Incoming};
 
@@ -34,6 +40,139 @@ use crate::engine::{Engine, Incoming};
 pub const MAX_BODY: usize = 16 * 1024;
 /// Longest message text accepted, in characters.
 pub const MAX_TEXT: usize = 500;
+
+/// How the edge of the service is set up: limits on connections and on
+/// request rates.
+#[derive(Debug, Clone, Default)]
+pub struct Edge {
+    /// Timeouts, the connection cap and the drain on shutdown.
+    pub connections: Limits,
+    /// Rate limits.
+    pub rates: Rates,
+}
+
+impl Edge {
+    /// The default connection limits and no rate limits: for tools and
+    /// tests that send many messages as one reader on purpose.
+    pub fn without_rate_limits() -> Edge {
+        Edge {
+            connections: Limits::default(),
+            rates: Rates {
+                per_source: None,
+                per_reader: None,
+                per_key: None,
+                ..Rates::default()
+            },
+        }
+    }
+}
+
+/// What the edge keeps while serving: its settings and the rate limits'
+/// buckets. Shared by every request through an `Arc` in the request
+/// extensions.
+#[derive(Debug)]
+pub struct EdgeState {
+    rates: Rates,
+    sources: limit::Buckets,
+    readers: limit::Buckets,
+    admin_failures: limit::Buckets,
+    /// One log line per interval when clients are being limited.
+    limited_log: crate::log_gate::SharedLogGate,
+}
+
+impl EdgeState {
+    fn new(edge: &Edge) -> EdgeState {
+        EdgeState {
+            rates: edge.rates.clone(),
+            sources: limit::Buckets::default(),
+            readers: limit::Buckets::default(),
+            admin_failures: limit::Buckets::default(),
+            limited_log: crate::log_gate::SharedLogGate::new(Duration::from_secs(10)),
+        }
+    }
+
+    /// Takes a token from `buckets` for `key`, or the 429 to answer.
+    fn take(
+        &self,
+        buckets: &limit::Buckets,
+        key: &str,
+        rate: Option<Rate>,
+        what: &'static str,
+    ) -> Result<(), ApiError> {
+        let Some(rate) = rate else { return Ok(()) };
+        buckets.take(key, rate).map_err(|wait| {
+            if let Some(held) = self.limited_log.pass() {
+                tracing::info!(limit = what, held_back = held, "rate limit reached");
+            }
+            ApiError::rate_limited(what, wait)
+        })
+    }
+}
+
+/// The source address of a request, when it came over a socket.
+fn source(extensions: &axum::http::Extensions) -> Option<String> {
+    extensions
+        .get::<ConnectInfo<SocketAddr>>()
+        .map(|c| c.0.ip().to_string())
+}
+
+/// The per-source rate limit, before anything else is read. The health
+/// checks are left out: a load balancer polls them from one address.
+async fn limit_source(State(edge): State<Arc<EdgeState>>, req: Request, next: Next) -> Response {
+    let path = req.uri().path();
+    if path != "/healthz" && path != "/readyz" {
+        if let Some(src) = source(req.extensions()) {
+            if let Err(e) = edge.take(&edge.sources, &src, edge.rates.per_source, "this address") {
+                return e.into_response();
+            }
+        }
+    }
+    next.run(req).await
+}
+
+/// How long one request may take.
+pub const REQUEST_TIMEOUT: Duration = Duration::from_secs(10);
+
+/// Largest request head (request line and headers) accepted; larger is a
+/// 431 in the service's error shape.
+pub const MAX_HEAD: usize = 16 * 1024;
+
+/// The per-request time limit, answered in the service's error shape (a
+/// stuck request cannot hold a connection or shutdown for ever), and the
+/// head size limit, checked first.
+async fn time_limit(req: Request, next: Next) -> Response {
+    let head: usize = req.uri().to_string().len()
+        + req
+            .headers()
+            .iter()
+            .map(|(k, v)| k.as_str().len() + v.len() + 4)
+            .sum::<usize>();
+    if head > MAX_HEAD {
+        return ApiError {
+            status: StatusCode::REQUEST_HEADER_FIELDS_TOO_LARGE,
+            code: "headers_too_large",
+            message: format!(
+                "the request line and headers must be at most {} KiB",
+                MAX_HEAD / 1024
+            ),
+            retry_after: None,
+        }
+        .into_response();
+    }
+    match tokio::time::timeout(REQUEST_TIMEOUT, next.run(req)).await {
+        Ok(r) => r,
+        Err(_) => ApiError {
+            status: StatusCode::SERVICE_UNAVAILABLE,
+            code: "timeout",
+            message: format!(
+                "the request took longer than {} seconds; try again",
+                REQUEST_TIMEOUT.as_secs()
+            ),
+            retry_after: Some(Duration::from_secs(1)),
+        }
+        .into_response(),
+    }
+}
 
 /// JSON body extractor that answers bad JSON in the service's own format.
 #[derive(FromRequest)]
@@ -62,6 +201,7 @@ pub struct MessageIn {
 
 async fn messages(
     State(engine): State<Engine>,
+    Extension(edge): Extension<Arc<EdgeState>>,
     AppJson(m): AppJson<MessageIn>,
 ) -> Result<impl IntoResponse, ApiError> {
     if m.user.trim().is_empty() {
@@ -92,6 +232,9 @@ async fn messages(
         }
     }
     let channel = m.channel.as_deref().unwrap_or("chat");
+    // By the hashed key, so the buckets hold no reader id.
+    let reader = engine.user_key(channel, &m.user);
+    edge.take(&edge.readers, &reader, edge.rates.per_reader, "this reader")?;
     let answer = engine
         .handle_message(Incoming {
             user: &m.user,
@@ -152,6 +295,7 @@ async fn not_found() -> ApiError {
         status: StatusCode::NOT_FOUND,
         code: "not_found",
         message: "no such endpoint".into(),
+        retry_after: None,
     }
 }
 
@@ -160,11 +304,19 @@ async fn wrong_method() -> ApiError {
         status: StatusCode::METHOD_NOT_ALLOWED,
         code: "method_not_allowed",
         message: "this endpoint does not take that method; see the allow header".into(),
+        retry_after: None,
     }
 }
 
-/// The application's routes and layers.
+/// The application's routes and layers, without rate limits (see
+/// [`Edge::without_rate_limits`]).
 pub fn app(engine: Engine) -> Router {
+    app_with(engine, &Edge::without_rate_limits())
+}
+
+/// The application's routes and layers, limited as `edge` says.
+pub fn app_with(engine: Engine, edge: &Edge) -> Router {
+    let state = Arc::new(EdgeState::new(edge));
     Router::new()
         .route("/v1/messages", post(messages))
         .route("/v1/users/{channel}/{user}", delete(erase_user))
@@ -176,13 +328,17 @@ pub fn app(engine: Engine) -> Router {
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)
         // Layers run outside-in: the trace span wraps everything, then the
-        // timeout (so a stuck request cannot hold shutdown forever), then the
-        // body limit that the JSON extractor reports as 413.
+        // timeout (so a stuck request cannot hold shutdown forever), then
+        // the edge's state for handlers, the per-source rate limit (before
+        // any body is read), then the body limit that the JSON extractor
+        // reports as 413.
         .layer(DefaultBodyLimit::max(MAX_BODY))
-        .layer(TimeoutLayer::with_status_code(
-            StatusCode::SERVICE_UNAVAILABLE,
-            Duration::from_secs(10),
+        .layer(axum::middleware::from_fn_with_state(
+            Arc::clone(&state),
+            limit_source,
         ))
+        .layer(Extension(state))
+        .layer(axum::middleware::from_fn(time_limit))
         .layer(TraceLayer::new_for_http().make_span_with(|req: &Request| {
             let route = req
                 .extensions()
@@ -193,13 +349,25 @@ pub fn app(engine: Engine) -> Router {
         }))
 }
 
-/// Serves the API on `listener` until `shutdown` completes.
+/// Serves the API on `listener` with the default connection limits and no
+/// rate limits until `shutdown` completes.
 pub async fn run(
     listener: TcpListener,
     engine: Engine,
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
-    axum::serve(listener, app(engine))
-        .with_graceful_shutdown(shutdown)
-        .await
+    run_with(listener, engine, Edge::without_rate_limits(), shutdown).await
+}
+
+/// Serves the API on `listener` as `edge` says until `shutdown`
+/// completes, then drains open connections for at most
+/// `edge.connections.drain_timeout`.
+pub async fn run_with(
+    listener: TcpListener,
+    engine: Engine,
+    edge: Edge,
+    shutdown: impl Future<Output = ()> + Send + 'static,
+) -> std::io::Result<()> {
+    let router = app_with(engine, &edge);
+    serve::serve(listener, router, edge.connections, shutdown).await
 }

@@ -51,6 +51,25 @@ impl Server {
         }
     }
 
+    /// A server with its own edge settings (rate limits, connections).
+    pub async fn start_with(engine: Engine, edge: tidings::http::Edge) -> Server {
+        let listener = tokio::net::TcpListener::bind("127.0.0.1:0").await.unwrap();
+        let addr = listener.local_addr().unwrap();
+        let (tx, rx) = tokio::sync::oneshot::channel::<()>();
+        tokio::spawn(async move {
+            tidings::http::run_with(listener, engine, edge, async {
+                let _ = rx.await;
+            })
+            .await
+            .unwrap();
+        });
+        Server {
+            addr,
+            client: reqwest::Client::new(),
+            _shutdown: tx,
+        }
+    }
+
     pub fn url(&self, path: &str) -> String {
         format!("http://{}{path}", self.addr)
     }
