@@ -93,6 +93,10 @@ pub struct Report {
     /// Answers whose focus differs from the labelled one (included in
     /// `wrong_answers`).
     pub wrong_focus: usize,
+    /// Confident answers whose reply lacks a labelled fact or holds a
+    /// forbidden one: a wrong or missing fact for the reader, whatever
+    /// intent gave it (included in `wrong_answers`).
+    pub wrong_facts: usize,
     /// The same figures for the turns carrying each tag (a conversation's
     /// tags count for each of its turns).
     pub by_tag: BTreeMap<String, TagFigures>,
@@ -208,6 +212,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
             let reply = &answer.reply;
             let mut problems = Vec::new();
             let mut fact_wrong = false;
+            let mut said_wrong = false;
             if let Some(want) = &t.intent {
                 r.intent_total += 1;
                 let got = reply.intent.clone().unwrap_or_else(|| "none".into());
@@ -263,6 +268,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                     problems.push(format!("reply lacks {s:?}"));
                     answer_ok = false;
                     fact_wrong = true;
+                    said_wrong = true;
                 }
             }
             for s in &t.never {
@@ -270,6 +276,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                     problems.push(format!("reply contains {s:?}"));
                     answer_ok = false;
                     fact_wrong = true;
+                    said_wrong = true;
                 }
             }
             let mut focus_wrong = false;
@@ -294,6 +301,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
             if wrong {
                 r.wrong_answers += 1;
                 r.wrong_focus += usize::from(focus_wrong && !fact_wrong);
+                r.wrong_facts += usize::from(said_wrong);
             }
             for tag in &tags {
                 let f = r.by_tag.entry((*tag).clone()).or_default();
@@ -416,6 +424,10 @@ pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool, by_
         println!(
             "wrong-answer rate {:.4}  ({}/{}, {} of them a different question)  target <= 0.005",
             r.wrong_answer_rate, r.wrong_answers, r.turns, r.wrong_focus
+        );
+        println!(
+            "  of which a fact missing or wrong in the reply: {}/{}",
+            r.wrong_facts, r.turns
         );
         if by_tag {
             print!("{}", tag_table(&r));

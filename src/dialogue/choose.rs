@@ -151,10 +151,13 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
             ask_later.get_or_insert(chosen);
             continue;
         }
-        // Only an intent that uses what the question names may go before
-        // asking: "who is leading?" asks which event rather than answering
-        // with the medal table.
-        if ask_later.is_some() && chosen.filled.slots.is_empty() {
+        // Only an intent that uses what the question itself names may go
+        // before asking: "who is leading?" asks which event rather than
+        // answering with the medal table, and "they" after a winner and a
+        // delegation asks which one is meant.
+        if ask_later.is_some()
+            && (chosen.filled.slots.is_empty() || (a.mentions.is_empty() && a.days.is_empty()))
+        {
             break;
         }
         return Choice::Intent(chosen);

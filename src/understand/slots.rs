@@ -395,8 +395,8 @@ pub fn odd_event_word(a: &Analysis) -> Option<usize> {
 }
 
 /// Words that read as the name of an event the data does not have: a
-/// distance no discipline has ("800 m"), or unexplained words after "the"
-/// or next to a category or round ("the shot put", "women's triathlon").
+/// distance no discipline has ("800 m"), or unexplained words next to a
+/// category, round or discipline ("women's triathlon", "100 m relay").
 /// `None` when there are none.
 pub fn unknown_event(a: &Analysis) -> Option<String> {
     let t = &a.tokens;
@@ -412,12 +412,8 @@ pub fn unknown_event(a: &Analysis) -> Option<String> {
         }
     }
     let unexplained = &a.frame.unexplained;
-    let start = odd_event_word(a).or_else(|| {
-        unexplained
-            .iter()
-            .copied()
-            .find(|&j| j > 0 && t[j - 1] == "the")
-    })?;
+    // Not any word after "the": "and the north?" is a follow-up's business.
+    let start = odd_event_word(a)?;
     let mut end = start + 1;
     while unexplained.contains(&end) {
         end += 1;
