@@ -3,7 +3,7 @@
 //! "how far behind is she?").
 
 use super::support::{
-    entry_entity, labels, margin_points, margin_value, mark_value, placed, rank_value,
+    entry_entity, labels, margin_points, margin_value, mark_value, named_entry, placed, rank_value,
     status_phrase, vote_facts, when_value,
 };
 use super::*;
@@ -96,17 +96,10 @@ fn run(input: &OpInput) -> OpOutput {
     let who = EntityRef::Competitor(pi);
     let name = data.competitors[pi].name();
     let theirs = data.contests_of(pi);
-    let (ci, ei) = match input.contest("contest") {
-        Some(ci) => match theirs.iter().find(|(c, _)| *c == ci) {
-            Some(&pair) => pair,
-            None => {
-                let f = Facts::new()
-                    .set("name", name)
-                    .set("contest_name", data.contest_name(ci));
-                return OpOutput::done("not_entered", f, vec![who, EntityRef::Contest(ci)]);
-            }
-        },
-        None => {
+    let (ci, ei) = match named_entry(input, pi) {
+        Err(not_entered) => return not_entered,
+        Ok(Some(pair)) => pair,
+        Ok(None) => {
             // Only contests with a result have a margin; a final says more
             // than a heat, so with several the finals are offered first.
             let with_result: Vec<(usize, usize)> = theirs

@@ -1,6 +1,6 @@
 //! `result`: how one competitor did in one contest.
 
-use super::support::{mark_value, status_phrase, when_value};
+use super::support::{mark_value, named_entry, status_phrase, when_value};
 use super::*;
 use crate::dataset::{EntryStatus, Status};
 
@@ -62,17 +62,10 @@ fn run(input: &OpInput) -> OpOutput {
     let who = EntityRef::Competitor(pi);
     let name = data.competitors[pi].name();
     let theirs = data.contests_of(pi);
-    let (ci, ei) = match input.contest("contest") {
-        Some(ci) => match theirs.iter().find(|(c, _)| *c == ci) {
-            Some(&pair) => pair,
-            None => {
-                let f = Facts::new()
-                    .set("name", name)
-                    .set("contest_name", data.contest_name(ci));
-                return OpOutput::done("not_entered", f, vec![who, EntityRef::Contest(ci)]);
-            }
-        },
-        None => match theirs {
+    let (ci, ei) = match named_entry(input, pi) {
+        Err(not_entered) => return not_entered,
+        Ok(Some(pair)) => pair,
+        Ok(None) => match theirs {
             [] => return OpOutput::done("no_result", Facts::new().set("name", name), vec![who]),
             [only] => *only,
             // Several contests: ask which, never pick one silently.

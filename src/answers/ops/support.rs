@@ -7,6 +7,32 @@ use crate::answers::value::{int_words, Style, Value};
 use crate::answers::words;
 use crate::dataset::{mark, Contest, Dataset, EntityRef, Entry, EntryStatus, Measure, Status};
 
+/// The competitor's entry in the contest the reader named: `Ok(None)` when
+/// no contest was named, `Err` holding the `not_entered` outcome when they
+/// are not in the one named.
+pub fn named_entry(
+    input: &super::OpInput,
+    pi: usize,
+) -> Result<Option<(usize, usize)>, super::OpOutput> {
+    let data = input.data;
+    let Some(ci) = input.contest("contest") else {
+        return Ok(None);
+    };
+    match data.contests_of(pi).iter().find(|(c, _)| *c == ci) {
+        Some(&pair) => Ok(Some(pair)),
+        None => {
+            let f = super::Facts::new()
+                .set("name", data.competitors[pi].name())
+                .set("contest_name", data.contest_name(ci));
+            Err(super::OpOutput::done(
+                "not_entered",
+                f,
+                vec![EntityRef::Competitor(pi), EntityRef::Contest(ci)],
+            ))
+        }
+    }
+}
+
 /// "Zoë Ardent (Brellmoor)" for a person, "Brellmoor" for a team.
 pub fn entry_label(data: &Dataset, e: &Entry) -> String {
     match e.competitor.as_deref().and_then(|c| data.competitor(c)) {
