@@ -32,6 +32,11 @@ const TRY_SHARE: f32 = 0.5;
 const FOCUS_FLOOR: f32 = 0.35;
 /// How many intents are tried at most.
 const TRY_MAX: usize = 6;
+/// What the frame adds to the score of an intent whose first declared
+/// focus is the question's and whose slots take every name in it.
+const FRAME_BONUS_FIRST: f32 = 0.15;
+/// The same for an intent that answers the focus but not first.
+const FRAME_BONUS: f32 = 0.08;
 /// What an unexplained content word costs in confidence.
 const UNEXPLAINED_COST: f32 = 0.85;
 
@@ -77,7 +82,8 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
             near,
         };
     }
-    let Some(best) = a.scores.first().filter(|b| b.score >= MIN_SCORE) else {
+    let ranked = rank(data, catalog, a);
+    let Some(&(best_score, _)) = ranked.first().filter(|b| b.0 >= MIN_SCORE) else {
         return Choice::NotUnderstood;
     };
     // With a stated focus, a weaker intent that answers it is worth trying
@@ -91,15 +97,11 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
     let mut focus_gap: Option<&Intent> = None;
     let mut ask_later: Option<Chosen> = None;
     let mut limit_gap: Option<(&Intent, Vec<String>)> = None;
-    for scored in a
-        .scores
+    for &(score, intent) in ranked
         .iter()
         .take(TRY_MAX)
-        .filter(|x| x.score >= floor && x.score >= best.score * TRY_SHARE)
+        .filter(|x| x.0 >= floor && x.0 >= best_score * TRY_SHARE)
     {
-        let Some(intent) = catalog.intent(&scored.intent) else {
-            continue;
-        };
         // The other reading holds when the conversation has an event to
         // read it against.
         let in_context = a
@@ -119,7 +121,7 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
         // evidence enough to ask which one.
         let focus_fits = a.frame.focus.is_some_and(|f| f != Focus::Chat);
         if matches!(filled.need, Some(Need::Missing { .. }))
-            && scored.score < MIN_SCORE_TO_ASK
+            && score < MIN_SCORE_TO_ASK
             && !focus_fits
             && a.mentions.is_empty()
             && a.days.is_empty()
@@ -137,8 +139,7 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
             continue;
         }
         let unexplained = a.frame.unexplained.len() as i32;
-        let confidence =
-            scored.score.min(1.0) * filled.certainty * UNEXPLAINED_COST.powi(unexplained);
+        let confidence = score.min(1.0) * filled.certainty * UNEXPLAINED_COST.powi(unexplained);
         let chosen = Chosen {
             intent,
             filled,
@@ -177,6 +178,58 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
             near: Some(near),
         },
         _ => Choice::NotUnderstood,
+    }
+}
+
+/// The intents in the order they are tried, with the score each is tried
+/// at. The scorer's similarity to the phrasings comes first; the frame
+/// adds to it for an intent that answers what the question asks and can
+/// take every name in it, most for the intent whose first declared focus it
+/// is. Phrasings alone miss what a reader words differently ("how many
+/// golds for Quessary so far?"), while the focus ("how many") and the kinds
+/// of names given (a delegation, an award) say which question it is.
+fn rank<'c>(data: &Dataset, catalog: &'c Catalog, a: &Analysis) -> Vec<(f32, &'c Intent)> {
+    let mut out: Vec<(f32, &Intent)> = a
+        .scores
+        .iter()
+        .filter_map(|s| {
+            let intent = catalog.intent(&s.intent)?;
+            Some((s.score + frame_bonus(data, intent, a), intent))
+        })
+        .collect();
+    // Stable: equal scores keep the scorer's order.
+    out.sort_by(|x, y| y.0.partial_cmp(&x.0).unwrap_or(std::cmp::Ordering::Equal));
+    out
+}
+
+/// What the frame adds to an intent's score: nothing unless the question
+/// states a focus the intent answers and names something, every name of
+/// which one of the intent's slots can take.
+fn frame_bonus(data: &Dataset, intent: &Intent, a: &Analysis) -> f32 {
+    let Some(f) = a
+        .frame
+        .focus
+        .filter(|f| !matches!(f, Focus::Chat | Focus::Other))
+    else {
+        return 0.0;
+    };
+    if !intent.answers_focus(f) || a.mentions.is_empty() || a.frame.unheld.is_some() {
+        return 0.0;
+    }
+    let single_award = data.awards().len() == 1;
+    let fits = a.mentions.iter().all(|m| {
+        m.candidates.iter().any(|(t, _)| {
+            (single_award && matches!(t, Target::Award(_)))
+                || intent.slots.iter().any(|d| target_fits_kind(t, d.kind))
+        })
+    });
+    if !fits {
+        return 0.0;
+    }
+    if intent.answers.first() == Some(&f) {
+        FRAME_BONUS_FIRST
+    } else {
+        FRAME_BONUS
     }
 }
 

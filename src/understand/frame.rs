@@ -384,6 +384,52 @@ pub fn is_unheld_word(w: &str) -> bool {
     UNHELD.iter().any(|(words, _)| words.contains(&w))
 }
 
+/// The thing a question asks for when nothing explains it: "what lane was
+/// she in", "which apparatus are they on", "what's the population of X",
+/// "how windy was it". Such a word names an attribute neither the data nor
+/// any intent knows, so the honest reply is that it is not held, not the
+/// answer to the rest of the question.
+pub fn asked_attribute(tokens: &[&str], onset: usize, unexplained: &[usize]) -> Option<Unheld> {
+    let t0 = at(tokens, onset);
+    let mut k = onset + 1;
+    match t0 {
+        "what" | "which" => {
+            if matches!(at(tokens, k), "is" | "was" | "are" | "were") {
+                k += 1;
+            }
+            if matches!(
+                at(tokens, k),
+                "the" | "his" | "her" | "their" | "its" | "a" | "an"
+            ) {
+                k += 1;
+            }
+        }
+        "how" => {}
+        _ => return None,
+    }
+    if !unexplained.contains(&k) {
+        return None;
+    }
+    Some(Unheld {
+        start: k,
+        end: k + 1,
+        what: format!("anything on “{}”", tokens[k]),
+    })
+}
+
+/// "winning time", "gold medal time", "her score": a mark named as such.
+fn mark_noun(tokens: &[&str]) -> bool {
+    tokens.windows(2).any(|w| {
+        matches!(
+            w[1],
+            "time" | "score" | "mark" | "distance" | "throw" | "jump"
+        ) && matches!(
+            w[0],
+            "winning" | "medal" | "gold" | "his" | "her" | "their" | "fastest" | "quickest"
+        )
+    })
+}
+
 fn at<'a>(tokens: &[&'a str], i: usize) -> &'a str {
     tokens.get(i).copied().unwrap_or("")
 }
@@ -702,15 +748,28 @@ fn focus(
         );
     }
     // How much is counted, is it over.
+    // "in" says arrived only at the end ("how many are in (yet)"); inside
+    // the question it is a limit ("how many medals in athletics").
+    let ends_in = matches!(
+        tokens
+            .iter()
+            .rev()
+            .find(|t| !matches!(**t, "yet" | "now" | "already" | "so" | "far")),
+        Some(&"in")
+    );
     if (t0 == "how"
         && matches!(t1, "much" | "many" | "far")
-        && tokens.iter().any(|t| {
-            matches!(
-                *t,
-                "counted" | "count" | "declared" | "reported" | "in" | "through" | "along" | "done"
-            )
-        })
-        && !(t1 == "many" && has("medals")))
+        && (ends_in
+            || tokens.iter().any(|t| {
+                matches!(
+                    *t,
+                    "counted" | "count" | "declared" | "reported" | "through" | "along" | "done"
+                )
+            }))
+        && !(t1 == "many"
+            && tokens
+                .iter()
+                .any(|t| matches!(*t, "medals" | "medal" | "golds"))))
         || has("progress")
         || has("status")
         // "are the results in (yet)", "is it all in": arrived, declared.
@@ -1033,6 +1092,7 @@ fn focus(
         }))
         || (t0 == "how" && matches!(t1, "fast" | "far" | "high" | "quick"))
         || has("record")
+        || (t0 != "who" && mark_noun(tokens))
         || find(tokens, 0, &["best", "time"]).is_some()
         || find(tokens, 0, &["best", "mark"]).is_some()
     {
@@ -1264,6 +1324,11 @@ mod tests {
         assert_eq!(f("what is the margin"), Some(Focus::Margin));
         assert_eq!(f("how many medals"), Some(Focus::Count));
         assert_eq!(f("how much is counted"), Some(Focus::Status));
+        assert_eq!(f("how many are in so far"), Some(Focus::Status));
+        assert_eq!(
+            f("how many bronze medals has corvanthe won in athletics"),
+            Some(Focus::Count)
+        );
         assert_eq!(f("when is the final"), Some(Focus::When));
         assert_eq!(f("what time is the final"), Some(Focus::When));
         assert_eq!(f("how long until the final"), Some(Focus::When));
@@ -1277,7 +1342,26 @@ mod tests {
         assert_eq!(f("which wards are still open"), Some(Focus::Open));
         assert_eq!(f("medal table"), Some(Focus::Table));
         assert_eq!(f("how tall is she"), Some(Focus::Other));
+        assert_eq!(f("gold medal time in the 1500"), Some(Focus::Mark));
+        assert_eq!(f("winning score in the final"), Some(Focus::Mark));
+        assert_eq!(f("who had the fastest time"), Some(Focus::Who));
         assert_eq!(f("hello"), None);
+    }
+
+    #[test]
+    fn an_attribute_nothing_explains_is_not_held() {
+        let toks = ["what", "lane", "was", "she", "in"];
+        let u = asked_attribute(&toks, 0, &[1]).expect("lane is asked for");
+        assert_eq!((u.start, u.end), (1, 2));
+        assert!(u.what.contains("lane"));
+        let toks = ["what", "is", "the", "population", "of", "x"];
+        assert_eq!(asked_attribute(&toks, 0, &[3]).map(|u| u.start), Some(3));
+        // Explained words ("time") are questions the service reads.
+        let toks = ["what", "time", "is", "the", "final"];
+        assert!(asked_attribute(&toks, 0, &[]).is_none());
+        // Not at the head of the question: only a cost in confidence.
+        let toks = ["who", "won", "the", "lane", "race"];
+        assert!(asked_attribute(&toks, 0, &[3]).is_none());
     }
 
     #[test]

@@ -207,6 +207,9 @@ impl Understanding {
     /// scenario's synonyms, spot names, correct misspelt words, find days
     /// and counts, read the frame, and score the intents.
     pub fn analyse(&self, text: &str, today: Date) -> Analysis {
+        /// Above this score a phrasing explains the question well enough
+        /// for an unknown word at its head to be only a cost in confidence.
+        const ATTRIBUTE_MAX_SCORE: f32 = 0.6;
         let normalized = normalize::normalize(text);
         let words = english::numbers(english::expand(&normalize::tokens(&normalized)));
         let words = self
@@ -320,6 +323,18 @@ impl Understanding {
         }
         let abstracted = merge_events(abstracted);
         let scores = self.classifier.score(&abstracted);
+        // An attribute nothing explains at the head of the question, when
+        // neither its wording nor a phrasing says what it asks ("what
+        // percentage is counted" is close to a phrasing about the count).
+        if frame.unheld.is_none()
+            && frame.focus.is_none()
+            && scores.first().is_none_or(|b| b.score < ATTRIBUTE_MAX_SCORE)
+        {
+            if let Some(u) = frame::asked_attribute(&toks, frame.onset, &frame.unexplained) {
+                frame.unheld = Some(u);
+                frame.focus = Some(frame::Focus::Other);
+            }
+        }
         Analysis {
             tokens: toks.iter().map(|s| s.to_string()).collect(),
             frame,
