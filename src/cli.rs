@@ -58,6 +58,10 @@ pub struct SessionOptions {
     /// process's memory).
     #[arg(long, env = "TIDINGS_REDIS_URL")]
     pub redis_url: Option<String>,
+    /// --redis-url names nodes of a Redis Cluster (one or more URLs,
+    /// separated by commas), not one server.
+    #[arg(long, env = "TIDINGS_REDIS_CLUSTER", requires = "redis_url")]
+    pub redis_cluster: bool,
     /// Prefix of every Redis key, so several deployments can share one Redis.
     #[arg(long, env = "TIDINGS_REDIS_PREFIX", default_value = "tidings:")]
     pub redis_prefix: String,
@@ -86,6 +90,7 @@ impl SessionOptions {
     fn in_memory(session_ttl: u64) -> SessionOptions {
         SessionOptions {
             redis_url: None,
+            redis_cluster: false,
             redis_prefix: String::new(),
             session_ttl,
             retry_window: 600,
@@ -315,7 +320,12 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
     // one link, so a change posted to one replica is served by all.
     Ok(match &o.redis_url {
         Some(url) => {
-            let store = RedisStore::new(url, &o.redis_prefix).map_err(|e| e.to_string())?;
+            let store = if o.redis_cluster {
+                RedisStore::cluster(url, &o.redis_prefix)
+            } else {
+                RedisStore::new(url, &o.redis_prefix)
+            }
+            .map_err(|e| e.to_string())?;
             let shared = SharedData::on(store.link(), &o.redis_prefix);
             Engine::new(snap, Arc::new(store), settings).with_shared(shared)
         }

@@ -69,7 +69,7 @@ impl SharedData {
 
     async fn call<T, F, Fut>(&self, what: &str, f: F) -> Result<T, SharedError>
     where
-        F: FnOnce(redis::aio::ConnectionManager) -> Fut,
+        F: FnOnce(crate::dialogue::redis_store::Conn) -> Fut,
         Fut: std::future::Future<Output = redis::RedisResult<T>>,
     {
         self.link

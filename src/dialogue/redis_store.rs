@@ -26,6 +26,8 @@ use std::future::Future;
 use std::time::Duration;
 
 use redis::aio::{ConnectionManager, ConnectionManagerConfig};
+use redis::cluster::ClusterClient;
+use redis::cluster_async::ClusterConnection;
 use redis::{RedisResult, Script};
 use tokio::sync::OnceCell;
 
@@ -119,20 +121,77 @@ redis.call('DEL', KEYS[2])
 return removed
 "#;
 
-/// One Redis server, connected on first use, with a deadline on every call.
-/// The session store and the shared dataset use the same link, so a
-/// process keeps one connection to Redis.
+/// One Redis server or one Redis Cluster, connected on first use, with a
+/// deadline on every call. The session store and the shared dataset use
+/// the same link, so a process keeps one connection to Redis.
 pub struct RedisLink {
-    client: redis::Client,
+    target: Target,
     // Connected on first use, not when made: the service must start (and
     // answer, without context) while Redis is down. A `OnceCell` because
     // concurrent first calls must share one connection attempt, and a
     // failed attempt leaves it empty so the next call tries again. Once set,
-    // the manager reconnects by itself and the cell never changes. No
-    // `Arc` is needed around it: `ConnectionManager` is already a cheap
-    // handle on shared state, cloned per call.
-    manager: OnceCell<ConnectionManager>,
+    // the connection reconnects by itself and the cell never changes. No
+    // `Arc` is needed around it: both kinds of connection are already cheap
+    // handles on shared state, cloned per call.
+    manager: OnceCell<Conn>,
 }
+
+/// What a link connects to.
+enum Target {
+    Single(redis::Client),
+    // Boxed: the cluster client is twice the size of a server client.
+    Cluster(Box<ClusterClient>),
+}
+
+/// A connection to one server or to a cluster. Every command of the store
+/// goes through [`redis::aio::ConnectionLike`], so the scripts and
+/// pipelines are the same for both; on a cluster they are routed by the
+/// slot of their keys, which the hash tags keep to one per reader.
+#[derive(Clone)]
+pub enum Conn {
+    /// One server, reconnected with backoff.
+    Single(ConnectionManager),
+    /// A cluster: commands go to the master of their slot, and a moved
+    /// slot (after a failover or a resharding) is followed.
+    Cluster(ClusterConnection),
+}
+
+impl redis::aio::ConnectionLike for Conn {
+    fn req_packed_command<'a>(
+        &'a mut self,
+        cmd: &'a redis::Cmd,
+    ) -> redis::RedisFuture<'a, redis::Value> {
+        match self {
+            Conn::Single(c) => c.req_packed_command(cmd),
+            Conn::Cluster(c) => c.req_packed_command(cmd),
+        }
+    }
+
+    fn req_packed_commands<'a>(
+        &'a mut self,
+        pipeline: &'a redis::Pipeline,
+        offset: usize,
+        count: usize,
+    ) -> redis::RedisFuture<'a, Vec<redis::Value>> {
+        match self {
+            Conn::Single(c) => c.req_packed_commands(pipeline, offset, count),
+            Conn::Cluster(c) => c.req_packed_commands(pipeline, offset, count),
+        }
+    }
+
+    fn get_db(&self) -> i64 {
+        match self {
+            Conn::Single(c) => c.get_db(),
+            Conn::Cluster(c) => c.get_db(),
+        }
+    }
+}
+
+/// How many times a cluster command is retried when its node is away or
+/// its slot moved; with the waits below they fit in [`CALL_DEADLINE`].
+const CLUSTER_RETRIES: u32 = 4;
+const CLUSTER_MIN_RETRY_WAIT_MS: u64 = 20;
+const CLUSTER_MAX_RETRY_WAIT_MS: u64 = 200;
 
 impl RedisLink {
     /// A link to `url`; only the URL is checked (the message does not
@@ -142,23 +201,68 @@ impl RedisLink {
             format!("invalid redis url, expected redis://[user:password@]host[:port][/db]: {e}")
         })?;
         Ok(RedisLink {
-            client,
+            target: Target::Single(client),
             manager: OnceCell::new(),
         })
     }
 
+    /// A link to a Redis Cluster, found through `urls`: one or more of its
+    /// nodes (`redis://host:port`), separated by commas. The rest of the
+    /// cluster is learnt from them. Only the URLs are checked.
+    pub fn open_cluster(urls: &str) -> Result<RedisLink, String> {
+        let nodes: Vec<&str> = urls
+            .split(',')
+            .map(str::trim)
+            .filter(|u| !u.is_empty())
+            .collect();
+        if nodes.is_empty() {
+            return Err(
+                "a redis cluster needs at least one node url, such as redis://10.0.0.5:6379".into(),
+            );
+        }
+        let client = ClusterClient::builder(nodes)
+            .connection_timeout(CONNECT_TIMEOUT)
+            .response_timeout(RESPONSE_TIMEOUT)
+            .retries(CLUSTER_RETRIES)
+            .min_retry_wait(CLUSTER_MIN_RETRY_WAIT_MS)
+            .max_retry_wait(CLUSTER_MAX_RETRY_WAIT_MS)
+            .build()
+            .map_err(|e| {
+                format!("invalid redis cluster urls, expected redis://host:port[,redis://host:port...]: {e}")
+            })?;
+        Ok(RedisLink {
+            target: Target::Cluster(Box::new(client)),
+            manager: OnceCell::new(),
+        })
+    }
+
+    /// Whether this link talks to a cluster.
+    pub fn is_cluster(&self) -> bool {
+        matches!(self.target, Target::Cluster(_))
+    }
+
     /// The shared connection, made on first use.
-    async fn connection(&self) -> Result<ConnectionManager, String> {
+    async fn connection(&self) -> Result<Conn, String> {
         let manager = self
             .manager
             .get_or_try_init(|| async {
-                let config = ConnectionManagerConfig::new()
-                    .set_connection_timeout(Some(CONNECT_TIMEOUT))
-                    .set_response_timeout(Some(RESPONSE_TIMEOUT))
-                    .set_number_of_retries(CONNECT_RETRIES)
-                    .set_min_delay(RETRY_MIN_DELAY)
-                    .set_max_delay(RETRY_MAX_DELAY);
-                self.client.get_connection_manager_with_config(config).await
+                match &self.target {
+                    Target::Single(client) => {
+                        let config = ConnectionManagerConfig::new()
+                            .set_connection_timeout(Some(CONNECT_TIMEOUT))
+                            .set_response_timeout(Some(RESPONSE_TIMEOUT))
+                            .set_number_of_retries(CONNECT_RETRIES)
+                            .set_min_delay(RETRY_MIN_DELAY)
+                            .set_max_delay(RETRY_MAX_DELAY);
+                        client
+                            .get_connection_manager_with_config(config)
+                            .await
+                            .map(Conn::Single)
+                    }
+                    Target::Cluster(client) => {
+                        client.get_async_connection().await.map(Conn::Cluster)
+                    }
+                }
             })
             .await
             .map_err(|e| format!("cannot connect to redis: {e}"))?;
@@ -169,7 +273,7 @@ impl RedisLink {
     /// included. `what` names the call in the timeout message.
     pub async fn call<T, F, Fut>(&self, what: &str, deadline: Duration, f: F) -> Result<T, String>
     where
-        F: FnOnce(ConnectionManager) -> Fut,
+        F: FnOnce(Conn) -> Fut,
         Fut: Future<Output = RedisResult<T>>,
     {
         let work = async {
@@ -194,8 +298,8 @@ impl RedisLink {
     }
 }
 
-/// Sessions in Redis (a single server, or a cluster through a proxy that
-/// routes by slot). Cheap to share behind one `Arc`: it holds one
+/// Sessions in Redis (a single server, or a Redis Cluster: every key of
+/// one reader carries the reader's hash tag, so it lives on one slot). Cheap to share behind one `Arc`: it holds one
 /// multiplexed connection that every call uses.
 pub struct RedisStore {
     // An `Arc`: the shared dataset may use the same link.
@@ -233,6 +337,14 @@ impl RedisStore {
     /// first call, so this succeeds while Redis is down.
     pub fn new(url: &str, prefix: &str) -> Result<RedisStore, StoreError> {
         let link = RedisLink::open(url).map_err(StoreError::Unavailable)?;
+        RedisStore::on(std::sync::Arc::new(link), prefix)
+    }
+
+    /// A store on a Redis Cluster found through `urls` (see
+    /// [`RedisLink::open_cluster`]); no connection is made until the first
+    /// call.
+    pub fn cluster(urls: &str, prefix: &str) -> Result<RedisStore, StoreError> {
+        let link = RedisLink::open_cluster(urls).map_err(StoreError::Unavailable)?;
         RedisStore::on(std::sync::Arc::new(link), prefix)
     }
 
@@ -274,7 +386,7 @@ impl RedisStore {
     /// version either way, so a save that did land only costs one conflict.
     async fn call<T, F, Fut>(&self, what: &str, f: F) -> Result<T, StoreError>
     where
-        F: FnOnce(ConnectionManager) -> Fut,
+        F: FnOnce(Conn) -> Fut,
         Fut: Future<Output = RedisResult<T>>,
     {
         self.round_trips

@@ -163,6 +163,33 @@ fn change_error(code: &'static str, what: &str, e: ChangeError) -> ApiError {
     }
 }
 
+/// The header that carries the exported dataset's version.
+pub const DATASET_VERSION_HEADER: &str = "tidings-dataset-version";
+
+/// The dataset being served, whole, in the shape `PUT /v1/admin/dataset`
+/// takes: a backup that can be sent back as it is to restore it. Its
+/// version goes in a header, not the body, so the body stays a valid
+/// replacement (a restore makes the next version, it does not go back).
+async fn export_dataset(_: Admin, State(engine): State<Engine>) -> impl IntoResponse {
+    let snap = engine.snapshot();
+    let records = Records::of(&snap.data);
+    (
+        [
+            (
+                header::HeaderName::from_static(DATASET_VERSION_HEADER),
+                header::HeaderValue::from(snap.data.version),
+            ),
+            // A whole scenario, possibly large and always live: never
+            // kept by a cache on the way.
+            (
+                header::CACHE_CONTROL,
+                header::HeaderValue::from_static("no-store"),
+            ),
+        ],
+        Json(records),
+    )
+}
+
 async fn status(_: Admin, State(engine): State<Engine>) -> impl IntoResponse {
     Json(engine.status().await)
 }
@@ -193,7 +220,10 @@ async fn unanswered(
 pub fn routes() -> Router<Engine> {
     Router::new()
         .route("/v1/admin/batches", post(apply_batch))
-        .route("/v1/admin/dataset", put(replace_dataset))
+        .route(
+            "/v1/admin/dataset",
+            put(replace_dataset).get(export_dataset),
+        )
         .route("/v1/admin/status", get(status))
         .route("/v1/admin/unanswered", get(unanswered))
         .layer(DefaultBodyLimit::max(MAX_ADMIN_BODY))

@@ -2,6 +2,7 @@
 
 #![allow(dead_code)]
 
+pub mod cluster;
 pub mod speech;
 
 use std::io::{BufRead, BufReader};
