@@ -442,3 +442,53 @@ async fn the_unanswered_list_counts_questions_without_readers() {
         "{text}"
     );
 }
+
+#[tokio::test]
+async fn the_exported_dataset_restores_what_was_served() {
+    let s = Server::start(admin_server_engine()).await;
+    let (status, _) = admin(&s, "POST", "/v1/admin/batches", Some(marathon_final())).await;
+    assert_eq!(status, 200);
+    let r = s
+        .client
+        .get(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status().as_u16(), 200);
+    assert!(r.headers().get("tidings-dataset-version").is_some());
+    let exported: Value = r.json().await.unwrap();
+    for part in ["scenario", "sports", "groups", "competitors", "contests"] {
+        assert!(!exported[part].is_null(), "the export has {part}");
+    }
+    // The batch is in the export, and the export is a valid replacement.
+    let marathon = exported["contests"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| c["id"] == "ath-m-marathon-final")
+        .expect("the marathon is exported");
+    assert_eq!(marathon["status"], "final");
+    let (status, body) = admin(&s, "PUT", "/v1/admin/dataset", Some(exported.clone())).await;
+    assert_eq!(status, 200, "{body}");
+    let again: Value = s
+        .client
+        .get(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .send()
+        .await
+        .unwrap()
+        .json()
+        .await
+        .unwrap();
+    assert_eq!(again["contests"], exported["contests"]);
+    assert_eq!(again["competitors"], exported["competitors"]);
+    // Without the token, nothing is exported.
+    let r = s
+        .client
+        .get(s.url("/v1/admin/dataset"))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status().as_u16(), 401);
+}
