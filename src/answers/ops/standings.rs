@@ -29,7 +29,15 @@ pub static SPEC: OpSpec = OpSpec {
     outcomes: &[
         answered(
             "final",
-            &["contest_name", "rows", "shown", "placed", "out", "counted"],
+            &[
+                "contest_name",
+                "rows",
+                "shown",
+                "placed",
+                "more",
+                "out",
+                "counted",
+            ],
         ),
         // Standings while the contest is under way are an answer too.
         answered(
@@ -39,6 +47,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "rows",
                 "shown",
                 "placed",
+                "more",
                 "out",
                 "counted",
                 "updated",
@@ -130,6 +139,10 @@ fn run(input: &OpInput) -> OpOutput {
         .collect();
     f.put("shown", Value::Int(rows.len() as i64));
     f.put("placed", Value::Int(order.len() as i64));
+    // A cut list must say it is cut, or "full results" reads as complete.
+    if order.len() > rows.len() {
+        f.put("more", Value::Int((order.len() - rows.len()) as i64));
+    }
     f.put("rows", Value::List(rows));
     f.put("out", Value::List(out));
     vote_facts(data, ci, None, &mut f);
@@ -227,6 +240,22 @@ mod tests {
             rows,
             "1. Sondora Hervoveth (Sordavia) 6.95 m and 2. Tuthette Brossayne (Halvorne) 6.92 m"
         );
+        // A cut list says how many it leaves out; a whole one does not.
+        let has_more = |o: &OpOutput| match o {
+            OpOutput::Done { facts, .. } => facts.contains_key("more"),
+            other => panic!("expected facts, got {other:?}"),
+        };
+        assert!(has_more(&out));
+        let int = |o: &OpOutput, k: &str| match o {
+            OpOutput::Done { facts, .. } => match &facts[k] {
+                Value::Int(n) => *n,
+                v => panic!("{k}: {v:?}"),
+            },
+            other => panic!("expected facts, got {other:?}"),
+        };
+        assert_eq!(int(&out, "more"), int(&out, "placed") - 2);
+        let whole = run_on(&d, "ath-w-long-jump-final", Some(99));
+        assert!(!has_more(&whole));
     }
 
     #[test]
