@@ -941,7 +941,7 @@ ADD(T("what country is lucia wenderoff from", "competitor_delegation", {"competi
       says=[gname(PEOPLE[WENDEROW]["group"])], tags=["voice", "mishearing"]))
 ADD(T("how fast did the key rocket run in the two hundred", "competitor_result", {"competitor": GALKACE,
       "contest": M200}, focus="mark", says=[mark_of(M200, GALKACE)], tags=["voice", "mishearing", "alias"]))
-ADD(T("did dunmerrow win the basket ball", "delegation_in_event", {"group": "dunmerrow", "contest": BKM},
+ADD(T("did dunmerrow win the mens basket ball", "delegation_in_event", {"group": "dunmerrow", "contest": BKM},
       focus="whether", says=["gold"], tags=["voice", "mishearing"]))
 ADD(T("how is team vastrelia doing", "delegation_medals", {"group": "vastrelia"}, focus="count",
       says=[cnt(gmedals("vastrelia"))], tags=["alias"]))
