@@ -138,6 +138,20 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
             limit_gap.get_or_insert((intent, left));
             continue;
         }
+        // A word nothing explains may change the question ("how many
+        // world records", "medals per head of population"): answering
+        // without it would answer a nearby question with confidence.
+        // The reply names the longest such word: "per head of population"
+        // is about population.
+        if let Some(w) = stray_words(data, a, &filled)
+            .into_iter()
+            .max_by_key(|&w| a.tokens[w].chars().count())
+        {
+            return Choice::NotCovered {
+                gap: Gap::Unheld(format!("anything on “{}”", a.tokens[w])),
+                near: Some(intent),
+            };
+        }
         let unexplained = a.frame.unexplained.len() as i32;
         let confidence = score.min(1.0) * filled.certainty * UNEXPLAINED_COST.powi(unexplained);
         let chosen = Chosen {
@@ -231,6 +245,56 @@ fn frame_bonus(data: &Dataset, intent: &Intent, a: &Analysis) -> f32 {
     } else {
         FRAME_BONUS
     }
+}
+
+/// The question's words that nothing explains and that the intent, with
+/// these slots, does not account for either: not the reader's name for an
+/// event the data lacks (the reply says it has no such event), and not a
+/// word next to a person's or group's name, which may be a piece of that
+/// name as speech recognition heard it ("issov fusty sessy").
+pub fn stray_words(data: &Dataset, a: &Analysis, filled: &Filled) -> Vec<usize> {
+    let no_match = matches!(filled.need, Some(Need::NoMatch { .. }));
+    // A word of a name the slots hold was read through the conversation
+    // ("and north?" after Ashvenny South is Ashvenny North).
+    let slot_words: Vec<String> = filled
+        .slots
+        .values()
+        .filter_map(SlotValue::entity)
+        .flat_map(|e| {
+            crate::understand::normalize::normalize(&data.entity_name(e))
+                .split(' ')
+                .map(String::from)
+                .collect::<Vec<_>>()
+        })
+        .collect();
+    let named = |i: usize| {
+        a.mentions.iter().any(|m| {
+            (m.start..m.end).contains(&i)
+                && m.candidates.iter().any(|(t, _)| {
+                    matches!(
+                        t,
+                        Target::Entity(EntityRef::Competitor(_) | EntityRef::Group(_), _)
+                    )
+                })
+        })
+    };
+    let un = &a.frame.unexplained;
+    // Unexplained words in a run that touches a name.
+    let beside_name = |i: usize| {
+        let mut lo = i;
+        while lo > 0 && un.contains(&(lo - 1)) {
+            lo -= 1;
+        }
+        let mut hi = i;
+        while un.contains(&(hi + 1)) {
+            hi += 1;
+        }
+        (lo > 0 && named(lo - 1)) || named(hi + 1)
+    };
+    un.iter()
+        .copied()
+        .filter(|&i| !no_match && !beside_name(i) && !slot_words.contains(&a.tokens[i]))
+        .collect()
 }
 
 /// Whether the last answer was about an event.
@@ -466,5 +530,54 @@ fn mention_words(data: &Dataset, a: &Analysis, m: &Mention) -> String {
         Some((Target::Award(x), _)) => x.clone(),
         Some((Target::SportNoun(s), _)) => data.sports[*s].name.clone(),
         None => a.tokens[m.start..m.end].join(" "),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::engine::{load, Sources};
+
+    fn choice_for(text: &str) -> (String, Option<String>) {
+        let snap = load(&Sources::default()).unwrap();
+        let a = snap
+            .understanding
+            .analyse(text, jiff::civil::date(2027, 8, 14));
+        let s = Session::new("chat", 0);
+        match choose(&snap.data, &snap.catalog, &s, &a) {
+            Choice::Intent(c) => (c.intent.name.clone(), None),
+            Choice::NotCovered { gap, .. } => ("not covered".into(), Some(format!("{gap:?}"))),
+            Choice::NotUnderstood => ("not understood".into(), None),
+        }
+    }
+
+    #[test]
+    fn a_word_nothing_explains_is_said_not_dropped() {
+        let (got, gap) = choice_for("how many medals has Kalvenmark won relative to population");
+        assert_eq!(got, "not covered");
+        assert!(gap.unwrap().contains("population"));
+        // Without "world" read as a name, nothing in it is about the data
+        // at all: not a medal count, whichever honest reply it gets.
+        let (got, _) = choice_for("how many world records have fallen at these games");
+        assert!(got == "not covered" || got == "not understood", "{got}");
+        // The same question without the extra words is answered.
+        assert_eq!(
+            choice_for("how many medals has Kalvenmark won").0,
+            "delegation_medals"
+        );
+    }
+
+    #[test]
+    fn words_of_the_beat_and_pieces_of_names_are_not_stray() {
+        // "swim" is one of the games' plain words.
+        assert_eq!(
+            choice_for("when does Issov Fustisessi swim next").0,
+            "competitor_next"
+        );
+        // "fusty sessy" is how a voice channel heard the rest of a name.
+        assert_eq!(
+            choice_for("how did issov fusty sessy do in the two hundred freestyle").0,
+            "competitor_result"
+        );
     }
 }

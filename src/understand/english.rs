@@ -488,6 +488,24 @@ pub fn expand(tokens: &[&str]) -> Vec<String> {
     out
 }
 
+/// Everyday English words (SCOWL's small British list, see
+/// `english-words.COPYING`), one per line after `#` comment lines.
+static DICTIONARY: std::sync::LazyLock<std::collections::HashSet<&'static str>> =
+    std::sync::LazyLock::new(|| {
+        include_str!("english-words.txt")
+            .lines()
+            .filter(|l| !l.starts_with('#') && !l.is_empty())
+            .collect()
+    });
+
+/// Whether a word is an everyday English word. A reader's ordinary word on
+/// its own ("world", "mate") is not a misspelt name, however close it looks
+/// to one; names made of such words are still found exactly, and misheard
+/// names spread over several words ("key rocket") are looked up as a whole.
+pub fn is_dictionary_word(word: &str) -> bool {
+    DICTIONARY.contains(word)
+}
+
 /// Whether a word carries no content of its own (a function word or a word
 /// of chat).
 pub fn is_filler(word: &str) -> bool {
@@ -657,6 +675,18 @@ pub fn ordinal_suffix(n: u32) -> &'static str {
 
 #[cfg(test)]
 mod tests {
+    #[test]
+    fn everyday_words_come_from_the_word_list() {
+        // Entries of SCOWL's small British list (Debian wbritish-small).
+        for w in ["world", "mate", "record", "colour", "sliver"] {
+            assert!(is_dictionary_word(w), "{w}");
+        }
+        // Not entries: invented names, misspellings, capitalised entries.
+        for w in ["worel", "kalvenmark", "recrod", "london"] {
+            assert!(!is_dictionary_word(w), "{w}");
+        }
+    }
+
     use super::*;
     use crate::understand::normalize::normalize;
 

@@ -417,16 +417,29 @@ pub fn asked_attribute(tokens: &[&str], onset: usize, unexplained: &[usize]) -> 
     })
 }
 
-/// "winning time", "gold medal time", "her score": a mark named as such.
-fn mark_noun(tokens: &[&str]) -> bool {
-    tokens.windows(2).any(|w| {
-        matches!(
-            w[1],
-            "time" | "score" | "mark" | "distance" | "throw" | "jump"
-        ) && matches!(
-            w[0],
-            "winning" | "medal" | "gold" | "his" | "her" | "their" | "fastest" | "quickest"
-        )
+/// "winning time", "gold medal time", "her score", "Tharvane's jump",
+/// "the best throw", "what did he score": a mark named as such.
+fn mark_noun(tokens: &[&str], person: &dyn Fn(usize) -> bool) -> bool {
+    let noun = |w: &str| matches!(w, "time" | "score" | "mark" | "distance" | "throw" | "jump");
+    tokens.windows(2).enumerate().any(|(i, w)| {
+        noun(w[1])
+            && (matches!(
+                w[0],
+                "winning"
+                    | "medal"
+                    | "gold"
+                    | "his"
+                    | "her"
+                    | "their"
+                    | "fastest"
+                    | "quickest"
+                    | "best"
+                    | "top"
+            ) || person(i))
+    }) || tokens.windows(3).enumerate().any(|(i, w)| {
+        w[0] == "did"
+            && matches!(w[2], "score" | "throw" | "jump" | "clock")
+            && (matches!(w[1], "he" | "she" | "they") || person(i + 1))
     })
 }
 
@@ -1092,7 +1105,7 @@ fn focus(
         }))
         || (t0 == "how" && matches!(t1, "fast" | "far" | "high" | "quick"))
         || has("record")
-        || (t0 != "who" && mark_noun(tokens))
+        || (t0 != "who" && mark_noun(tokens, &person))
         || find(tokens, 0, &["best", "time"]).is_some()
         || find(tokens, 0, &["best", "mark"]).is_some()
     {

@@ -11,6 +11,7 @@ use std::collections::{HashMap, HashSet};
 
 use aho_corasick::{AhoCorasick, AhoCorasickBuilder, MatchKind};
 
+use super::english;
 use super::fuzzy::{FuzzyHit, FuzzyIndex};
 use super::normalize::normalize;
 use crate::dataset::{Dataset, EntityRef};
@@ -273,6 +274,7 @@ impl Lexicon {
         let phrasing: HashSet<String> = phrasing_words.into_iter().collect();
         let mut vocabulary: HashSet<String> = COMMON.iter().map(|s| s.to_string()).collect();
         vocabulary.extend(phrasing.iter().cloned());
+        vocabulary.extend(vocab.plain_words.iter().cloned());
 
         let mut forms: HashMap<String, Vec<Target>> = HashMap::new();
         let mut add = |surface: &str, t: Target| {
@@ -808,6 +810,12 @@ impl Lexicon {
                     i += 1;
                     continue;
                 }
+                // One everyday word alone is the reader's word, not a
+                // misspelt name of a person or group ("how many world
+                // records" is not about Worel Windoss); it may still be a
+                // misspelt word of the trade ("sliver" for silver).
+                let everyday = width == 1
+                    && (english::is_dictionary_word(tokens[i]) || english::is_filler(tokens[i]));
                 let query = tokens[i..i + width].join(" ");
                 let min = if width == 1 { 0.88 } else { 0.84 };
                 let hits = self.fuzzy.lookup(&query, min, 8);
@@ -821,7 +829,19 @@ impl Lexicon {
                     i += 1;
                     continue;
                 }
-                let candidates = self.fuzzy_candidates(&hits);
+                let mut candidates = self.fuzzy_candidates(&hits);
+                if everyday {
+                    candidates.retain(|(t, _)| {
+                        !matches!(
+                            t,
+                            Target::Entity(EntityRef::Competitor(_) | EntityRef::Group(_), _)
+                        )
+                    });
+                    if candidates.is_empty() {
+                        i += 1;
+                        continue;
+                    }
+                }
                 covered[i..i + width].iter_mut().for_each(|c| *c = true);
                 mentions.push(Mention {
                     start: i,
@@ -937,6 +957,35 @@ mod tests {
                 (m.start, m.end, name)
             })
             .collect()
+    }
+
+    #[test]
+    fn an_everyday_word_alone_is_not_a_misspelt_name() {
+        let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+        let d = crate::dataset::load_dir(&dir).unwrap();
+        let lex = Lexicon::build(
+            &d,
+            ["how", "many", "who", "got", "in", "the"].map(String::from),
+            &Default::default(),
+        );
+        // "world" is close to Worel (Windoss), "mate" to Mårten: both are
+        // the reader's own words.
+        assert_eq!(spotted(&lex, &d, "how many world records"), vec![]);
+        assert_eq!(spotted(&lex, &d, "cheers mate"), vec![]);
+        // A misspelling that is not a word is still a name ...
+        assert_eq!(
+            spotted(&lex, &d, "how many worell windoss"),
+            vec![(
+                2,
+                4,
+                d.entity_id(EntityRef::Competitor(d.competitor("p237").unwrap()))
+            )]
+        );
+        // ... and an everyday word may still be a misspelt word of the
+        // trade: "sliver" is silver.
+        let got = spotted(&lex, &d, "who got sliver");
+        assert_eq!(got.len(), 1, "{got:?}");
+        assert!(got[0].2.contains("silver"), "{got:?}");
     }
 
     #[test]

@@ -26,6 +26,10 @@ pub struct Vocabulary {
     /// Topics the data does not hold: their words, and how a reply names
     /// them ("turnout figures").
     pub not_in_data: Vec<(Vec<String>, String)>,
+    /// Words of the beat that narrow nothing and ask nothing by themselves
+    /// ("pool", "swim", "runner"): a question using them is read as if
+    /// they were not there, instead of as one with an unknown word in it.
+    pub plain_words: Vec<String>,
 }
 
 /// The file as editors write it.
@@ -41,6 +45,9 @@ pub struct VocabularyFile {
     /// Words of a topic the data does not hold → how a reply names it.
     #[serde(default)]
     pub not_in_data: BTreeMap<String, Spanned<String>>,
+    /// Words of the beat that narrow nothing.
+    #[serde(default)]
+    pub plain_words: Vec<Spanned<String>>,
 }
 
 /// The name of the file in an intents folder.
@@ -145,6 +152,27 @@ impl Vocabulary {
             }
             v.not_in_data.push((w, what.value.trim().to_string()));
         }
+        for word in &f.plain_words {
+            let w = normalize(&word.value);
+            if w.is_empty() || w.contains(' ') {
+                problems.push((
+                    word.referenced.line(),
+                    word.referenced.column(),
+                    format!("plain_words: {:?} must be one word", word.value),
+                ));
+            } else if v.not_in_data.iter().any(|(t, _)| t.len() == 1 && t[0] == w) {
+                problems.push((
+                    word.referenced.line(),
+                    word.referenced.column(),
+                    format!(
+                        "plain_words: {:?} is also a topic the data does not hold",
+                        word.value
+                    ),
+                ));
+            } else {
+                v.plain_words.push(w);
+            }
+        }
         if problems.is_empty() {
             Ok(v)
         } else {
@@ -224,5 +252,10 @@ mod tests {
         assert!(e[0].2.contains("already stands for"), "{e:?}");
         let e = vocab("in_event_names:\n  individual medley: [im]\n").unwrap_err();
         assert!(e[0].2.contains("one word"));
+        let e = vocab("not_in_data:\n  crowd: attendance\nplain_words: [pool, crowd, swim lane]\n")
+            .unwrap_err();
+        assert_eq!(e.len(), 2, "{e:?}");
+        assert!(e[0].2.contains("also a topic"), "{e:?}");
+        assert!(e[1].2.contains("one word"), "{e:?}");
     }
 }
