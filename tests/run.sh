@@ -16,6 +16,11 @@ command -v espeak-ng >/dev/null 2>&1 || need_pkgs+=(espeak-ng)
 # (tests/desk.rs); TIDINGS_CHROMIUM and TIDINGS_CHROMEDRIVER point the test at other copies.
 [ -n "${TIDINGS_CHROMIUM:-}" ] || command -v chromium >/dev/null 2>&1 || need_pkgs+=(chromium)
 [ -n "${TIDINGS_CHROMEDRIVER:-}" ] || command -v chromedriver >/dev/null 2>&1 || need_pkgs+=(chromium-driver)
+# nginx is the load balancer of the deployment test (tests/deploy.rs);
+# TIDINGS_NGINX points it at another copy.
+[ -n "${TIDINGS_NGINX:-}" ] || [ -x /usr/sbin/nginx ] || command -v nginx >/dev/null 2>&1 || need_pkgs+=(nginx-light)
+# A venv of its own holds the Kubernetes schema validator (tests/deploy/check.sh).
+python3 -c 'import ensurepip, venv' >/dev/null 2>&1 || need_pkgs+=(python3-venv)
 if [ ${#need_pkgs[@]} -gt 0 ]; then
   echo "tests/run.sh: installing ${need_pkgs[*]}"
   if [ "$(id -u)" = 0 ]; then SUDO=""; else SUDO="sudo"; fi
@@ -39,6 +44,10 @@ for _ in $(seq 1 100); do
   sleep 0.05
 done
 redis-cli -p "$port" ping | grep -q PONG || { echo "tests/run.sh: private redis-server did not start"; cat "$redis_dir/redis.log"; exit 1; }
+
+# deploy/: manifests against the Kubernetes schemas, one topology across
+# compose, Kubernetes, the Dockerfile and nginx, the image where it can build.
+bash tests/deploy/check.sh
 
 export TIDINGS_TEST_REDIS_URL="redis://127.0.0.1:$port/"
 export TIDINGS_REDIS_SERVER_BIN="$(command -v redis-server)"
