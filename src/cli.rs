@@ -71,6 +71,10 @@ pub struct SessionOptions {
     /// How long a message id is remembered for retries, in seconds.
     #[arg(long, env = "TIDINGS_RETRY_WINDOW", default_value_t = 600)]
     pub retry_window: u64,
+    /// Without --redis-url: most readers whose conversation is kept in
+    /// memory; past it the least recently active reader is forgotten.
+    #[arg(long, env = "TIDINGS_MAX_SESSIONS", default_value_t = crate::dialogue::memory_store::DEFAULT_MAX_READERS)]
+    pub max_sessions: usize,
     /// After how long without an update a live contest's figures are said
     /// to be old in answers, in seconds.
     #[arg(long, env = "TIDINGS_STALE_AFTER", default_value_t = 600)]
@@ -94,6 +98,7 @@ impl SessionOptions {
             redis_prefix: String::new(),
             session_ttl,
             retry_window: 600,
+            max_sessions: crate::dialogue::memory_store::DEFAULT_MAX_READERS,
             stale_after: 600,
             max_removed_share: 0.5,
             admin_token: None,
@@ -128,6 +133,10 @@ pub struct EdgeOptions {
     /// Messages one reader may send at once after a pause.
     #[arg(long, env = "TIDINGS_READER_BURST", default_value_t = 8.0)]
     pub reader_burst: f64,
+    /// Messages of one reader that may wait for the one being answered;
+    /// more are answered 429 with retry-after.
+    #[arg(long, env = "TIDINGS_READER_QUEUE", default_value_t = 8)]
+    pub reader_queue: usize,
 }
 
 impl EdgeOptions {
@@ -150,6 +159,10 @@ impl EdgeOptions {
                 per_source: rate(self.source_rate, self.source_burst),
                 per_reader: rate(self.reader_rate, self.reader_burst),
                 ..crate::http::Rates::default()
+            },
+            queue: crate::http::Queueing {
+                per_reader: self.reader_queue,
+                ..crate::http::Queueing::default()
             },
         }
     }
@@ -329,7 +342,11 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
             let shared = SharedData::on(store.link(), &o.redis_prefix);
             Engine::new(snap, Arc::new(store), settings).with_shared(shared)
         }
-        None => Engine::new(snap, Arc::new(MemoryStore::new()), settings),
+        None => Engine::new(
+            snap,
+            Arc::new(MemoryStore::with_cap(o.max_sessions)),
+            settings,
+        ),
     })
 }
 

@@ -111,15 +111,28 @@ impl From<crate::engine::EngineError> for ApiError {
                 message: "the session store cannot be reached; try again shortly".into(),
                 retry_after: None,
             },
-            EngineError::Busy => ApiError {
-                status: StatusCode::SERVICE_UNAVAILABLE,
-                code: "busy",
-                message: e.to_string(),
-                retry_after: None,
-            },
+            // Turns of one reader wait for each other on a replica, so this
+            // is replicas racing for one reader: the reader's burst, not a
+            // fault of the service, hence a 429 to retry and no ERROR line.
+            EngineError::Busy => {
+                if let Some(held) = BUSY_LOG.pass() {
+                    tracing::warn!(
+                        held_back = held,
+                        "a reader's messages kept racing across replicas"
+                    );
+                }
+                super::queue::busy(e.to_string())
+            }
         }
     }
 }
+
+/// The warnings for [`crate::engine::EngineError::Busy`], at most one per
+/// 10 seconds.
+static BUSY_LOG: std::sync::LazyLock<crate::log_gate::SharedLogGate> =
+    std::sync::LazyLock::new(|| {
+        crate::log_gate::SharedLogGate::new(std::time::Duration::from_secs(10))
+    });
 
 fn lowercase_first(s: &str) -> String {
     let mut c = s.chars();

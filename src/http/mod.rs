@@ -10,6 +10,7 @@ mod admin;
 mod desk;
 mod error;
 pub mod limit;
+pub mod queue;
 mod serve;
 
 use std::future::Future;
@@ -32,6 +33,7 @@ use tower_http::trace::TraceLayer;
 
 pub use error::ApiError;
 pub use limit::{Rate, Rates};
+pub use queue::Queueing;
 pub use serve::Limits;
 
 use crate::engine::{Engine, Incoming};
@@ -49,6 +51,8 @@ pub struct Edge {
     pub connections: Limits,
     /// Rate limits.
     pub rates: Rates,
+    /// How one reader's messages wait for each other.
+    pub queue: Queueing,
 }
 
 impl Edge {
@@ -63,6 +67,7 @@ impl Edge {
                 per_key: None,
                 ..Rates::default()
             },
+            queue: Queueing::default(),
         }
     }
 }
@@ -76,6 +81,8 @@ pub struct EdgeState {
     sources: limit::Buckets,
     readers: limit::Buckets,
     admin_failures: limit::Buckets,
+    /// Each reader's messages, one turn at a time.
+    turns: queue::ReaderTurns,
     /// One log line per interval when clients are being limited.
     limited_log: crate::log_gate::SharedLogGate,
 }
@@ -87,6 +94,7 @@ impl EdgeState {
             sources: limit::Buckets::default(),
             readers: limit::Buckets::default(),
             admin_failures: limit::Buckets::default(),
+            turns: queue::ReaderTurns::new(edge.queue),
             limited_log: crate::log_gate::SharedLogGate::new(Duration::from_secs(10)),
         }
     }
@@ -235,6 +243,7 @@ async fn messages(
     // By the hashed key, so the buckets hold no reader id.
     let reader = engine.user_key(channel, &m.user);
     edge.take(&edge.readers, &reader, edge.rates.per_reader, "this reader")?;
+    let _turn = edge.turns.enter(&reader).await?;
     let answer = engine
         .handle_message(Incoming {
             user: &m.user,
