@@ -502,3 +502,19 @@ async fn serve_reads_keys_from_a_file_and_the_environment_and_logs_names_only() 
     assert!(err.contains("at least 16 characters"), "{err}");
     let _ = std::fs::remove_dir_all(&dir);
 }
+
+/// The key file shown in docs/api.md is one the service takes.
+#[test]
+fn the_key_file_example_in_the_api_docs_parses() {
+    let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR"));
+    let doc = std::fs::read_to_string(root.join("docs/api.md")).unwrap();
+    let section = &doc[doc.find("## Client keys").expect("the section is there")..];
+    let start = section
+        .find("```text\n# NAME")
+        .expect("the example is there")
+        + "```text\n".len();
+    let end = start + section[start..].find("```").unwrap();
+    let keys = ClientKeys::parse(section[start..end].lines())
+        .unwrap_or_else(|(line, e)| panic!("docs/api.md key example line {line}: {e}"));
+    assert_eq!(keys.names(), ["chat-app", "sms-gateway", "desk"]);
+}
