@@ -62,6 +62,10 @@ pub struct SessionOptions {
     /// separated by commas), not one server.
     #[arg(long, env = "TIDINGS_REDIS_CLUSTER", requires = "redis_url")]
     pub redis_cluster: bool,
+    /// CA certificates (PEM) to trust for a rediss:// URL instead of the
+    /// built-in roots, for a Redis certificate signed by a private CA.
+    #[arg(long, env = "TIDINGS_REDIS_CA", requires = "redis_url")]
+    pub redis_ca: Option<PathBuf>,
     /// Prefix of every Redis key, so several deployments can share one Redis.
     #[arg(long, env = "TIDINGS_REDIS_PREFIX", default_value = "tidings:")]
     pub redis_prefix: String,
@@ -95,6 +99,7 @@ impl SessionOptions {
         SessionOptions {
             redis_url: None,
             redis_cluster: false,
+            redis_ca: None,
             redis_prefix: String::new(),
             session_ttl,
             retry_window: 600,
@@ -137,18 +142,59 @@ pub struct EdgeOptions {
     /// more are answered 429 with retry-after.
     #[arg(long, env = "TIDINGS_READER_QUEUE", default_value_t = 8)]
     pub reader_queue: usize,
+    /// A file of client keys, one `NAME KEY [rate=N] [burst=N] [desk]` a
+    /// line; with any key configured, messages need one.
+    #[arg(long, env = "TIDINGS_CLIENT_KEYS_FILE")]
+    pub client_keys_file: Option<PathBuf>,
+    /// A client key, `NAME KEY [settings]` as in the file (repeatable; in
+    /// the environment, separated by commas).
+    #[arg(
+        long = "client-key",
+        env = "TIDINGS_CLIENT_KEYS",
+        value_delimiter = ',',
+        hide_env_values = true
+    )]
+    pub client_keys: Vec<String>,
+    /// Messages per second one client key may send, unless it sets its own
+    /// (0: no limit).
+    #[arg(long, env = "TIDINGS_KEY_RATE", default_value_t = 100.0)]
+    pub key_rate: f64,
+    /// Messages one client key may send at once after a pause.
+    #[arg(long, env = "TIDINGS_KEY_BURST", default_value_t = 200.0)]
+    pub key_burst: f64,
+    /// Secret for the HMAC signatures of messages (repeatable for
+    /// rotation; in the environment, separated by commas); with one set,
+    /// unsigned messages are refused.
+    #[arg(
+        long = "signing-secret",
+        env = "TIDINGS_SIGNING_SECRETS",
+        value_delimiter = ',',
+        hide_env_values = true
+    )]
+    pub signing_secrets: Vec<String>,
+    /// How far a signature's timestamp may be from this clock, in seconds.
+    #[arg(long, env = "TIDINGS_SIGNATURE_WINDOW", default_value_t = 300)]
+    pub signature_window: u64,
+    /// Origins a browser may call the API from (comma-separated
+    /// `scheme://host[:port]`); none sends no CORS headers.
+    #[arg(long, env = "TIDINGS_CORS_ORIGINS", value_delimiter = ',')]
+    pub cors_origins: Vec<String>,
 }
+
+/// Shortest signing secret accepted.
+const MIN_SIGNING_SECRET: usize = 16;
 
 impl EdgeOptions {
     /// The edge these options set. Zero durations become one second, so a
     /// typo cannot switch a timeout off; a zero (or negative) rate turns
-    /// that rate limit off.
-    pub fn edge(&self) -> crate::http::Edge {
+    /// that rate limit off. Keys, secrets and origins are checked: a
+    /// problem stops the start with what is wrong (never the key itself).
+    pub fn edge(&self) -> Result<crate::http::Edge, String> {
         let secs = |s: u64| Duration::from_secs(s.max(1));
         let rate = |per_second: f64, burst: f64| {
             (per_second > 0.0).then(|| crate::http::Rate::new(per_second, burst.max(1.0)))
         };
-        crate::http::Edge {
+        Ok(crate::http::Edge {
             connections: crate::http::Limits {
                 header_read_timeout: secs(self.header_timeout),
                 idle_timeout: secs(self.idle_timeout),
@@ -158,13 +204,58 @@ impl EdgeOptions {
             rates: crate::http::Rates {
                 per_source: rate(self.source_rate, self.source_burst),
                 per_reader: rate(self.reader_rate, self.reader_burst),
+                per_key: rate(self.key_rate, self.key_burst),
                 ..crate::http::Rates::default()
             },
             queue: crate::http::Queueing {
                 per_reader: self.reader_queue,
                 ..crate::http::Queueing::default()
             },
+            keys: self.keys()?,
+            signing: self.signing()?,
+            cors: crate::http::Cors::new(self.cors_origins.iter().map(String::as_str))
+                .map_err(|e| e.to_string())?,
+        })
+    }
+
+    /// The client keys of the file and of the options, all checked
+    /// together (a key may not be in both).
+    fn keys(&self) -> Result<crate::http::ClientKeys, String> {
+        let text = match &self.client_keys_file {
+            None => String::new(),
+            Some(path) => std::fs::read_to_string(path)
+                .map_err(|e| format!("cannot read --client-keys-file {}: {e}", path.display()))?,
+        };
+        let file_lines = text.lines().count();
+        let lines = text
+            .lines()
+            .chain(self.client_keys.iter().map(String::as_str));
+        crate::http::ClientKeys::parse(lines).map_err(|(line, e)| match &self.client_keys_file {
+            Some(path) if line <= file_lines => format!("{}:{line}: {e}", path.display()),
+            _ => format!("--client-key number {}: {e}", line - file_lines),
+        })
+    }
+
+    /// Signature checks, when a secret is set.
+    fn signing(&self) -> Result<Option<Arc<crate::http::signature::Signing>>, String> {
+        let secrets: Vec<&String> = self
+            .signing_secrets
+            .iter()
+            .filter(|s| !s.is_empty())
+            .collect();
+        if secrets.is_empty() {
+            return Ok(None);
         }
+        if secrets.iter().any(|s| s.len() < MIN_SIGNING_SECRET) {
+            return Err(format!(
+                "--signing-secret must be at least {MIN_SIGNING_SECRET} characters: use a long random value"
+            ));
+        }
+        Ok(Some(Arc::new(crate::http::signature::Signing::new(
+            secrets.iter().map(|s| s.as_bytes().to_vec()).collect(),
+            Duration::from_secs(self.signature_window.max(1)),
+            crate::http::signature::DEFAULT_SEEN,
+        ))))
     }
 }
 
@@ -179,8 +270,9 @@ pub enum Command {
         listen: SocketAddr,
         #[command(flatten)]
         sessions: SessionOptions,
+        // Boxed: the edge's options are most of the command's size.
         #[command(flatten)]
-        edge: EdgeOptions,
+        edge: Box<EdgeOptions>,
         /// Read the --data and --intents folders again when their files
         /// change; a broken file keeps the last good version serving.
         #[arg(long, env = "TIDINGS_WATCH")]
@@ -333,12 +425,15 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
     // one link, so a change posted to one replica is served by all.
     Ok(match &o.redis_url {
         Some(url) => {
-            let store = if o.redis_cluster {
-                RedisStore::cluster(url, &o.redis_prefix)
-            } else {
-                RedisStore::new(url, &o.redis_prefix)
-            }
-            .map_err(|e| e.to_string())?;
+            let ca = match &o.redis_ca {
+                None => None,
+                Some(path) => Some(
+                    std::fs::read(path)
+                        .map_err(|e| format!("cannot read --redis-ca {}: {e}", path.display()))?,
+                ),
+            };
+            let store = RedisStore::connect(url, &o.redis_prefix, o.redis_cluster, ca.as_deref())
+                .map_err(|e| e.to_string())?;
             let shared = SharedData::on(store.link(), &o.redis_prefix);
             Engine::new(snap, Arc::new(store), settings).with_shared(shared)
         }
@@ -407,6 +502,13 @@ pub async fn run(cli: Cli) -> i32 {
             edge,
             watch,
         } => {
+            let edge = match edge.edge() {
+                Ok(e) => e,
+                Err(e) => {
+                    eprintln!("{e}");
+                    return 1;
+                }
+            };
             if watch && common.data.is_none() && common.intents.is_none() {
                 eprintln!("--watch needs --data or --intents: the built-in demo does not change");
                 return 2;
@@ -444,6 +546,8 @@ pub async fn run(cli: Cli) -> i32 {
                     return 1;
                 }
             };
+            // Before "serving", so the line is there once the address is.
+            edge.keys.announce();
             let snap = engine.snapshot();
             tracing::info!(
                 addr = %listener.local_addr().map(|a| a.to_string()).unwrap_or_default(),
@@ -452,7 +556,7 @@ pub async fn run(cli: Cli) -> i32 {
                 intents = snap.catalog.intents.len(),
                 "serving"
             );
-            match crate::http::run_with(listener, engine, edge.edge(), shutdown_signal()).await {
+            match crate::http::run_with(listener, engine, edge, shutdown_signal()).await {
                 Ok(()) => 0,
                 Err(e) => {
                     eprintln!("server error: {e}");

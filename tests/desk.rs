@@ -208,7 +208,10 @@ async fn an_editor_asks_on_the_desk_page_and_reads_the_unanswered_list() {
 
 async fn scenario(c: Client, base: String, closed_base: String) {
     let http = reqwest::Client::new();
-    c.goto(&format!("{base}/desk")).await.unwrap();
+    // With an admin token configured the desk is behind HTTP Basic; the
+    // browser keeps the credentials for the page's own files and requests.
+    let signed_in = base.replacen("http://", &format!("http://editor:{TOKEN}@"), 1);
+    c.goto(&format!("{signed_in}/desk")).await.unwrap();
     wait_js(
         &c,
         "the page's script to set a reader id",

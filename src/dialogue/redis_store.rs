@@ -138,7 +138,8 @@ pub struct RedisLink {
 
 /// What a link connects to.
 enum Target {
-    Single(redis::Client),
+    // Boxed as well: with TLS the server client is the larger one.
+    Single(Box<redis::Client>),
     // Boxed: the cluster client is twice the size of a server client.
     Cluster(Box<ClusterClient>),
 }
@@ -193,15 +194,41 @@ const CLUSTER_RETRIES: u32 = 4;
 const CLUSTER_MIN_RETRY_WAIT_MS: u64 = 20;
 const CLUSTER_MAX_RETRY_WAIT_MS: u64 = 200;
 
+/// TLS settings that trust the CA certificates in `pem` only.
+fn trusting(pem: &[u8]) -> redis::TlsCertificates {
+    redis::TlsCertificates {
+        client_tls: None,
+        root_cert: Some(pem.to_vec()),
+    }
+}
+
 impl RedisLink {
     /// A link to `url`; only the URL is checked (the message does not
     /// repeat it: it may hold a password).
     pub fn open(url: &str) -> Result<RedisLink, String> {
-        let client = redis::Client::open(url).map_err(|e| {
-            format!("invalid redis url, expected redis://[user:password@]host[:port][/db]: {e}")
-        })?;
+        RedisLink::open_trusting(url, None)
+    }
+
+    /// A link to `url`; a `rediss://` one trusts the CA certificates of
+    /// `ca` (PEM) instead of the Mozilla roots built in, for a Redis whose
+    /// certificate a private CA signed.
+    pub fn open_trusting(url: &str, ca: Option<&[u8]>) -> Result<RedisLink, String> {
+        let bad = |e: redis::RedisError| {
+            format!("invalid redis url, expected redis[s]://[user:password@]host[:port][/db]: {e}")
+        };
+        let client = match ca {
+            None => redis::Client::open(url).map_err(bad)?,
+            Some(pem) => {
+                if !url.starts_with("rediss://") {
+                    return Err(
+                        "--redis-ca needs a rediss:// url: a CA is only used over TLS".into(),
+                    );
+                }
+                redis::Client::build_with_tls(url, trusting(pem)).map_err(bad)?
+            }
+        };
         Ok(RedisLink {
-            target: Target::Single(client),
+            target: Target::Single(Box::new(client)),
             manager: OnceCell::new(),
         })
     }
@@ -210,6 +237,12 @@ impl RedisLink {
     /// nodes (`redis://host:port`), separated by commas. The rest of the
     /// cluster is learnt from them. Only the URLs are checked.
     pub fn open_cluster(urls: &str) -> Result<RedisLink, String> {
+        RedisLink::open_cluster_trusting(urls, None)
+    }
+
+    /// A link to a Redis Cluster, trusting `ca` (PEM) for `rediss://`
+    /// nodes, as [`RedisLink::open_trusting`] does.
+    pub fn open_cluster_trusting(urls: &str, ca: Option<&[u8]>) -> Result<RedisLink, String> {
         let nodes: Vec<&str> = urls
             .split(',')
             .map(str::trim)
@@ -220,7 +253,11 @@ impl RedisLink {
                 "a redis cluster needs at least one node url, such as redis://10.0.0.5:6379".into(),
             );
         }
-        let client = ClusterClient::builder(nodes)
+        let mut builder = ClusterClient::builder(nodes);
+        if let Some(pem) = ca {
+            builder = builder.certs(trusting(pem));
+        }
+        let client = builder
             .connection_timeout(CONNECT_TIMEOUT)
             .response_timeout(RESPONSE_TIMEOUT)
             .retries(CLUSTER_RETRIES)
@@ -345,6 +382,24 @@ impl RedisStore {
     /// call.
     pub fn cluster(urls: &str, prefix: &str) -> Result<RedisStore, StoreError> {
         let link = RedisLink::open_cluster(urls).map_err(StoreError::Unavailable)?;
+        RedisStore::on(std::sync::Arc::new(link), prefix)
+    }
+
+    /// A store on one server or a cluster, trusting `ca` (PEM) for
+    /// `rediss://` URLs when given; no connection is made until the first
+    /// call.
+    pub fn connect(
+        urls: &str,
+        prefix: &str,
+        cluster: bool,
+        ca: Option<&[u8]>,
+    ) -> Result<RedisStore, StoreError> {
+        let link = if cluster {
+            RedisLink::open_cluster_trusting(urls, ca)
+        } else {
+            RedisLink::open_trusting(urls, ca)
+        }
+        .map_err(StoreError::Unavailable)?;
         RedisStore::on(std::sync::Arc::new(link), prefix)
     }
 

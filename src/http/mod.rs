@@ -7,11 +7,14 @@
 //! is never a 500.
 
 mod admin;
+pub mod cors;
 mod desk;
 mod error;
+pub mod keys;
 pub mod limit;
 pub mod queue;
 mod serve;
+pub mod signature;
 
 use std::future::Future;
 use std::net::SocketAddr;
@@ -31,7 +34,9 @@ use serde_json::json;
 use tokio::net::TcpListener;
 use tower_http::trace::TraceLayer;
 
+pub use cors::Cors;
 pub use error::ApiError;
+pub use keys::ClientKeys;
 pub use limit::{Rate, Rates};
 pub use queue::Queueing;
 pub use serve::Limits;
@@ -53,6 +58,12 @@ pub struct Edge {
     pub rates: Rates,
     /// How one reader's messages wait for each other.
     pub queue: Queueing,
+    /// Client keys of the reader-facing routes; none leaves them open.
+    pub keys: ClientKeys,
+    /// Signature checks of `POST /v1/messages`, when configured.
+    pub signing: Option<Arc<signature::Signing>>,
+    /// Origins a browser may call the API from.
+    pub cors: Cors,
 }
 
 impl Edge {
@@ -68,6 +79,7 @@ impl Edge {
                 ..Rates::default()
             },
             queue: Queueing::default(),
+            ..Edge::default()
         }
     }
 }
@@ -83,6 +95,9 @@ pub struct EdgeState {
     admin_failures: limit::Buckets,
     /// Each reader's messages, one turn at a time.
     turns: queue::ReaderTurns,
+    keys: ClientKeys,
+    key_buckets: limit::Buckets,
+    signing: Option<Arc<signature::Signing>>,
     /// One log line per interval when clients are being limited.
     limited_log: crate::log_gate::SharedLogGate,
 }
@@ -95,6 +110,9 @@ impl EdgeState {
             readers: limit::Buckets::default(),
             admin_failures: limit::Buckets::default(),
             turns: queue::ReaderTurns::new(edge.queue),
+            keys: edge.keys.clone(),
+            key_buckets: limit::Buckets::default(),
+            signing: edge.signing.clone(),
             limited_log: crate::log_gate::SharedLogGate::new(Duration::from_secs(10)),
         }
     }
@@ -326,6 +344,7 @@ pub fn app(engine: Engine) -> Router {
 /// The application's routes and layers, limited as `edge` says.
 pub fn app_with(engine: Engine, edge: &Edge) -> Router {
     let state = Arc::new(EdgeState::new(edge));
+    let engine_for_keys = engine.clone();
     Router::new()
         .route("/v1/messages", post(messages))
         .route("/v1/users/{channel}/{user}", delete(erase_user))
@@ -339,9 +358,19 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
         // Layers run outside-in: the trace span wraps everything, then the
         // timeout (so a stuck request cannot hold shutdown forever), then
         // the edge's state for handlers, the per-source rate limit (before
-        // any body is read), then the body limit that the JSON extractor
+        // any body is read), CORS (a preflight carries no key), the client
+        // keys, the signature check, then the body limit that the JSON extractor
         // reports as 413.
         .layer(DefaultBodyLimit::max(MAX_BODY))
+        .layer(axum::middleware::from_fn_with_state(
+            Arc::clone(&state),
+            signature::verify,
+        ))
+        .layer(axum::middleware::from_fn_with_state(
+            (Arc::clone(&state), engine_for_keys),
+            keys::guard,
+        ))
+        .layer(tower::util::option_layer(edge.cors.layer()))
         .layer(axum::middleware::from_fn_with_state(
             Arc::clone(&state),
             limit_source,
