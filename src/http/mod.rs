@@ -67,7 +67,8 @@ pub struct Edge {
 }
 
 impl Edge {
-    /// The default connection limits and no rate limits: for tools and
+    /// The default connection limits, no rate limits and a long line for
+    /// each reader: for tools and
     /// tests that send many messages as one reader on purpose.
     pub fn without_rate_limits() -> Edge {
         Edge {
@@ -78,7 +79,12 @@ impl Edge {
                 per_key: None,
                 ..Rates::default()
             },
-            queue: Queueing::default(),
+            // Many messages of one reader at once are the point of such
+            // callers: they wait in line rather than being turned away.
+            queue: Queueing {
+                per_reader: 1024,
+                ..Queueing::default()
+            },
             ..Edge::default()
         }
     }
