@@ -68,8 +68,8 @@ pub struct Edge {
 
 impl Edge {
     /// The default connection limits, no rate limits and a long line for
-    /// each reader: for tools and
-    /// tests that send many messages as one reader on purpose.
+    /// each reader: for tools and tests that send many messages as one
+    /// reader on purpose.
     pub fn without_rate_limits() -> Edge {
         Edge {
             connections: Limits::default(),
