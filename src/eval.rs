@@ -70,6 +70,9 @@ pub struct Failure {
     pub ask: String,
     pub problems: Vec<String>,
     pub reply: String,
+    /// Whether the reply was a confident answer with a wrong fact or to
+    /// another question (counted in `wrong_answers`).
+    pub wrong: bool,
 }
 
 /// The figures.
@@ -205,6 +208,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                         ask: t.ask.clone(),
                         problems: vec![e.to_string()],
                         reply: String::new(),
+                        wrong: false,
                     });
                     continue;
                 }
@@ -317,6 +321,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                     ask: t.ask.clone(),
                     problems,
                     reply: reply.text.clone(),
+                    wrong,
                 });
             }
         }
@@ -397,8 +402,9 @@ pub async fn run_cli(common: &Common, set: &Path, verbose: bool, json: bool, by_
         if verbose {
             for f in &r.failures {
                 println!(
-                    "case {}: {:?}\n  reply: {}\n  {}",
+                    "case {}{}: {:?}\n  reply: {}\n  {}",
                     f.case,
+                    if f.wrong { " WRONG" } else { "" },
                     f.ask,
                     f.reply,
                     f.problems.join("\n  ")
