@@ -811,8 +811,9 @@ impl Lexicon {
                     continue;
                 }
                 // One everyday word alone is the reader's word, not a
-                // misspelt name of a person or group ("how many world
-                // records" is not about Worel Windoss); it may still be a
+                // misspelt name of a person, group, sport or contest ("how
+                // many world records" is not about Worel Windoss, "how many
+                // athletes" not about athletics); it may still be a
                 // misspelt word of the trade ("sliver" for silver).
                 let everyday = width == 1
                     && (english::is_dictionary_word(tokens[i]) || english::is_filler(tokens[i]));
@@ -831,12 +832,7 @@ impl Lexicon {
                 }
                 let mut candidates = self.fuzzy_candidates(&hits);
                 if everyday {
-                    candidates.retain(|(t, _)| {
-                        !matches!(
-                            t,
-                            Target::Entity(EntityRef::Competitor(_) | EntityRef::Group(_), _)
-                        )
-                    });
+                    candidates.retain(|(t, _)| !matches!(t, Target::Entity(..)));
                     if candidates.is_empty() {
                         i += 1;
                         continue;
@@ -972,6 +968,9 @@ mod tests {
         // the reader's own words.
         assert_eq!(spotted(&lex, &d, "how many world records"), vec![]);
         assert_eq!(spotted(&lex, &d, "cheers mate"), vec![]);
+        // "athletes" is close to athletics, but a reader counting athletes
+        // is not asking about the sport.
+        assert_eq!(spotted(&lex, &d, "how many athletes"), vec![]);
         // A misspelling that is not a word is still a name ...
         assert_eq!(
             spotted(&lex, &d, "how many worell windoss"),

@@ -229,9 +229,11 @@ impl Understanding {
             .enumerate()
             .map(|(i, t)| {
                 // Words of general English and topics the data does not
-                // hold are words already, not misspellings.
+                // hold are words already, not misspellings: "wind reading"
+                // is not "wind leading".
                 if covered[i]
                     || english::is_filler(t)
+                    || english::is_dictionary_word(t)
                     || frame::is_unheld_word(t)
                     || self
                         .vocabulary

@@ -24,6 +24,8 @@ pub static SPEC: OpSpec = OpSpec {
                 "upcoming",
                 "upcoming_count",
                 "next",
+                "upcoming_named",
+                "upcoming_many",
                 "decided_count",
                 "decided_awarding",
                 "sport_name",
@@ -99,6 +101,23 @@ fn run(input: &OpInput) -> OpOutput {
         let when = when_value(&data.facts[c].start, input.now);
         f.put("next", Value::Text(data.contest_name(c)).then(" ", &when));
     }
+    // A short list is named in full: "two races, starting with A" leaves
+    // a reader who asked which races are left without B. A long one is
+    // counted, with the next named.
+    if upcoming.len() <= NAME_ALL_UP_TO {
+        let named: Vec<Value> = upcoming
+            .iter()
+            .map(|&c| {
+                let when = when_value(&data.facts[c].start, input.now);
+                Value::Text(data.contest_name(c)).then(" ", &when)
+            })
+            .collect();
+        if !named.is_empty() {
+            f.put("upcoming_named", Value::List(named));
+        }
+    } else {
+        f.put("upcoming_many", Value::Int(upcoming.len() as i64));
+    }
     let mentioned = live
         .iter()
         .chain(upcoming.iter())
@@ -106,6 +125,9 @@ fn run(input: &OpInput) -> OpOutput {
         .collect();
     OpOutput::done("open", f, mentioned)
 }
+
+/// Up to this many contests still to start are each named.
+const NAME_ALL_UP_TO: usize = 4;
 
 #[cfg(test)]
 mod tests {

@@ -1,7 +1,7 @@
 //! `profile`: a competitor's results and awards across the whole scenario,
 //! and their next contest.
 
-use super::support::{medal_facts, status_phrase, when_value};
+use super::support::{mark_value, medal_facts, status_phrase, when_value};
 use super::*;
 use crate::dataset::{EntryStatus, Status};
 
@@ -95,7 +95,13 @@ fn run(input: &OpInput) -> OpOutput {
                 let value = if e.status != EntryStatus::Ok {
                     Value::Text(format!("{} in the {name}", status_phrase(e.status)))
                 } else if let Some(p) = e.place {
-                    Value::ordinal(p as u64).then(" in the ", &Value::Text(name))
+                    let placed = Value::ordinal(p as u64).then(" in the ", &Value::Text(name));
+                    // The mark is what a reader asking "how has she done"
+                    // wants next to the place: 3rd with 6.71 m.
+                    match mark_value(data, ci, ei) {
+                        Some(m) => placed.then(" with ", &m),
+                        None => placed,
+                    }
                 } else {
                     continue;
                 };
