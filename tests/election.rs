@@ -224,8 +224,11 @@ fn election_server() -> ServeProcess {
             data.to_str().unwrap(),
             "--intents",
             intents.to_str().unwrap(),
-            // One reader asks the whole night's questions in a burst.
+            // One reader asks the whole night's questions in a burst, all
+            // from one address: a fast build outruns the per-source limit.
             "--reader-rate",
+            "0",
+            "--source-rate",
             "0",
         ],
         &[("TIDINGS_ADMIN_TOKEN", TOKEN)],
@@ -361,9 +364,22 @@ async fn check_moment(
             w.name
         );
     }
-    if not_started > 0 {
+    if not_started > 4 {
         let want = format!("Not started yet: {}", count(not_started, "race"));
         assert!(t.contains(&want), "{moment}: wanted {want:?} in {t:?}");
+    } else if not_started > 0 {
+        // A few are each named, so none is left out of "which are left".
+        let rest = t
+            .split_once("Not started yet: ")
+            .map(|x| x.1)
+            .unwrap_or_default();
+        for w in truth.wards.values().filter(|w| w.status == "scheduled") {
+            assert!(
+                rest.contains(&w.name),
+                "{moment}: {} not named as not started: {t}",
+                w.name
+            );
+        }
     } else {
         assert!(!t.contains("Not started"), "{moment}: {t}");
     }

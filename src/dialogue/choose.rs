@@ -16,6 +16,7 @@ use crate::answers::ops::{EntityKind, SlotValue};
 use crate::catalog::{Catalog, Intent};
 use crate::dataset::{Dataset, EntityRef};
 use crate::understand::classify::{MIN_SCORE, MIN_SCORE_TO_ASK};
+use crate::understand::english;
 use crate::understand::frame::{Focus, Place};
 use crate::understand::lexicon::{Mention, Target};
 use crate::understand::slots::{Filled, Need};
@@ -114,6 +115,15 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
                 focus_gap.get_or_insert(intent);
                 continue;
             }
+        }
+        // "there" points at the event just talked about: an intent that
+        // takes no event would answer about everywhere ("how many votes do
+        // the Greens have there" is not their seat total).
+        if points_there(&a.tokens)
+            && has_last_contest(s)
+            && !intent.slots.iter().any(|d| d.kind == EntityKind::Contest)
+        {
+            continue;
         }
         let filled = fill_in_context(data, s, intent, a);
         // Asking back on a weak match risks a question about nothing; a
@@ -293,8 +303,41 @@ pub fn stray_words(data: &Dataset, a: &Analysis, filled: &Filled) -> Vec<usize> 
     };
     un.iter()
         .copied()
-        .filter(|&i| !no_match && !beside_name(i) && !slot_words.contains(&a.tokens[i]))
+        // Beside a name, a word that is not English may be the rest of a
+        // misspelt name ("dun varick"); an English word is the reader's
+        // ("how many athletes has Kalvenmark sent").
+        .filter(|&i| {
+            !no_match
+                && !(beside_name(i) && !english::is_dictionary_word(&a.tokens[i]))
+                && !slot_words.contains(&a.tokens[i])
+        })
         .collect()
+}
+
+/// Whether the message uses "there" for a place ("who's ahead there",
+/// "how did she do there now"), not to say something exists ("is there
+/// swimming today", "there are two races left").
+pub fn points_there(tokens: &[String]) -> bool {
+    const AFTER: &[&str] = &[
+        "now",
+        "so",
+        "yet",
+        "then",
+        "too",
+        "tonight",
+        "today",
+        "currently",
+        "right",
+        "at",
+    ];
+    const BEFORE: &[&str] = &["is", "are", "was", "were", "will", "anything", "anyone"];
+    tokens.iter().enumerate().any(|(i, t)| {
+        t == "there"
+            && (i == 0 || !BEFORE.contains(&tokens[i - 1].as_str()))
+            && tokens
+                .get(i + 1)
+                .is_none_or(|n| AFTER.contains(&n.as_str()))
+    })
 }
 
 /// Whether the last answer was about an event.
@@ -535,6 +578,16 @@ fn mention_words(data: &Dataset, a: &Analysis, m: &Mention) -> String {
 
 #[cfg(test)]
 mod tests {
+    #[test]
+    fn there_as_a_place_and_as_existence() {
+        let t = |s: &str| super::points_there(&s.split(' ').map(String::from).collect::<Vec<_>>());
+        assert!(t("how many votes do the greens have there"));
+        assert!(t("whos ahead there now"));
+        assert!(!t("is there swimming today"));
+        assert!(!t("there are two races left"));
+        assert!(!t("are there any results"));
+    }
+
     use super::*;
     use crate::engine::{load, Sources};
 

@@ -372,6 +372,26 @@ const UNHELD: &[(&[&str], &str)] = &[
     (&["drug", "test"], "doping cases"),
     (&["polls"], "opinion polls"),
     (&["poll"], "opinion polls"),
+    (&["last", "games"], "results from earlier editions"),
+    (&["previous", "games"], "results from earlier editions"),
+    (&["past", "games"], "results from earlier editions"),
+    (&["last", "edition"], "results from earlier editions"),
+    (&["previous", "edition"], "results from earlier editions"),
+    (&["last", "election"], "results from earlier editions"),
+    (&["previous", "election"], "results from earlier editions"),
+    (&["years", "ago"], "results from earlier editions"),
+    (&["last", "year"], "results from earlier editions"),
+    (&["remind", "me"], "alerts (I answer when asked)"),
+    (&["notify", "me"], "alerts (I answer when asked)"),
+    (&["ping", "me"], "alerts (I answer when asked)"),
+    (&["alert", "me"], "alerts (I answer when asked)"),
+    (&["text", "me"], "alerts (I answer when asked)"),
+    (
+        &["let", "me", "know", "when"],
+        "alerts (I answer when asked)",
+    ),
+    (&["wind"], "wind readings"),
+    (&["windy"], "weather forecasts"),
     (&["parking"], "travel and parking"),
     (&["bus"], "travel and parking"),
     (&["train"], "travel and parking"),
@@ -1070,6 +1090,12 @@ fn focus(
         || has("tally")
         || has("total")
     {
+        // "How many votes did she get" asks for her mark, as "what time did
+        // she run" does; "how many medals" counts things won.
+        if t0 == "how" && t1 == "many" && matches!(tokens.get(2).copied(), Some("votes" | "points"))
+        {
+            return some(Focus::Mark, &["how", "many", "votes", "points"]);
+        }
         return some(Focus::Count, &["how", "many", "number", "tally", "total"]);
     }
     // A group's place in a table.
@@ -1336,6 +1362,7 @@ mod tests {
         assert_eq!(f("how far ahead is he"), Some(Focus::Margin));
         assert_eq!(f("what is the margin"), Some(Focus::Margin));
         assert_eq!(f("how many medals"), Some(Focus::Count));
+        assert_eq!(f("how many votes did she get"), Some(Focus::Mark));
         assert_eq!(f("how much is counted"), Some(Focus::Status));
         assert_eq!(f("how many are in so far"), Some(Focus::Status));
         assert_eq!(
@@ -1359,6 +1386,26 @@ mod tests {
         assert_eq!(f("winning score in the final"), Some(Focus::Mark));
         assert_eq!(f("who had the fastest time"), Some(Focus::Who));
         assert_eq!(f("hello"), None);
+    }
+
+    #[test]
+    fn earlier_editions_and_alerts_are_not_held() {
+        let u = |s: &str| frame(s).unheld.map(|u| u.what);
+        assert_eq!(
+            u("who won the 100 m at the last games").as_deref(),
+            Some("results from earlier editions")
+        );
+        assert_eq!(
+            u("how did harbour do four years ago").as_deref(),
+            Some("results from earlier editions")
+        );
+        assert!(
+            u("can you ping me when the final is done").is_some_and(|w| w.starts_with("alerts"))
+        );
+        assert!(u("let me know when marrowby declares").is_some_and(|w| w.starts_with("alerts")));
+        // "last" alone is a place or the latest, not an earlier edition.
+        assert_eq!(u("who came last in the 400 m"), None);
+        assert_eq!(u("what was the last race"), None);
     }
 
     #[test]

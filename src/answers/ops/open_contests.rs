@@ -164,6 +164,43 @@ mod tests {
     }
 
     #[test]
+    fn a_few_contests_to_come_are_named_many_are_counted() {
+        let d = demo();
+        // The demo games have more than four still to come: counted.
+        let (_, f) = facts(&d, &Slots::new());
+        assert!(f.get("upcoming_named").is_none());
+        assert_eq!(f["upcoming_many"], f["upcoming_count"]);
+        // With two left, both are named, each with its start.
+        let mut r = crate::dataset::changes::Records::of(&d);
+        let mut kept = 0;
+        for c in r
+            .contests
+            .iter_mut()
+            .filter(|c| c.status == Status::Scheduled)
+        {
+            kept += 1;
+            if kept > 2 {
+                c.status = Status::Final;
+                for e in c.entries.iter_mut() {
+                    e.place = None;
+                    e.mark = None;
+                    e.award = None;
+                }
+            }
+        }
+        let Ok(d) = r.build(2) else {
+            panic!("the records load")
+        };
+        let (_, f) = facts(&d, &Slots::new());
+        assert!(f.get("upcoming_many").is_none());
+        let named = f["upcoming_named"].render(Style::Text);
+        for c in d.contests.iter().filter(|c| c.status == Status::Scheduled) {
+            let ci = d.contests.iter().position(|x| x.id == c.id).unwrap();
+            assert!(named.contains(&d.contest_name(ci)), "{named}");
+        }
+    }
+
+    #[test]
     fn every_contest_over_is_all_over() {
         let d = demo();
         let mut r = crate::dataset::changes::Records::of(&d);
