@@ -308,7 +308,7 @@ pub fn stray_words(data: &Dataset, a: &Analysis, filled: &Filled) -> Vec<usize> 
         // ("how many athletes has Kalvenmark sent").
         .filter(|&i| {
             !no_match
-                && !(beside_name(i) && !english::is_dictionary_word(&a.tokens[i]))
+                && (!beside_name(i) || english::is_dictionary_word(&a.tokens[i]))
                 && !slot_words.contains(&a.tokens[i])
         })
         .collect()
