@@ -168,7 +168,7 @@ mod tests {
         let d = demo();
         // The demo games have more than four still to come: counted.
         let (_, f) = facts(&d, &Slots::new());
-        assert!(f.get("upcoming_named").is_none());
+        assert!(!f.contains_key("upcoming_named"));
         assert_eq!(f["upcoming_many"], f["upcoming_count"]);
         // With two left, both are named, each with its start.
         let mut r = crate::dataset::changes::Records::of(&d);
@@ -192,7 +192,7 @@ mod tests {
             panic!("the records load")
         };
         let (_, f) = facts(&d, &Slots::new());
-        assert!(f.get("upcoming_many").is_none());
+        assert!(!f.contains_key("upcoming_many"));
         let named = f["upcoming_named"].render(Style::Text);
         for c in d.contests.iter().filter(|c| c.status == Status::Scheduled) {
             let ci = d.contests.iter().position(|x| x.id == c.id).unwrap();
