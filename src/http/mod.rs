@@ -1,7 +1,8 @@
 //! The HTTP API: `POST /v1/messages`, `DELETE /v1/users/{channel}/{user}`,
 //! `GET /healthz` (the process is up) and `GET /readyz` (and its session
 //! store answers); the admin API ([`admin`]) under `/v1/admin/`; the
-//! editors' desk page ([`desk`]) at `/desk`.
+//! editors' desk page ([`desk`]) at `/desk`; the counters for a
+//! Prometheus scraper at `/metrics`.
 //!
 //! Errors come back as `{"error": {"code", "message"}}`; a reader's mistake
 //! is never a 500.
@@ -12,6 +13,7 @@ mod desk;
 mod error;
 pub mod keys;
 pub mod limit;
+mod metrics;
 pub mod queue;
 mod serve;
 pub mod signature;
@@ -351,6 +353,7 @@ pub fn app(engine: Engine) -> Router {
 pub fn app_with(engine: Engine, edge: &Edge) -> Router {
     let state = Arc::new(EdgeState::new(edge));
     let engine_for_keys = engine.clone();
+    let engine_for_metrics = engine.clone();
     Router::new()
         .route("/v1/messages", post(messages))
         .route("/v1/users/{channel}/{user}", delete(erase_user))
@@ -358,6 +361,7 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
         .route("/readyz", get(readyz))
         .merge(admin::routes())
         .merge(desk::routes())
+        .merge(metrics::routes())
         .fallback(not_found)
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)
@@ -391,6 +395,11 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
                 .unwrap_or_default();
             tracing::info_span!("request", method = %req.method(), route = %route)
         }))
+        // Outermost: every answer is counted, the limits' and timeouts' too.
+        .layer(axum::middleware::from_fn_with_state(
+            engine_for_metrics,
+            metrics::count,
+        ))
 }
 
 /// Serves the API on `listener` with the default connection limits and no
