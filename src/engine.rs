@@ -663,13 +663,18 @@ impl Engine {
         let store = Arc::clone(&self.store);
         let notes = reply.unanswered.clone();
         let key = key.to_string();
-        tokio::spawn(async move {
-            for (text, kind) in notes {
-                if let Err(e) = store.note_unanswered(&key, &text, kind).await {
-                    tracing::debug!(error = %e, "unanswered question not noted");
+        // In the request's span, so its lines still name the request.
+        let span = tracing::Span::current();
+        tokio::spawn(tracing::Instrument::instrument(
+            async move {
+                for (text, kind) in notes {
+                    if let Err(e) = store.note_unanswered(&key, &text, kind).await {
+                        tracing::debug!(error = %e, "unanswered question not noted");
+                    }
                 }
-            }
-        });
+            },
+            span,
+        ));
     }
 
     /// The most asked questions that got no answer, most frequent first.

@@ -15,6 +15,7 @@ pub mod keys;
 pub mod limit;
 mod metrics;
 pub mod queue;
+pub mod request_id;
 mod serve;
 pub mod signature;
 
@@ -393,13 +394,20 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
                 .get::<MatchedPath>()
                 .map(|p| p.as_str().to_string())
                 .unwrap_or_default();
-            tracing::info_span!("request", method = %req.method(), route = %route)
+            let id = req
+                .extensions()
+                .get::<request_id::RequestId>()
+                .map(|r| r.0.as_str())
+                .unwrap_or_default();
+            tracing::info_span!("request", method = %req.method(), route = %route, request_id = %id)
         }))
         // Outermost: every answer is counted, the limits' and timeouts' too.
         .layer(axum::middleware::from_fn_with_state(
             engine_for_metrics,
             metrics::count,
         ))
+        // Outside the trace span, which records the id it hands in.
+        .layer(axum::middleware::from_fn(request_id::tag))
 }
 
 /// Serves the API on `listener` with the default connection limits and no
