@@ -15,6 +15,7 @@ pub mod keys;
 pub mod limit;
 mod metrics;
 pub mod queue;
+pub mod reply;
 pub mod request_id;
 mod serve;
 pub mod signature;
@@ -232,6 +233,10 @@ pub struct MessageIn {
     /// The platform's id for this message; retries carry the same id.
     #[serde(default)]
     pub message_id: Option<String>,
+    /// Whether the reply should carry `candidates` and `facts`, which
+    /// explain it (for the desk, tuning and checking).
+    #[serde(default)]
+    pub explain: bool,
 }
 
 async fn messages(
@@ -284,7 +289,13 @@ async fn messages(
         "tidings-repeated",
         if answer.repeated { "true" } else { "false" },
     )];
-    Ok((repeated, Json(answer)))
+    Ok((
+        repeated,
+        Json(reply::Sent {
+            answer,
+            explain: m.explain,
+        }),
+    ))
 }
 
 /// Erases everything kept for a reader: 204 whether or not anything was
