@@ -58,9 +58,19 @@ impl Family {
     }
 
     fn add(&self, labels: &str, n: u64) {
-        if let Some(c) = self.series.load().get(labels) {
-            c.fetch_add(n, Ordering::Relaxed);
-            return;
+        {
+            let map = self.series.load();
+            // A full family goes straight to `other`, without copying the
+            // map on every call.
+            let c = map.get(labels).or_else(|| {
+                (map.len() >= MAX_SERIES)
+                    .then(|| map.get(self.overflow))
+                    .flatten()
+            });
+            if let Some(c) = c {
+                c.fetch_add(n, Ordering::Relaxed);
+                return;
+            }
         }
         self.series.rcu(|map| {
             let mut map = HashMap::clone(map);
