@@ -91,6 +91,11 @@ pub struct SessionOptions {
     /// admin API is off.
     #[arg(long, env = "TIDINGS_ADMIN_TOKEN", hide_env_values = true)]
     pub admin_token: Option<String>,
+    /// Bearer token for GET /metrics (the admin token is taken as well);
+    /// with neither, metrics are off. A token of its own, so a scraper's
+    /// credential cannot change the data.
+    #[arg(long, env = "TIDINGS_METRICS_TOKEN", hide_env_values = true)]
+    pub metrics_token: Option<String>,
 }
 
 impl SessionOptions {
@@ -107,6 +112,7 @@ impl SessionOptions {
             stale_after: 600,
             max_removed_share: 0.5,
             admin_token: None,
+            metrics_token: None,
         }
     }
 }
@@ -405,6 +411,14 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
     {
         return Err("--admin-token must be at least 16 characters: use a long random value".into());
     }
+    if o.metrics_token
+        .as_deref()
+        .is_some_and(|t| !t.is_empty() && t.len() < 16)
+    {
+        return Err(
+            "--metrics-token must be at least 16 characters: use a long random value".into(),
+        );
+    }
     if o.redis_url.is_some() && configured_secret().is_none() {
         // With a random key per process, replicas would not find each
         // other's sessions, and after a restart an erasure would miss the
@@ -418,6 +432,7 @@ pub fn build_engine(c: &Common, o: &SessionOptions) -> Result<Engine, String> {
         retry_window: Duration::from_secs(o.retry_window.max(1)),
         id_secret: id_secret(),
         admin_token: o.admin_token.clone().filter(|t| !t.is_empty()),
+        metrics_token: o.metrics_token.clone().filter(|t| !t.is_empty()),
         stale_after: Duration::from_secs(o.stale_after),
         max_removed_share: o.max_removed_share.clamp(0.0, 1.0),
     };

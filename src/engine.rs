@@ -149,6 +149,9 @@ pub struct Settings {
     pub id_secret: Vec<u8>,
     /// The admin API's bearer token; `None` turns the admin API off.
     pub admin_token: Option<String>,
+    /// The bearer token of `GET /metrics` (the admin token is taken as
+    /// well); with neither set, metrics are off.
+    pub metrics_token: Option<String>,
     /// After how long without an update a live contest's figures are said
     /// to be old.
     pub stale_after: Duration,
@@ -166,6 +169,7 @@ impl std::fmt::Debug for Settings {
             .field("retry_window", &self.retry_window)
             .field("stale_after", &self.stale_after)
             .field("admin_api", &self.admin_token.is_some())
+            .field("metrics", &self.metrics_token.is_some())
             .finish_non_exhaustive()
     }
 }
@@ -180,6 +184,7 @@ impl Settings {
             retry_window: Duration::from_secs(600),
             id_secret,
             admin_token: None,
+            metrics_token: None,
             stale_after: Duration::from_secs(600),
             max_removed_share: 0.5,
         }
@@ -284,6 +289,8 @@ pub struct Engine {
     // The last reload problem, for the admin status. A std mutex: it is set
     // and read in one short step, never across an await.
     reload_error: Arc<std::sync::Mutex<Option<String>>>,
+    /// What `GET /metrics` reports.
+    metrics: Arc<crate::metrics::Metrics>,
 }
 
 /// Why a change to the data was not applied.
@@ -316,6 +323,13 @@ impl std::fmt::Debug for Engine {
 impl Engine {
     /// An engine over a loaded snapshot.
     pub fn new(snapshot: Snapshot, store: Arc<dyn SessionStore>, settings: Settings) -> Engine {
+        let metrics = Arc::new(crate::metrics::Metrics::new());
+        // Every call to the store is counted on its way through, whichever
+        // part of the engine makes it.
+        let store = Arc::new(crate::metrics::CountedStore::new(
+            store,
+            Arc::clone(&metrics),
+        ));
         Engine {
             snapshot: Arc::new(ArcSwap::from_pointee(snapshot)),
             store,
@@ -324,6 +338,38 @@ impl Engine {
             shared: None,
             shared_seen: Arc::new(AtomicU64::new(0)),
             reload_error: Arc::new(std::sync::Mutex::new(None)),
+            metrics,
+        }
+    }
+
+    /// The counters behind `GET /metrics`.
+    pub fn metrics(&self) -> &crate::metrics::Metrics {
+        &self.metrics
+    }
+
+    /// `GET /metrics` as text: the counters and the dataset's version and
+    /// age on the engine's clock.
+    pub fn metrics_text(&self) -> String {
+        let snap = self.snapshot();
+        let now = self.now(&snap.data);
+        self.metrics.render(&crate::metrics::Gauges {
+            dataset_version: snap.data.version,
+            dataset_age_seconds: now.timestamp().as_second() - snap.data.as_of.as_second(),
+            store_round_trips: self.store.round_trips(),
+        })
+    }
+
+    /// Whether `token` may read `GET /metrics`: the metrics token or the
+    /// admin token; `None` when neither is set (metrics are off).
+    pub fn metrics_allows(&self, token: &str) -> Option<bool> {
+        let own = self
+            .settings
+            .metrics_token
+            .as_deref()
+            .map(|want| same_secret(want, token));
+        match (own, self.admin_allows(token)) {
+            (None, None) => None,
+            (a, b) => Some(a == Some(true) || b == Some(true)),
         }
     }
 
@@ -433,6 +479,7 @@ impl Engine {
     /// Records the outcome of a reload from files: `Some(problem)` keeps
     /// the last good version serving and shows the problem in the status.
     pub fn set_reload_error(&self, problem: Option<String>) {
+        self.metrics.reload(problem.is_some());
         *self.reload_error.lock().unwrap_or_else(|p| p.into_inner()) = problem;
     }
 
@@ -501,6 +548,21 @@ impl Engine {
     /// cannot be reached the message is answered on its own, marked
     /// `degraded`.
     pub async fn handle_message(&self, m: Incoming<'_>) -> Result<Answer, EngineError> {
+        let started = std::time::Instant::now();
+        let result = self.handle_counted(m).await;
+        // A retry is answered from the first reply: not a turn of its own.
+        if let Some(a) = result.as_ref().ok().filter(|a| !a.repeated) {
+            self.metrics.turn(
+                a.reply.intent.as_deref(),
+                a.reply.outcome,
+                a.degraded,
+                started.elapsed(),
+            );
+        }
+        result
+    }
+
+    async fn handle_counted(&self, m: Incoming<'_>) -> Result<Answer, EngineError> {
         let ch = self.channel(m.channel)?;
         let key = self.user_key(ch, m.user);
         let message = m.message_id.map(|id| self.message_key(id));
@@ -601,13 +663,18 @@ impl Engine {
         let store = Arc::clone(&self.store);
         let notes = reply.unanswered.clone();
         let key = key.to_string();
-        tokio::spawn(async move {
-            for (text, kind) in notes {
-                if let Err(e) = store.note_unanswered(&key, &text, kind).await {
-                    tracing::debug!(error = %e, "unanswered question not noted");
+        // In the request's span, so its lines still name the request.
+        let span = tracing::Span::current();
+        tokio::spawn(tracing::Instrument::instrument(
+            async move {
+                for (text, kind) in notes {
+                    if let Err(e) = store.note_unanswered(&key, &text, kind).await {
+                        tracing::debug!(error = %e, "unanswered question not noted");
+                    }
                 }
-            }
-        });
+            },
+            span,
+        ));
     }
 
     /// The most asked questions that got no answer, most frequent first.
@@ -692,8 +759,11 @@ impl Engine {
         if self.settings.clock == Clock::System && self.snapshot().data.clock.is_none() {
             changes::check_not_ahead(batch, Timestamp::now()).map_err(ChangeError::Invalid)?;
         }
-        self.change(|data, now| changes::apply(data, batch, now))
-            .await
+        let result = self
+            .change(|data, now| changes::apply(data, batch, now))
+            .await;
+        self.metrics.batch(change_result(&result));
+        result
     }
 
     /// Replaces the whole dataset with checked records; the version moves
@@ -706,15 +776,20 @@ impl Engine {
         records: Records,
         force: bool,
     ) -> Result<u64, ChangeError> {
-        if !force {
+        let result = if force {
+            self.replace_records(records).await
+        } else {
             let current = Records::of(&self.snapshot().data);
             let problems =
                 changes::removes_too_much(&current, &records, self.settings.max_removed_share);
-            if !problems.is_empty() {
-                return Err(ChangeError::Invalid(problems));
+            if problems.is_empty() {
+                self.replace_records(records).await
+            } else {
+                Err(ChangeError::Invalid(problems))
             }
-        }
-        self.replace_records(records).await
+        };
+        self.metrics.replacement(change_result(&result));
+        result
     }
 
     pub async fn replace_records(&self, records: Records) -> Result<u64, ChangeError> {
@@ -816,24 +891,11 @@ impl Engine {
         })
     }
 
-    /// Whether `token` is the admin token. Both are hashed first and the
-    /// digests compared in constant time, so neither the token's content
-    /// nor its length shows in how long a wrong guess takes.
+    /// Whether `token` is the admin token (compared as [`same_secret`]
+    /// does, in constant time); `None` when the admin API is off.
     pub fn admin_allows(&self, token: &str) -> Option<bool> {
         let want = self.settings.admin_token.as_deref()?;
-        let digest = |s: &str| {
-            let mut mac = Hmac::<Sha256>::new_from_slice(b"tidings admin token")
-                .expect("HMAC takes keys of any length");
-            mac.update(s.as_bytes());
-            mac.finalize().into_bytes()
-        };
-        let (a, b) = (digest(want), digest(token));
-        Some(
-            a.iter()
-                .zip(b.iter())
-                .fold(0u8, |acc, (x, y)| acc | (x ^ y))
-                == 0,
-        )
+        Some(same_secret(want, token))
     }
 
     /// The channel's name, checked against the profiles in force.
@@ -867,6 +929,35 @@ impl Engine {
     /// Whether the session store answers, and its name.
     pub async fn store_status(&self) -> (&'static str, Result<(), StoreError>) {
         (self.store.name(), self.store.ping().await)
+    }
+}
+
+/// Whether `token` is `want`. Both are hashed first and the digests
+/// compared in constant time, so neither the secret's content nor its
+/// length shows in how long a wrong guess takes.
+fn same_secret(want: &str, token: &str) -> bool {
+    let digest = |s: &str| {
+        let mut mac = Hmac::<Sha256>::new_from_slice(b"tidings admin token")
+            .expect("HMAC takes keys of any length");
+        mac.update(s.as_bytes());
+        mac.finalize().into_bytes()
+    };
+    let (a, b) = (digest(want), digest(token));
+    a.iter()
+        .zip(b.iter())
+        .fold(0u8, |acc, (x, y)| acc | (x ^ y))
+        == 0
+}
+
+/// How a change to the data ended, as the metrics count it.
+fn change_result<T>(r: &Result<T, ChangeError>) -> crate::metrics::ChangeResult {
+    use crate::metrics::ChangeResult as C;
+    match r {
+        Ok(_) => C::Applied,
+        Err(ChangeError::Invalid(_)) => C::Invalid,
+        Err(ChangeError::Shared(_)) => C::NotShared,
+        Err(ChangeError::Busy) => C::Busy,
+        Err(ChangeError::Unknown(_)) => C::Unknown,
     }
 }
 

@@ -24,6 +24,7 @@
 //!   checking editors' files (`tidings check PATHS`). [`replay`]: feeding
 //!   a night's change batches to a running server (`tidings replay`).
 //!   [`log_gate`]: one log line per interval for faults that repeat.
+//!   [`metrics`]: what the service counts about itself (`GET /metrics`).
 //!   [`privacy`]: masking personal data in readers' words before any is kept.
 //!
 //! # Quick example
@@ -54,6 +55,7 @@ pub mod engine;
 pub mod eval;
 pub mod http;
 pub mod log_gate;
+pub mod metrics;
 pub mod privacy;
 pub mod replay;
 pub mod scripts;

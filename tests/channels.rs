@@ -325,8 +325,11 @@ async fn each_channel_phrases_every_intent() {
             let r = server
                 .client
                 .post(server.url("/v1/messages"))
+                // With the explanation: the library's `Answer`, read back
+                // here, is the whole answer.
                 .json(&serde_json::json!({
-                    "user": format!("snap-{intent}-{channel}"), "text": ask, "channel": channel
+                    "user": format!("snap-{intent}-{channel}"), "text": ask, "channel": channel,
+                    "explain": true
                 }))
                 .send()
                 .await

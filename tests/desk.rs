@@ -640,14 +640,20 @@ async fn settled_turn(c: &Client, before: u64) -> Value {
 
 /// Asks the API directly, as a reader of its own on `channel`.
 async fn ask_api(http: &reqwest::Client, base: &str, channel: &str, text: &str) -> Value {
-    common::ask_on(
-        http,
-        base,
-        &format!("desk-test-api-{channel}"),
-        text,
-        channel,
-    )
-    .await
+    // With the explanation, as the page asks for it.
+    let r = http
+        .post(format!("{base}/v1/messages"))
+        .json(&json!({
+            "user": format!("desk-test-api-{channel}"),
+            "text": text,
+            "channel": channel,
+            "explain": true,
+        }))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 200, "{text:?} on {channel}");
+    r.json().await.unwrap()
 }
 
 /// Saves a screenshot under `target/desk-test/` and checks that it renders:

@@ -396,6 +396,7 @@ async fn a_listed_origin_gets_its_preflight_answered_and_others_get_no_cors_head
         .to_str()
         .unwrap();
     assert!(exposed.contains("tidings-repeated"), "{exposed}");
+    assert!(exposed.contains("x-request-id"), "{exposed}");
     // Refusals carry the headers too, so the widget can read the error.
     let r = s
         .client

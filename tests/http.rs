@@ -6,7 +6,7 @@ use common::{demo_engine, Server};
 use serde_json::json;
 
 #[tokio::test]
-async fn a_question_gets_an_answer_with_its_facts_and_version() {
+async fn a_question_gets_an_answer_with_its_version() {
     let s = Server::start(demo_engine()).await;
     let (status, body) = s.ask("reader-1", "Who won the men's 100m?").await;
     assert_eq!(status, 200);
@@ -21,12 +21,81 @@ async fn a_question_gets_an_answer_with_its_facts_and_version() {
     assert_eq!(body["dataset_version"], 1);
     assert_eq!(body["as_of"], "2027-08-14T21:04:00+01:00");
     assert!(body["confidence"].as_f64().unwrap() > 0.5);
+    // What explains the reply only when asked for.
+    assert!(body.get("candidates").is_none(), "{body}");
+    assert!(body.get("facts").is_none(), "{body}");
+}
+
+/// A message with `"explain": true`.
+async fn ask_explained(
+    s: &Server,
+    user: &str,
+    text: &str,
+    message_id: Option<&str>,
+) -> (u16, serde_json::Value) {
+    let mut body = json!({"user": user, "text": text, "explain": true});
+    if let Some(id) = message_id {
+        body["message_id"] = json!(id);
+    }
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&body)
+        .send()
+        .await
+        .unwrap();
+    (r.status().as_u16(), r.json().await.unwrap())
+}
+
+#[tokio::test]
+async fn asked_to_explain_a_reply_carries_its_candidates_and_facts() {
+    let s = Server::start(demo_engine()).await;
+    let (status, body) = ask_explained(&s, "reader-1", "Who won the men's 100m?", None).await;
+    assert_eq!(status, 200);
+    assert_eq!(body["intent"], "podium");
     assert_eq!(body["candidates"][0]["intent"], "podium");
     assert!(body["candidates"][0]["shared"]
         .as_array()
         .unwrap()
         .iter()
         .any(|w| w == "won"));
+    assert_eq!(
+        body["facts"]["gold"][0]["text"], "Wonorin Galkace (Quessary)",
+        "{body}"
+    );
+    // `false` is the default, said out loud.
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&json!({"user": "reader-1b", "text": "medal table", "explain": false}))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 200);
+    let body: serde_json::Value = r.json().await.unwrap();
+    assert!(body.get("candidates").is_none() && body.get("facts").is_none());
+    // Not a boolean: the reader's client is told, no 500.
+    let r = s
+        .client
+        .post(s.url("/v1/messages"))
+        .json(&json!({"user": "reader-1c", "text": "medal table", "explain": "yes"}))
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+}
+
+#[tokio::test]
+async fn a_retry_may_ask_for_the_explanation_of_the_first_reply() {
+    let s = Server::start(demo_engine()).await;
+    let (_, first, repeated) =
+        common::post_message(&s, "reader-r", "who won the men's 100 m?", Some("m-1")).await;
+    assert!(!repeated);
+    assert!(first.get("candidates").is_none());
+    let (_, again) = ask_explained(&s, "reader-r", "who won the men's 100 m?", Some("m-1")).await;
+    assert_eq!(again["text"], first["text"]);
+    assert_eq!(again["candidates"][0]["intent"], "podium", "{again}");
+    assert!(again["facts"]["gold"].is_array(), "{again}");
 }
 
 #[tokio::test]

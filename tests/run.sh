@@ -28,6 +28,16 @@ if [ ${#need_pkgs[@]} -gt 0 ]; then
   DEBIAN_FRONTEND=noninteractive $SUDO apt-get install -y -qq "${need_pkgs[@]}" >/dev/null
 fi
 
+# prometheus_client (PyPI, the Prometheus project's Python client) in a venv of
+# its own: its parser of the text format reads GET /metrics in tests/metrics.rs.
+metrics_venv="${TIDINGS_METRICS_VENV:-${XDG_CACHE_HOME:-$HOME/.cache}/tidings-metrics-venv}"
+if ! "$metrics_venv/bin/python" -c 'import prometheus_client.parser' >/dev/null 2>&1; then
+  echo "tests/run.sh: installing prometheus_client into $metrics_venv"
+  python3 -m venv "$metrics_venv"
+  "$metrics_venv/bin/pip" install -q --disable-pip-version-check prometheus_client
+fi
+export TIDINGS_METRICS_PYTHON="$metrics_venv/bin/python"
+
 # A free port: ask the kernel for one, then hand it to redis-server.
 port=$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1]); s.close()')
 redis_dir=$(mktemp -d)

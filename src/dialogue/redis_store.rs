@@ -809,6 +809,10 @@ impl SessionStore for RedisStore {
     fn name(&self) -> &'static str {
         "redis"
     }
+
+    fn round_trips(&self) -> Option<u64> {
+        Some(RedisStore::round_trips(self))
+    }
 }
 
 #[cfg(test)]

@@ -145,6 +145,12 @@ pub trait SessionStore: Send + Sync + 'static {
 
     /// A short name for logs and status.
     fn name(&self) -> &'static str;
+
+    /// How many network round trips the store has made, for a store that
+    /// makes any (one in this process's memory makes none).
+    fn round_trips(&self) -> Option<u64> {
+        None
+    }
 }
 
 /// The version a reader's first session starts at: random, not 1. After an

@@ -27,39 +27,7 @@ impl FromRequestParts<Engine> for Admin {
     type Rejection = ApiError;
 
     async fn from_request_parts(parts: &mut Parts, engine: &Engine) -> Result<Admin, ApiError> {
-        let token = parts
-            .headers
-            .get(header::AUTHORIZATION)
-            .and_then(|v| v.to_str().ok())
-            // The scheme name is case-insensitive (RFC 7235 §2.1).
-            .and_then(|v| {
-                v.get(..7)
-                    .filter(|s| s.eq_ignore_ascii_case("bearer "))
-                    .map(|_| &v[7..])
-            })
-            .unwrap_or("");
-        // Failed logins are limited per source address, checked before
-        // the token is: once a source has used up its failures, even the
-        // right token waits, so guessing runs at the limit's pace.
-        let limiter = parts
-            .extensions
-            .get::<std::sync::Arc<super::EdgeState>>()
-            .cloned();
-        let src = super::source(&parts.extensions);
-        if let (Some(edge), Some(src)) = (&limiter, &src) {
-            if let Err(wait) = edge.admin_failures.check(src, edge.rates.admin_failures) {
-                return Err(ApiError::rate_limited(
-                    "this address after failed admin logins",
-                    wait,
-                ));
-            }
-        }
-        let allowed = engine.admin_allows(token);
-        if allowed == Some(false) {
-            if let (Some(edge), Some(src)) = (&limiter, &src) {
-                let _ = edge.admin_failures.take(src, edge.rates.admin_failures);
-            }
-        }
+        let allowed = check_bearer(parts, |token| engine.admin_allows(token))?;
         match allowed {
             None => Err(ApiError {
                 status: StatusCode::FORBIDDEN,
@@ -76,6 +44,47 @@ impl FromRequestParts<Engine> for Admin {
             }),
         }
     }
+}
+
+/// The bearer token of a request as `allows` judges it (`None`: nothing
+/// to check it against). Failed logins are limited per source address,
+/// checked before the token is: once a source has used up its failures,
+/// even the right token waits, so guessing runs at the limit's pace.
+pub(super) fn check_bearer(
+    parts: &Parts,
+    allows: impl Fn(&str) -> Option<bool>,
+) -> Result<Option<bool>, ApiError> {
+    let token = parts
+        .headers
+        .get(header::AUTHORIZATION)
+        .and_then(|v| v.to_str().ok())
+        // The scheme name is case-insensitive (RFC 7235 §2.1).
+        .and_then(|v| {
+            v.get(..7)
+                .filter(|s| s.eq_ignore_ascii_case("bearer "))
+                .map(|_| &v[7..])
+        })
+        .unwrap_or("");
+    let limiter = parts
+        .extensions
+        .get::<std::sync::Arc<super::EdgeState>>()
+        .cloned();
+    let src = super::source(&parts.extensions);
+    if let (Some(edge), Some(src)) = (&limiter, &src) {
+        if let Err(wait) = edge.admin_failures.check(src, edge.rates.admin_failures) {
+            return Err(ApiError::rate_limited(
+                "this address after failed admin logins",
+                wait,
+            ));
+        }
+    }
+    let allowed = allows(token);
+    if allowed == Some(false) {
+        if let (Some(edge), Some(src)) = (&limiter, &src) {
+            let _ = edge.admin_failures.take(src, edge.rates.admin_failures);
+        }
+    }
+    Ok(allowed)
 }
 
 async fn apply_batch(

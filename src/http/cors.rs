@@ -72,11 +72,13 @@ impl Cors {
                     header::AUTHORIZATION,
                     HeaderName::from_static(super::signature::SIGNATURE_HEADER),
                     HeaderName::from_static(super::signature::TIMESTAMP_HEADER),
+                    super::request_id::HEADER,
                 ])
                 // What a widget reads from a reply besides the body.
                 .expose_headers([
                     HeaderName::from_static("tidings-repeated"),
                     header::RETRY_AFTER,
+                    super::request_id::HEADER,
                 ])
                 .max_age(PREFLIGHT_MAX_AGE),
         )

@@ -1,7 +1,8 @@
 //! The HTTP API: `POST /v1/messages`, `DELETE /v1/users/{channel}/{user}`,
 //! `GET /healthz` (the process is up) and `GET /readyz` (and its session
 //! store answers); the admin API ([`admin`]) under `/v1/admin/`; the
-//! editors' desk page ([`desk`]) at `/desk`.
+//! editors' desk page ([`desk`]) at `/desk`; the counters for a
+//! Prometheus scraper at `/metrics`.
 //!
 //! Errors come back as `{"error": {"code", "message"}}`; a reader's mistake
 //! is never a 500.
@@ -12,7 +13,10 @@ mod desk;
 mod error;
 pub mod keys;
 pub mod limit;
+mod metrics;
 pub mod queue;
+pub mod reply;
+pub mod request_id;
 mod serve;
 pub mod signature;
 
@@ -229,6 +233,10 @@ pub struct MessageIn {
     /// The platform's id for this message; retries carry the same id.
     #[serde(default)]
     pub message_id: Option<String>,
+    /// Whether the reply should carry `candidates` and `facts`, which
+    /// explain it (for the desk, tuning and checking).
+    #[serde(default)]
+    pub explain: bool,
 }
 
 async fn messages(
@@ -281,7 +289,13 @@ async fn messages(
         "tidings-repeated",
         if answer.repeated { "true" } else { "false" },
     )];
-    Ok((repeated, Json(answer)))
+    Ok((
+        repeated,
+        Json(reply::Sent {
+            answer,
+            explain: m.explain,
+        }),
+    ))
 }
 
 /// Erases everything kept for a reader: 204 whether or not anything was
@@ -351,6 +365,7 @@ pub fn app(engine: Engine) -> Router {
 pub fn app_with(engine: Engine, edge: &Edge) -> Router {
     let state = Arc::new(EdgeState::new(edge));
     let engine_for_keys = engine.clone();
+    let engine_for_metrics = engine.clone();
     Router::new()
         .route("/v1/messages", post(messages))
         .route("/v1/users/{channel}/{user}", delete(erase_user))
@@ -358,6 +373,7 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
         .route("/readyz", get(readyz))
         .merge(admin::routes())
         .merge(desk::routes())
+        .merge(metrics::routes())
         .fallback(not_found)
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)
@@ -389,8 +405,20 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
                 .get::<MatchedPath>()
                 .map(|p| p.as_str().to_string())
                 .unwrap_or_default();
-            tracing::info_span!("request", method = %req.method(), route = %route)
+            let id = req
+                .extensions()
+                .get::<request_id::RequestId>()
+                .map(|r| r.0.as_str())
+                .unwrap_or_default();
+            tracing::info_span!("request", method = %req.method(), route = %route, request_id = %id)
         }))
+        // Outermost: every answer is counted, the limits' and timeouts' too.
+        .layer(axum::middleware::from_fn_with_state(
+            engine_for_metrics,
+            metrics::count,
+        ))
+        // Outside the trace span, which records the id it hands in.
+        .layer(axum::middleware::from_fn(request_id::tag))
 }
 
 /// Serves the API on `listener` with the default connection limits and no

@@ -234,11 +234,20 @@ impl ServeProcess {
         std::thread::spawn(move || {
             for line in BufReader::new(stderr).lines().map_while(Result::ok) {
                 if line.contains("serving") {
-                    if let Some(addr) = line
+                    // As text (`addr=...`) or as a JSON log line.
+                    let addr = line
                         .split_whitespace()
                         .find_map(|w| w.strip_prefix("addr="))
-                    {
-                        let _ = tx.send(addr.to_string());
+                        .map(str::to_string)
+                        .or_else(|| {
+                            serde_json::from_str::<serde_json::Value>(&line)
+                                .ok()?
+                                .pointer("/fields/addr")?
+                                .as_str()
+                                .map(str::to_string)
+                        });
+                    if let Some(addr) = addr {
+                        let _ = tx.send(addr);
                     }
                 }
                 let mut l = sink.lock().unwrap();
@@ -259,6 +268,11 @@ impl ServeProcess {
             base: format!("http://{addr}"),
             log,
         }
+    }
+
+    /// What the process has logged so far.
+    pub fn log(&self) -> String {
+        self.log.lock().unwrap().clone()
     }
 
     /// Stops the process and returns what it logged.

@@ -244,7 +244,8 @@
       const response = await fetch(location.origin + "/v1/messages", {
         method: "POST",
         headers: { "content-type": "application/json" },
-        body: JSON.stringify({ user: reader, text: question, channel: channel, message_id: "desk-" + randomHex(12) }),
+        // explain: the runner-up intents (candidates) are what this page shows.
+        body: JSON.stringify({ user: reader, text: question, channel: channel, message_id: "desk-" + randomHex(12), explain: true }),
       });
       const body = await readJson(response);
       if (response.ok && body && typeof body.text === "string") {
