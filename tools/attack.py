@@ -84,6 +84,16 @@ def watchdog():
     os._exit(3)
 
 
+def cpu_seconds(pid):
+    """User and system CPU time of a process so far, from /proc (Linux)."""
+    try:
+        with open(f"/proc/{pid}/stat") as f:
+            fields = f.read().rsplit(")", 1)[1].split()
+        return (int(fields[11]) + int(fields[12])) / os.sysconf("SC_CLK_TCK")
+    except (OSError, ValueError, IndexError):
+        return None
+
+
 def free_port(host):
     s = socket.socket()
     s.bind((host, 0))
@@ -557,6 +567,7 @@ def probe_flood(args, fig):
         c.close()
 
     t0 = time.monotonic()
+    cpu0 = cpu_seconds(svc.proc.pid)
     threads = [threading.Thread(target=flooder, args=(k,), daemon=True) for k in range(conns)]
     for t in threads:
         t.start()
@@ -565,6 +576,8 @@ def probe_flood(args, fig):
     for t in threads:
         t.join(timeout=20)
     t1 = time.monotonic()
+    cpu1 = cpu_seconds(svc.proc.pid)
+    load = os.getloadavg()[0]
     time.sleep(0.2)
     victim.stop()
     svc.stop()
@@ -580,6 +593,10 @@ def probe_flood(args, fig):
                     "by_source_limit": by_source,
                     "other": sum(1 for r in flat if r[0] not in (200, 429)),
                     "per_second": round(len(flat) / max(t1 - t0, 1e-9))},
+        # How much of the machine the service itself took: the rest went
+        # to this script's own clients and to whatever else runs there.
+        "service_cpu_s": None if cpu0 is None or cpu1 is None else round(cpu1 - cpu0, 2),
+        "load_average": round(load, 2),
         "victim_before": victim.window(t0 - base_s, t0),
         "victim_during": victim.window(t0, t1),
     }
@@ -588,6 +605,10 @@ def probe_flood(args, fig):
     say(f"  flooder: {fl['requests']} requests ({fl['per_second']}/s), {fl['ok']} answered, "
         f"{fl['status_429']} 429 ({fl['with_retry_after']} with retry-after, "
         f"{fl['by_source_limit']} by the source limit), {fl['other']} other")
+    if f["service_cpu_s"] is not None:
+        cpu_us = f["service_cpu_s"] * 1e6 / max(fl["requests"] + vd["requests"], 1)
+        say(f"  the service used {f['service_cpu_s']} s of CPU in {t1 - t0:.1f} s "
+            f"({cpu_us:.0f} µs a request) on {os.cpu_count()} cores; load average {f['load_average']}")
     say(f"  other client before: p50 {vb['p50_ms']} ms, p99 {vb['p99_ms']} ms; during: "
         f"{vd['ok']}/{vd['requests']} answered, {vd['status_429']} 429, "
         f"p50 {vd['p50_ms']} ms, p99 {vd['p99_ms']} ms")
