@@ -24,8 +24,8 @@ Everything stays on loopback: the service listens on 127.0.0.1 (another
 of the flood come from 127.0.0.2 and 127.0.0.3 so the service sees two
 sources. Counts are capped and the whole run stops itself at 180 s.
 
-    python3 tools/attack.py                 # full run, release binary (~90 s)
-    python3 tools/attack.py --quick         # short timeouts, small counts (~25 s)
+    python3 tools/attack.py                 # full run, release binary (~45 s)
+    python3 tools/attack.py --quick         # short timeouts, small counts (~15 s)
     python3 tools/attack.py --only slow,pii # some probes only
 
 The last line of the output is `FIGURES {json}`, every figure printed
@@ -863,7 +863,7 @@ def main():
                    help="the tidings binary (default: target/release/tidings)")
     p.add_argument("--host", default="127.0.0.1", help="a 127.x address to serve on")
     p.add_argument("--quick", action="store_true",
-                   help="short timeouts and small counts (about 25 s)")
+                   help="short timeouts and small counts (about 15 s)")
     p.add_argument("--only", default=",".join(PROBES), help="probes to run, comma-separated")
     p.add_argument("--slow", type=int, help=f"slow connections (at most {MAX_SLOW})")
     p.add_argument("--extra", type=int, help="connections past the cap")
