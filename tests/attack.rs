@@ -108,6 +108,11 @@ fn the_quick_attack_finds_every_protection_in_place() {
     for r in ["no_ids", "ids"] {
         let r = &burst["in_line"][r];
         assert_eq!(r["answered"], burst["messages"], "{text}");
+        // Waiting in line costs Redis no more per message than a message
+        // alone, message ids (kept replies) or not.
+        let per_message = r["commands_per_answered"].as_f64().unwrap();
+        let alone = r["single_message_commands"].as_f64().unwrap();
+        assert!(per_message <= alone * 1.1 + 0.5, "{text}");
     }
 
     let pii = &f["pii"];
