@@ -222,8 +222,8 @@ async fn a_burst_costs_redis_about_what_its_messages_cost_one_by_one() {
 
     // Warm up (connection, script loaded), then one message on its own,
     // as the second turn of a reader: the figure a burst is held to. No
-    // message ids here: a reader's kept replies cost each save a look at
-    // them once there are more than 32, which is not what is measured.
+    // message ids here (a save with a reply to keep costs a few commands
+    // more, counted in the test below).
     let post = |user: &'static str| {
         let s = &s;
         async move { s.ask(user, QUESTION).await.0 }
@@ -257,4 +257,72 @@ async fn a_burst_costs_redis_about_what_its_messages_cost_one_by_one() {
         turns_stored(&engine, store.as_ref(), "burst-reader").await,
         BURST as u64 + 1
     );
+}
+
+/// A save that keeps a reply costs Redis the same commands whether the
+/// reader has one reply kept or hundreds: expired names leave the reply
+/// index by score, without a look at each member. (Before, past 32 kept
+/// replies every save checked each of them with `EXISTS`.)
+#[tokio::test(flavor = "multi_thread", worker_threads = 2)]
+async fn a_save_costs_redis_the_same_however_many_replies_the_reader_keeps() {
+    let redis = PrivateRedis::start();
+    let mut con = redis.conn().await;
+    let store = RedisStore::new(&redis.url(), "tidings-test:index:").unwrap();
+    let ttl = Duration::from_secs(600);
+    // Saves `n` turns of `reader`, each keeping its reply; the version
+    // reached.
+    async fn turns(store: &RedisStore, reader: &str, n: usize, ttl: Duration) -> u64 {
+        let session = tidings::dialogue::Session::new("chat", 1_800_000_000);
+        let mut version = 0;
+        for i in 0..n {
+            let message = format!("{reader}-m{i}");
+            let keep = tidings::dialogue::KeepReply {
+                message: &message,
+                reply: "kept",
+                ttl,
+            };
+            let saved = store
+                .save(reader, &session, version, ttl, Some(keep))
+                .await
+                .unwrap();
+            assert_eq!(saved, tidings::dialogue::Saved::Stored);
+            version = store.load(reader, None).await.unwrap().version;
+        }
+        version
+    }
+    let few = turns(&store, "chat:few", 1, ttl).await;
+    let many = turns(&store, "chat:many", 300, ttl).await;
+    let with_one = one_more_save(&store, &mut con, "chat:few", few, ttl).await;
+    let with_300 = one_more_save(&store, &mut con, "chat:many", many, ttl).await;
+    assert!(with_one > 0, "the save reached Redis");
+    assert_eq!(
+        with_300, with_one,
+        "a save of a reader with 300 kept replies took {with_300} commands, against {with_one} with one"
+    );
+    // Every reply is still found, and erased with the reader.
+    assert_eq!(store.erase("chat:many").await.unwrap(), 302);
+}
+
+/// The Redis commands of one more save of `reader` at `version`, keeping a
+/// reply.
+async fn one_more_save(
+    store: &RedisStore,
+    con: &mut redis::aio::MultiplexedConnection,
+    reader: &str,
+    version: u64,
+    ttl: Duration,
+) -> u64 {
+    let session = tidings::dialogue::Session::new("chat", 1_800_000_000);
+    reset(con).await;
+    let keep = tidings::dialogue::KeepReply {
+        message: "one-more",
+        reply: "kept",
+        ttl,
+    };
+    let saved = store
+        .save(reader, &session, version, ttl, Some(keep))
+        .await
+        .unwrap();
+    assert_eq!(saved, tidings::dialogue::Saved::Stored);
+    commands_since_reset(con).await
 }

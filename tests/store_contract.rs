@@ -563,7 +563,7 @@ async fn redis_keys_live_under_the_prefix_with_the_reader_as_hash_tag() {
     let expected: BTreeSet<String> = [
         format!("{p}{{{reader}}}:s"),
         format!("{p}{{{reader}}}:m:m1"),
-        format!("{p}{{{reader}}}:ms"),
+        format!("{p}{{{reader}}}:mi"),
     ]
     .into();
     assert_eq!(scan(&format!("{p}*")).await, expected);
@@ -587,8 +587,10 @@ async fn redis_keys_live_under_the_prefix_with_the_reader_as_hash_tag() {
         .await
         .unwrap();
     assert_eq!(reply, "kept");
-    let index: BTreeSet<String> = redis::cmd("SMEMBERS")
-        .arg(format!("{p}{{{reader}}}:ms"))
+    let index: BTreeSet<String> = redis::cmd("ZRANGE")
+        .arg(format!("{p}{{{reader}}}:mi"))
+        .arg(0)
+        .arg(-1)
         .query_async(&mut con)
         .await
         .unwrap();
@@ -617,7 +619,7 @@ async fn redis_expires_the_session_after_its_ttl_and_replies_after_theirs() {
     );
     assert_ttl(&mut con, &format!("{p}{{{reader}}}:s"), ttl).await;
     assert_ttl(&mut con, &format!("{p}{{{reader}}}:m:m1"), reply_ttl).await;
-    assert_ttl(&mut con, &format!("{p}{{{reader}}}:ms"), reply_ttl).await;
+    assert_ttl(&mut con, &format!("{p}{{{reader}}}:mi"), reply_ttl).await;
 
     // The next save renews the session's TTL; a shorter-lived reply does
     // not shorten the index, which must outlive every reply it lists.
@@ -635,7 +637,7 @@ async fn redis_expires_the_session_after_its_ttl_and_replies_after_theirs() {
         Saved::Stored
     );
     assert_ttl(&mut con, &format!("{p}{{{reader}}}:s"), ttl).await;
-    assert_ttl(&mut con, &format!("{p}{{{reader}}}:ms"), reply_ttl).await;
+    assert_ttl(&mut con, &format!("{p}{{{reader}}}:mi"), reply_ttl).await;
     store.erase(&reader).await.unwrap();
 }
 
@@ -662,6 +664,40 @@ async fn redis_erase_leaves_no_key_of_the_reader() {
     assert_eq!(scan(&format!("{p}*")).await.len(), 4);
     store.erase(&other).await.unwrap();
     assert_eq!(scan(&format!("{p}*")).await, BTreeSet::new());
+}
+
+/// Replies kept by an earlier release are listed in a plain set (`:ms`)
+/// rather than the sorted index: an erasure must still find them, or a
+/// reader erased right after an upgrade would keep their replies.
+#[tokio::test]
+async fn redis_erase_also_removes_replies_listed_in_the_earlier_plain_set() {
+    let store = redis_store().await;
+    let mut con = inspector().await;
+    let reader = new_reader();
+    let p = store.prefix().to_string();
+    store
+        .save(&reader, &session(1), 0, TTL, keep("m-new", "kept"))
+        .await
+        .unwrap();
+    // What the earlier release left: a reply and its name in the set.
+    let old_reply = format!("{p}{{{reader}}}:m:m-old");
+    let _: () = redis::cmd("SET")
+        .arg(&old_reply)
+        .arg("kept before the upgrade")
+        .arg("EX")
+        .arg(60)
+        .query_async(&mut con)
+        .await
+        .unwrap();
+    let _: () = redis::cmd("SADD")
+        .arg(format!("{p}{{{reader}}}:ms"))
+        .arg(&old_reply)
+        .query_async(&mut con)
+        .await
+        .unwrap();
+    // The session and both replies.
+    assert_eq!(store.erase(&reader).await.unwrap(), 3);
+    assert_eq!(scan(&format!("{p}{{{reader}}}*")).await, BTreeSet::new());
 }
 
 #[tokio::test]
@@ -712,8 +748,10 @@ async fn redis_drops_expired_replies_from_a_growing_index() {
             .unwrap(),
         Saved::Stored
     );
-    let index: BTreeSet<String> = redis::cmd("SMEMBERS")
-        .arg(format!("{p}{{{reader}}}:ms"))
+    let index: BTreeSet<String> = redis::cmd("ZRANGE")
+        .arg(format!("{p}{{{reader}}}:mi"))
+        .arg(0)
+        .arg(-1)
         .query_async(&mut con)
         .await
         .unwrap();

@@ -7,8 +7,13 @@
 //!   `s` the session as JSON;
 //! - `tidings:{chat:0123…}:m:{message}`, a string: the reply given to a
 //!   message id, kept for retries;
-//! - `tidings:{chat:0123…}:ms`, a set: the reply keys above, so erasing a
-//!   reader finds them without a `SCAN` over the whole database.
+//! - `tidings:{chat:0123…}:mi`, a sorted set: the reply keys above, each
+//!   scored by the time (Unix ms, Redis's clock) its reply expires, so
+//!   erasing a reader finds them without a `SCAN` over the whole database
+//!   and a save drops the names of expired replies by score alone;
+//! - `tidings:{chat:0123…}:ms`, a plain set of reply keys, is what earlier
+//!   releases kept instead of `:mi`: it is no longer written, expires by
+//!   itself within one retry window, and an erasure still reads it.
 //!
 //! The reader key in braces is a Redis Cluster hash tag: all of a reader's
 //! keys hash to one slot, which the scripts below need (a script may only
@@ -88,36 +93,41 @@ redis.call('PEXPIRE', KEYS[1], ARGV[3])
 if has_reply then
   local reply_ttl = tonumber(ARGV[6])
   redis.call('SET', KEYS[2], ARGV[5], 'NX', 'PX', reply_ttl)
-  redis.call('SADD', KEYS[3], KEYS[2])
+  -- The server's clock, the one the reply's PX counts on, so a name is
+  -- never dropped while its reply is still there (which would hide the
+  -- reply from an erasure).
+  local t = redis.call('TIME')
+  local now = tonumber(t[1]) * 1000 + math.floor(tonumber(t[2]) / 1000)
+  redis.call('ZADD', KEYS[3], string.format('%d', now + reply_ttl), KEYS[2])
   -- The index must outlive every reply it lists, never shorten it.
   if redis.call('PTTL', KEYS[3]) < reply_ttl then
     redis.call('PEXPIRE', KEYS[3], reply_ttl)
   end
-  -- Expired replies leave their names in the index; a reader who keeps
-  -- writing keeps the index alive, so drop dead names once it grows, or
-  -- it (and the work of erasing) would grow without bound.
-  if redis.call('SCARD', KEYS[3]) > 32 then
-    for _, key in ipairs(redis.call('SMEMBERS', KEYS[3])) do
-      if redis.call('EXISTS', key) == 0 then
-        redis.call('SREM', KEYS[3], key)
-      end
-    end
-  end
+  -- Expired replies leave their names in the index, and a reader who
+  -- keeps writing keeps the index alive: drop the names whose reply's
+  -- time is past. By score, so a save costs the same few commands however
+  -- many replies are kept, and each name is dropped once.
+  redis.call('ZREMRANGEBYSCORE', KEYS[3], '-inf', string.format('(%d', now))
 end
 return {'stored'}
 "#;
 
-/// `erase`, atomically: every reply in the index, the session, the index.
-/// KEYS: session hash, reply index. Returns how many replies and sessions
-/// existed and were deleted (the index is bookkeeping and not counted, as
-/// the memory store counts records, not keys).
+/// `erase`, atomically: every reply in the index (and in the plain set
+/// earlier releases kept), the session, the indexes. KEYS: session hash,
+/// reply index, the reader's unanswered set, the earlier releases' reply
+/// set. Returns how many replies and sessions existed and were deleted
+/// (the indexes are bookkeeping and not counted, as the memory store
+/// counts records, not keys).
 const ERASE_LUA: &str = r#"
 local removed = redis.call('DEL', KEYS[3])
-for _, key in ipairs(redis.call('SMEMBERS', KEYS[2])) do
+for _, key in ipairs(redis.call('ZRANGE', KEYS[2], 0, -1)) do
+  removed = removed + redis.call('DEL', key)
+end
+for _, key in ipairs(redis.call('SMEMBERS', KEYS[4])) do
   removed = removed + redis.call('DEL', key)
 end
 removed = removed + redis.call('DEL', KEYS[1])
-redis.call('DEL', KEYS[2])
+redis.call('DEL', KEYS[2], KEYS[4])
 return removed
 "#;
 
@@ -531,8 +541,14 @@ fn reply_key(prefix: &str, reader: &str, message: &str) -> String {
     format!("{prefix}{{{reader}}}:m:{message}")
 }
 
-/// The set listing a reader's reply keys.
+/// The sorted set listing a reader's reply keys by expiry time.
 fn index_key(prefix: &str, reader: &str) -> String {
+    format!("{prefix}{{{reader}}}:mi")
+}
+
+/// The plain set of reply keys earlier releases kept: read by an erasure
+/// until the last of them has expired.
+fn old_index_key(prefix: &str, reader: &str) -> String {
     format!("{prefix}{{{reader}}}:ms")
 }
 
@@ -711,7 +727,8 @@ impl SessionStore for RedisStore {
             invocation
                 .key(session_key(&self.prefix, reader))
                 .key(index_key(&self.prefix, reader))
-                .key(noted);
+                .key(noted)
+                .key(old_index_key(&self.prefix, reader));
             self.call("erase", |mut con| async move {
                 invocation.invoke_async(&mut con).await
             })
@@ -835,7 +852,11 @@ mod tests {
             reply_key("tidings:", reader, "9f8e"),
             "tidings:{chat:0123abcd}:m:9f8e"
         );
-        assert_eq!(index_key("tidings:", reader), "tidings:{chat:0123abcd}:ms");
+        assert_eq!(index_key("tidings:", reader), "tidings:{chat:0123abcd}:mi");
+        assert_eq!(
+            old_index_key("tidings:", reader),
+            "tidings:{chat:0123abcd}:ms"
+        );
     }
 
     #[test]
@@ -845,6 +866,7 @@ mod tests {
             session_key("tidings:", reader),
             reply_key("tidings:", reader, "m1"),
             index_key("tidings:", reader),
+            old_index_key("tidings:", reader),
         ] {
             assert_eq!(hash_tag(&key), Some(reader), "{key}");
         }
