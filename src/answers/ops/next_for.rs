@@ -1,6 +1,6 @@
 //! `next_for`: when a competitor is next in action.
 
-use super::support::contest_facts;
+use super::support::{contest_facts, when_value};
 use super::*;
 use crate::dataset::Status;
 
@@ -14,7 +14,10 @@ pub static SPEC: OpSpec = OpSpec {
     }],
     outcomes: &[
         answered("upcoming", &["name", "contest_name", "start", "venue"]),
-        answered("live", &["name", "contest_name", "start", "venue"]),
+        answered(
+            "live",
+            &["name", "contest_name", "start", "venue", "after", "after_start"],
+        ),
         no_data("done", &["name"]),
     ],
     run,
@@ -40,6 +43,18 @@ fn run(input: &OpInput) -> OpOutput {
         Some(ci) => {
             contest_facts(data, ci, input.now, &mut f);
             let outcome = if data.contests[ci].status == Status::Live {
+                // Competing now answers "when is she on"; a reader asking
+                // what is next also wants the event after this one.
+                let after = data
+                    .contests_of(pi)
+                    .iter()
+                    .map(|&(c, _)| c)
+                    .filter(|&c| data.contests[c].status == Status::Scheduled)
+                    .min_by_key(|&c| data.facts[c].start.timestamp());
+                if let Some(a) = after {
+                    f.put("after", format!("the {}", data.contest_name(a)));
+                    f.put("after_start", when_value(&data.facts[a].start, input.now));
+                }
                 "live"
             } else {
                 "upcoming"
