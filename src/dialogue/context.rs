@@ -80,8 +80,11 @@ fn touched(a: &Analysis) -> Vec<EntityKind> {
             Target::Entity(EntityRef::Discipline(..) | EntityRef::Contest(_), _) => {
                 EntityKind::Contest
             }
-            // A category or a phase on its own changes the event.
-            Target::Category(_) | Target::Phase(_) => EntityKind::Contest,
+            // A category on its own changes the event.
+            Target::Category(_) => EntityKind::Contest,
+            // A round changes the round asked about, or the event's round
+            // ("and in the final?" after the heats keeps men's 100 m).
+            Target::Phase(_) => EntityKind::Round,
             Target::Award(_) => EntityKind::Award,
         };
         if !kinds.contains(&k) {
@@ -104,6 +107,7 @@ fn takes(intent: &Intent, kind: EntityKind) -> bool {
         d.kind == kind
             || (kind == EntityKind::Contest && d.kind == EntityKind::Category)
             || (kind == EntityKind::Sport && d.kind == EntityKind::Contest)
+            || (kind == EntityKind::Round && d.kind == EntityKind::Contest)
     })
 }
 
@@ -168,7 +172,7 @@ pub fn variation<'c>(
             slots.remove(&def.name);
         }
     }
-    if kinds.contains(&EntityKind::Contest) {
+    if kinds.contains(&EntityKind::Contest) || kinds.contains(&EntityKind::Round) {
         let old = s.last_slots.iter().find_map(|(name, v)| match v {
             super::session::StoredSlot::Entity { entity } if entity.kind == "contest" => {
                 Some((name.clone(), load_entity(data, entity)?))
@@ -176,13 +180,20 @@ pub fn variation<'c>(
             _ => None,
         });
         if let Some((name, EntityRef::Contest(old))) = old {
-            if let Some(ci) = varied_contest(data, old, a) {
-                slots.insert(
-                    name,
-                    SlotValue::Entity {
-                        entity: EntityRef::Contest(ci),
-                    },
-                );
+            match varied_contest(data, old, a) {
+                Some(ci) => {
+                    slots.insert(
+                        name,
+                        SlotValue::Entity {
+                            entity: EntityRef::Contest(ci),
+                        },
+                    );
+                }
+                // No such round of that event: the old one is not what
+                // was asked, so the message (or a question back) fills it.
+                None => {
+                    slots.remove(&name);
+                }
             }
         }
     }
@@ -470,7 +481,10 @@ pub fn carried_over(
     match v {
         SlotValue::Entity {
             entity: EntityRef::Contest(old),
-        } if touched(a).contains(&EntityKind::Contest) => {
+        } if touched(a)
+            .iter()
+            .any(|k| matches!(k, EntityKind::Contest | EntityKind::Round)) =>
+        {
             varied_contest(data, *old, a).map(|ci| SlotValue::Entity {
                 entity: EntityRef::Contest(ci),
             })

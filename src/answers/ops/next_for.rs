@@ -16,7 +16,14 @@ pub static SPEC: OpSpec = OpSpec {
         answered("upcoming", &["name", "contest_name", "start", "venue"]),
         answered(
             "live",
-            &["name", "contest_name", "start", "venue", "after", "after_start"],
+            &[
+                "name",
+                "contest_name",
+                "start",
+                "venue",
+                "after",
+                "after_start",
+            ],
         ),
         no_data("done", &["name"]),
     ],
