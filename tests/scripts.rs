@@ -118,7 +118,7 @@ fn scripts_run_at_a_moment_of_the_replayed_night() {
         "tests/scripts/election-0145",
     ]);
     assert_eq!(code, 0, "{out}");
-    assert!(out.contains("1 script(s), 6 turn(s), 0 failing"), "{out}");
+    assert!(out.contains("1 script(s), 8 turn(s), 0 failing"), "{out}");
     // The same scripts at the start of the night fail: the answers really
     // come from the replayed state.
     let (code, out) = tidings_test_election(&["tests/scripts/election-0145"]);

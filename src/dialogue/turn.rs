@@ -393,6 +393,17 @@ fn run(
                     .or_insert_with(|| Value::Text(v.display(ctx.data)));
             }
             values.insert("as_of".into(), ctx.as_of());
+            // A question of when or where is answered only by wording that
+            // says it: "Counting is under way" does not say when Caddenmill
+            // declares, nor where it is counted.
+            if let Some(f @ (Focus::When | Focus::Where)) = a.frame.focus {
+                let says_it = intent
+                    .reply_for(&ctx.channel.name, outcome)
+                    .is_none_or(|t| wording_gives(t, f, &values));
+                if spec.class == OutcomeClass::Answered && !says_it {
+                    return not_covered(ctx, a, &Gap::Focus(f), Some(intent));
+                }
+            }
             let said = intent
                 .reply_for(&ctx.channel.name, outcome)
                 .map(|t| {
@@ -436,6 +447,24 @@ fn run(
             }
         }
     }
+}
+
+/// Whether a wording, with these values, says when (a start, a day, a
+/// date, or that it is on now) or where (a venue, the contests someone is
+/// in) something is.
+fn wording_gives(t: &Template, f: Focus, values: &HashMap<String, Value>) -> bool {
+    const WHEN: &[&str] = &["start", "day", "date", "next", "after_start", "items"];
+    const WHERE: &[&str] = &["venue", "contests"];
+    let fields = if f == Focus::When { WHEN } else { WHERE };
+    let filled = t
+        .names()
+        .iter()
+        .any(|n| fields.contains(n) && values.contains_key(*n));
+    filled
+        || (f == Focus::When
+            && t.source()
+                .split(|c: char| !c.is_alphanumeric())
+                .any(|w| w == "now"))
 }
 
 /// Tries to read the message as the answer to the pending question. `None`
