@@ -22,7 +22,7 @@ use crate::understand::lexicon::{Mention, Target};
 use crate::understand::slots::{Filled, Need};
 use crate::understand::Analysis;
 
-use super::context::fill_in_context;
+use super::context::{fill_in_context, points_back_at_someone};
 use super::session::Session;
 
 /// Intents scoring below this share of the best score are not tried: a
@@ -122,6 +122,16 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
         if points_there(&a.tokens)
             && has_last_contest(s)
             && !intent.slots.iter().any(|d| d.kind == EntityKind::Contest)
+        {
+            continue;
+        }
+        // "they" for the party or person just asked about: an intent that
+        // takes neither would answer about everyone.
+        if points_back_at_someone(data, s, a)
+            && !intent
+                .slots
+                .iter()
+                .any(|d| matches!(d.kind, EntityKind::Group | EntityKind::Competitor))
         {
             continue;
         }

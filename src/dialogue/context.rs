@@ -336,6 +336,19 @@ fn pointers(a: &Analysis) -> Vec<Pointer> {
     out
 }
 
+/// Whether the message points with "they" or "them" at someone the last
+/// question was about: "how many seats did they win" after a party is that
+/// party's seats, not the whole table.
+pub fn points_back_at_someone(data: &Dataset, s: &Session, a: &Analysis) -> bool {
+    pointers(a).contains(&Pointer::They)
+        && load_slots(data, &s.last_slots).values().any(|v| {
+            matches!(
+                v.entity(),
+                Some(EntityRef::Group(_) | EntityRef::Competitor(_))
+            )
+        })
+}
+
 /// The pronouns that can stand for a slot of this kind.
 fn pointers_for(kind: EntityKind) -> &'static [Pointer] {
     match kind {

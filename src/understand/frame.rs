@@ -381,6 +381,15 @@ const UNHELD: &[(&[&str], &str)] = &[
     (&["previous", "election"], "results from earlier editions"),
     (&["years", "ago"], "results from earlier editions"),
     (&["last", "year"], "results from earlier editions"),
+    (
+        &["earlier", "in", "the", "night"],
+        "how things stood earlier",
+    ),
+    (
+        &["earlier", "in", "the", "count"],
+        "how things stood earlier",
+    ),
+    (&["earlier", "tonight"], "how things stood earlier"),
     (&["remind", "me"], "alerts (I answer when asked)"),
     (&["notify", "me"], "alerts (I answer when asked)"),
     (&["ping", "me"], "alerts (I answer when asked)"),
@@ -844,7 +853,11 @@ fn focus(
                     .iter()
                     .any(|t| matches!(*t, "represent" | "representing" | "for"))
                 && !has("won")
-                && !has("win"));
+                && !has("win"))
+            // "who's Madoc Quaddle with": the side someone is on.
+            || (t0 == "who"
+                && matches!(t1, "is" | "was")
+                && tokens.last() == Some(&"with"));
         if asks_group {
             return some(
                 Focus::GroupOf,
@@ -1403,6 +1416,10 @@ mod tests {
             u("can you ping me when the final is done").is_some_and(|w| w.starts_with("alerts"))
         );
         assert!(u("let me know when marrowby declares").is_some_and(|w| w.starts_with("alerts")));
+        assert_eq!(
+            u("was pellagan ahead earlier in the night").as_deref(),
+            Some("how things stood earlier")
+        );
         // "last" alone is a place or the latest, not an earlier edition.
         assert_eq!(u("who came last in the 400 m"), None);
         assert_eq!(u("what was the last race"), None);
