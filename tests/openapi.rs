@@ -166,6 +166,30 @@ async fn each_route_names_its_statuses_auth_and_the_one_error_body() {
         assert!(schemes[name].is_object(), "no security scheme {name}");
     }
     assert_eq!(schemes["signature"]["name"], "tidings-signature");
+    // The reply as written: fields always sent are required, the ones
+    // that only explain it (sent with `"explain": true`) are not.
+    let answer = &doc["components"]["schemas"]["Answer"]["required"];
+    let answer: Vec<&str> = answer
+        .as_array()
+        .unwrap()
+        .iter()
+        .filter_map(Value::as_str)
+        .collect();
+    for field in [
+        "text",
+        "intent",
+        "outcome",
+        "detail",
+        "dataset_version",
+        "as_of",
+    ] {
+        assert!(answer.contains(&field), "Answer does not require {field}");
+    }
+    assert!(!answer.contains(&"facts") && !answer.contains(&"candidates"));
+    // A request may leave out a field with a default (MessageIn's
+    // `channel`), a reply never does.
+    let required = &doc["components"]["schemas"]["MessageIn"]["required"];
+    assert_eq!(*required, json!(["user", "text"]));
     // Every error of every route has the one error body.
     for (path, item) in doc["paths"].as_object().unwrap() {
         for (method, o) in item.as_object().unwrap() {

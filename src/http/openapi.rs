@@ -19,7 +19,7 @@ use axum::http::{header, Method};
 use axum::response::IntoResponse;
 use axum::routing::MethodRouter;
 use axum::{Extension, Router};
-use schemars::generate::SchemaSettings;
+use schemars::generate::{Contract, SchemaSettings};
 use schemars::{JsonSchema, Schema, SchemaGenerator};
 use serde_json::{json, Map, Value};
 
@@ -336,12 +336,20 @@ pub const UNLIMITED: [&str; 2] = ["/healthz", "/readyz"];
 
 /// The OpenAPI 3.1 document of `endpoints`.
 pub fn document(endpoints: &[Endpoint]) -> Value {
-    let mut generator = SchemaSettings::draft2020_12()
-        .with(|s| {
-            s.definitions_path = "/components/schemas".into();
-            s.meta_schema = None;
-        })
-        .into_generator();
+    // Replies as serde writes them and requests as serde reads them: a
+    // field with a default may be left out of a request, yet every reply
+    // has it.
+    let settings = |contract| {
+        SchemaSettings::draft2020_12()
+            .with(|s| {
+                s.definitions_path = "/components/schemas".into();
+                s.meta_schema = None;
+                s.contract = contract;
+            })
+            .into_generator()
+    };
+    let mut generator = settings(Contract::Serialize);
+    let mut reads = settings(Contract::Deserialize);
     let error_ref = generator.subschema_for::<ErrorBody>();
     let mut paths: BTreeMap<&str, Map<String, Value>> = BTreeMap::new();
     for e in endpoints {
@@ -366,7 +374,7 @@ pub fn document(endpoints: &[Endpoint]) -> Value {
         if let Some(request) = e.op.request {
             op.insert(
                 "requestBody".into(),
-                json!({"required": true, "content": {"application/json": {"schema": request(&mut generator)}}}),
+                json!({"required": true, "content": {"application/json": {"schema": request(&mut reads)}}}),
             );
         }
         if let Some(sec) = security(e.op.guard) {
@@ -424,6 +432,14 @@ pub fn document(endpoints: &[Endpoint]) -> Value {
     }
     let mut schemas = generator.take_definitions(true);
     relax_explained(&mut schemas);
+    let renamed = add_inputs(&mut schemas, reads.take_definitions(true));
+    for item in paths.values_mut() {
+        for op in item.values_mut() {
+            if let Some(body) = op.get_mut("requestBody") {
+                rename_refs(body, &renamed);
+            }
+        }
+    }
     json!({
         "openapi": "3.1.0",
         "jsonSchemaDialect": "https://json-schema.org/draft/2020-12/schema",
@@ -472,6 +488,67 @@ fn relax_explained(schemas: &mut Map<String, Value>) {
         !r.as_str()
             .is_some_and(|r| super::reply::EXPLAIN_FIELDS.contains(&r))
     });
+}
+
+/// Adds the request-side definitions to the reply-side ones. A type whose
+/// schema differs between the two (or refers to one that does) is added
+/// as `{Name}Input`, with the references to it renamed; gives back the
+/// renamed names.
+fn add_inputs(
+    schemas: &mut Map<String, Value>,
+    inputs: Map<String, Value>,
+) -> std::collections::BTreeSet<String> {
+    let mut renamed = std::collections::BTreeSet::new();
+    // Until no more change: renaming one may change those that refer to it.
+    loop {
+        let before = renamed.len();
+        for (name, schema) in &inputs {
+            if renamed.contains(name) {
+                continue;
+            }
+            let mut mine = schema.clone();
+            rename_refs(&mut mine, &renamed);
+            if schemas.get(name).is_some_and(|theirs| *theirs != mine) {
+                renamed.insert(name.clone());
+            }
+        }
+        if renamed.len() == before {
+            break;
+        }
+    }
+    for (name, mut schema) in inputs {
+        rename_refs(&mut schema, &renamed);
+        let name = if renamed.contains(&name) {
+            format!("{name}Input")
+        } else {
+            name
+        };
+        schemas.entry(name).or_insert(schema);
+    }
+    renamed
+}
+
+/// Points references to the names in `renamed` at their `Input` copies.
+fn rename_refs(value: &mut Value, renamed: &std::collections::BTreeSet<String>) {
+    match value {
+        Value::Object(map) => {
+            for (k, v) in map.iter_mut() {
+                if k == "$ref" {
+                    if let Some(name) = v
+                        .as_str()
+                        .and_then(|r| r.strip_prefix("#/components/schemas/"))
+                        .filter(|n| renamed.contains(*n))
+                    {
+                        *v = Value::String(format!("#/components/schemas/{name}Input"));
+                    }
+                } else {
+                    rename_refs(v, renamed);
+                }
+            }
+        }
+        Value::Array(items) => items.iter_mut().for_each(|v| rename_refs(v, renamed)),
+        _ => {}
+    }
 }
 
 /// The `{name}` segments of a path.
