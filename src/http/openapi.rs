@@ -617,4 +617,26 @@ mod tests {
         );
         assert!(path_parameters("/healthz").is_empty());
     }
+
+    #[test]
+    fn request_forms_that_differ_are_added_as_inputs_with_their_references() {
+        let r = |name: &str| json!({"$ref": format!("#/components/schemas/{name}")});
+        let mut schemas = Map::new();
+        schemas.insert("Leaf".into(), json!({"required": ["a", "b"]}));
+        schemas.insert("Outer".into(), json!({"items": r("Leaf")}));
+        schemas.insert("Same".into(), json!({"type": "string"}));
+        let mut inputs = Map::new();
+        inputs.insert("Leaf".into(), json!({"required": ["a"]}));
+        // The same as the reply's, but it refers to a type that differs.
+        inputs.insert("Outer".into(), json!({"items": r("Leaf")}));
+        inputs.insert("Same".into(), json!({"type": "string"}));
+        inputs.insert("OnlyIn".into(), json!({"items": r("Outer")}));
+        let renamed = add_inputs(&mut schemas, inputs);
+        assert_eq!(renamed.into_iter().collect::<Vec<_>>(), ["Leaf", "Outer"]);
+        assert_eq!(schemas["LeafInput"], json!({"required": ["a"]}));
+        assert_eq!(schemas["OuterInput"], json!({"items": r("LeafInput")}));
+        assert_eq!(schemas["OnlyIn"], json!({"items": r("OuterInput")}));
+        assert_eq!(schemas["Outer"], json!({"items": r("Leaf")}));
+        assert!(!schemas.contains_key("SameInput"));
+    }
 }
