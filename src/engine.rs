@@ -225,7 +225,7 @@ pub enum EngineError {
 /// How an SMS reply would be sent (3GPP TS 23.038): in the GSM 7-bit
 /// alphabet (`units` septets of 160) or in UCS-2 (`units` UTF-16 code units
 /// of 70).
-#[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
 pub struct SmsFit {
     pub encoding: String,
     pub units: usize,
@@ -247,8 +247,34 @@ pub fn in_key_order<S: serde::Serializer, V: Serialize>(
     sorted.serialize(s)
 }
 
+/// What `GET /v1/admin/status` reports. Fields in name order, as the
+/// reply has always had them.
+#[derive(Debug, Clone, Serialize, schemars::JsonSchema)]
+pub struct ServiceStatus {
+    /// Seconds since the data's `as_of`.
+    pub age_seconds: i64,
+    /// RFC 3339, in the scenario's time zone.
+    pub as_of: String,
+    pub channels: Vec<String>,
+    pub dataset_version: u64,
+    pub intents: Vec<String>,
+    /// The last reload's problem, while the last good version is served.
+    pub reload_error: Option<String>,
+    pub scenario: String,
+    pub sessions: StoreState,
+}
+
+/// The session store and whether it answers.
+#[derive(Debug, Clone, Serialize, schemars::JsonSchema)]
+pub struct StoreState {
+    /// `ok`, or why the store cannot be used.
+    pub status: String,
+    /// `memory` or `redis`.
+    pub store: String,
+}
+
 /// A handled message with the version facts answers can cite.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 pub struct Answer {
     #[serde(flatten)]
     pub reply: Reply,
@@ -871,24 +897,42 @@ impl Engine {
     }
 
     /// What the admin status reports.
-    pub async fn status(&self) -> serde_json::Value {
+    pub async fn status(&self) -> ServiceStatus {
         let snap = self.snapshot();
         let now = self.now(&snap.data);
         let age = now.timestamp().as_second() - snap.data.as_of.as_second();
         let (store, sessions) = self.store_status().await;
-        serde_json::json!({
-            "scenario": snap.data.scenario.title,
-            "dataset_version": snap.data.version,
-            "as_of": rfc3339(&snap.data.as_of.to_zoned_datetime(snap.data.tz.clone())),
-            "age_seconds": age,
-            "intents": snap.catalog.intents.iter().map(|i| i.name.as_str()).collect::<Vec<_>>(),
-            "channels": snap.catalog.channels.names(),
-            "sessions": { "store": store, "status": match sessions {
-                Ok(()) => "ok".to_string(),
-                Err(e) => e.to_string(),
-            }},
-            "reload_error": self.reload_error.lock().unwrap_or_else(|p| p.into_inner()).clone(),
-        })
+        ServiceStatus {
+            age_seconds: age,
+            as_of: rfc3339(&snap.data.as_of.to_zoned_datetime(snap.data.tz.clone())),
+            channels: snap
+                .catalog
+                .channels
+                .names()
+                .into_iter()
+                .map(str::to_string)
+                .collect(),
+            dataset_version: snap.data.version,
+            intents: snap
+                .catalog
+                .intents
+                .iter()
+                .map(|i| i.name.clone())
+                .collect(),
+            reload_error: self
+                .reload_error
+                .lock()
+                .unwrap_or_else(|p| p.into_inner())
+                .clone(),
+            scenario: snap.data.scenario.title.clone(),
+            sessions: StoreState {
+                status: match sessions {
+                    Ok(()) => "ok".to_string(),
+                    Err(e) => e.to_string(),
+                },
+                store: store.to_string(),
+            },
+        }
     }
 
     /// Whether `token` is the admin token (compared as [`same_secret`]

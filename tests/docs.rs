@@ -131,3 +131,28 @@ fn every_operation_outcome_and_fact_is_in_the_reference() {
         "not in docs/intents.md section 7: {missing:#?}"
     );
 }
+
+/// The `tidings check` summary the guides show (counts of competitors,
+/// contests and intents) is what the demo prints, so the counts cannot
+/// drift from the data and the intents.
+#[test]
+fn the_check_summary_in_the_guides_is_what_the_demo_prints() {
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_tidings"))
+        .arg("check")
+        .current_dir(root)
+        .output()
+        .expect("tidings check runs");
+    assert!(out.status.success(), "tidings check fails on the demo");
+    let printed = String::from_utf8(out.stdout).unwrap();
+    let printed = printed.lines().next().unwrap_or("").to_string();
+    assert!(printed.starts_with("ok: "), "{printed}");
+    for guide in ["docs/api.md", "docs/intents.md"] {
+        let text = std::fs::read_to_string(root.join(guide)).unwrap();
+        let shown: Vec<&str> = text.lines().filter(|l| l.starts_with("ok: The ")).collect();
+        assert!(!shown.is_empty(), "{guide} shows no check summary");
+        for line in shown {
+            assert_eq!(line, printed, "{guide}'s check summary");
+        }
+    }
+}

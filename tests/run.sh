@@ -19,7 +19,8 @@ command -v espeak-ng >/dev/null 2>&1 || need_pkgs+=(espeak-ng)
 # nginx is the load balancer of the deployment test (tests/deploy.rs);
 # TIDINGS_NGINX points it at another copy.
 [ -n "${TIDINGS_NGINX:-}" ] || [ -x /usr/sbin/nginx ] || command -v nginx >/dev/null 2>&1 || need_pkgs+=(nginx-light)
-# A venv of its own holds the Kubernetes schema validator (tests/deploy/check.sh).
+# Venvs of their own hold the Kubernetes schema validator (tests/deploy/check.sh)
+# and the OpenAPI validator (tests/openapi.rs).
 python3 -c 'import ensurepip, venv' >/dev/null 2>&1 || need_pkgs+=(python3-venv)
 if [ ${#need_pkgs[@]} -gt 0 ]; then
   echo "tests/run.sh: installing ${need_pkgs[*]}"
@@ -37,6 +38,17 @@ if ! "$metrics_venv/bin/python" -c 'import prometheus_client.parser' >/dev/null 
   "$metrics_venv/bin/pip" install -q --disable-pip-version-check prometheus_client
 fi
 export TIDINGS_METRICS_PYTHON="$metrics_venv/bin/python"
+
+# openapi-spec-validator (PyPI) checks GET /v1/openapi.json against the OpenAPI
+# 3.1 specification's schema, and jsonschema (PyPI, which it depends on) checks
+# the examples of docs/api.md against the served schemas (tests/openapi.rs).
+openapi_venv="${TIDINGS_OPENAPI_VENV:-${XDG_CACHE_HOME:-$HOME/.cache}/tidings-openapi-venv}"
+if ! "$openapi_venv/bin/python" -c 'import openapi_spec_validator, jsonschema' >/dev/null 2>&1; then
+  echo "tests/run.sh: installing openapi-spec-validator and jsonschema into $openapi_venv"
+  python3 -m venv "$openapi_venv"
+  "$openapi_venv/bin/pip" install -q --disable-pip-version-check openapi-spec-validator jsonschema
+fi
+export TIDINGS_OPENAPI_PYTHON="$openapi_venv/bin/python"
 
 # A free port: ask the kernel for one, then hand it to redis-server.
 port=$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1]); s.close()')

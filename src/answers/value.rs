@@ -88,7 +88,7 @@ pub fn speakable(s: &str) -> String {
 }
 
 /// One value an operation produced.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(untagged)]
 pub enum Value {
     /// Running text, printed as is.

@@ -13,7 +13,7 @@ use super::Dataset;
 
 /// A batch of changes, as posted by the newsroom's results feed or an
 /// editor.
-#[derive(Debug, Clone, Deserialize, Serialize)]
+#[derive(Debug, Clone, Deserialize, Serialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Batch {
     /// When the newsroom confirmed these results (RFC 3339); by default the
@@ -24,7 +24,7 @@ pub struct Batch {
 }
 
 /// One change.
-#[derive(Debug, Clone, Deserialize, Serialize)]
+#[derive(Debug, Clone, Deserialize, Serialize, schemars::JsonSchema)]
 #[serde(tag = "change", rename_all = "snake_case", deny_unknown_fields)]
 pub enum Change {
     /// New or corrected results of a contest, and its status (scheduled →
@@ -65,7 +65,7 @@ pub enum Change {
 }
 
 /// The records of a whole scenario, as its five files hold them.
-#[derive(Debug, Clone, Deserialize, Serialize)]
+#[derive(Debug, Clone, Deserialize, Serialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Records {
     pub scenario: Scenario,

@@ -10,7 +10,7 @@ use serde::{Deserialize, Serialize};
 pub type Id = String;
 
 /// The scenario header (`scenario.json`).
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Scenario {
     /// Short id, also the folder name.
@@ -46,7 +46,7 @@ fn default_group_noun() -> String {
 }
 
 /// A sport (or, on an election night, a kind of race), with its disciplines.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Sport {
     pub id: Id,
@@ -61,7 +61,7 @@ pub struct Sport {
 }
 
 /// A discipline within a sport ("100 m", "long jump", "single sculls").
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Discipline {
     pub id: Id,
@@ -71,7 +71,7 @@ pub struct Discipline {
 }
 
 /// A team, delegation or party.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Group {
     pub id: Id,
@@ -88,7 +88,7 @@ pub struct Group {
 }
 
 /// A person who competes.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Competitor {
     pub id: Id,
@@ -114,7 +114,7 @@ impl Competitor {
 }
 
 /// How a contest is measured.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(rename_all = "snake_case")]
 pub enum Measure {
     /// Elapsed time: `10.12`, `1:59.32`, `2:05:31`.
@@ -138,7 +138,7 @@ impl Measure {
 }
 
 /// Which way marks are ranked.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(rename_all = "snake_case")]
 pub enum Better {
     Lower,
@@ -146,7 +146,7 @@ pub enum Better {
 }
 
 /// Where a contest stands.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(rename_all = "snake_case")]
 pub enum Status {
     Scheduled,
@@ -155,7 +155,7 @@ pub enum Status {
 }
 
 /// A single contest: one race, one match, one ward.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Contest {
     pub id: Id,
@@ -190,7 +190,9 @@ pub struct Contest {
 }
 
 /// How an entry finished, when it did not simply finish.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
+#[derive(
+    Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default, schemars::JsonSchema,
+)]
 #[serde(rename_all = "snake_case")]
 pub enum EntryStatus {
     #[default]
@@ -204,7 +206,7 @@ pub enum EntryStatus {
 }
 
 /// One competitor's (or group's) line in a contest.
-#[derive(Debug, Clone, Serialize, Deserialize)]
+#[derive(Debug, Clone, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct Entry {
     /// The person, for individual contests.

@@ -81,7 +81,7 @@ pub enum Saved {
 
 /// A question readers asked that got no answer, with how many readers
 /// asked it. No reader is named: only the masked, normalised text is kept.
-#[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
+#[derive(Debug, Clone, PartialEq, Eq, serde::Serialize, schemars::JsonSchema)]
 pub struct Unanswered {
     /// The question, normalised (case, accents and punctuation folded), so
     /// the same question asked differently is counted once.

@@ -26,7 +26,7 @@ use crate::understand::{Analysis, Understanding};
 pub use crate::understand::classify::{MIN_SCORE, MIN_SCORE_TO_ASK};
 
 /// What kind of reply this is.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
 #[serde(rename_all = "snake_case")]
 pub enum Outcome {
     /// A fact from the data.
@@ -45,7 +45,7 @@ pub enum Outcome {
 }
 
 /// A filled slot as shown in replies.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize, schemars::JsonSchema)]
 pub struct SlotOut {
     pub kind: EntityKind,
     /// Stable id (entity id, ISO 8601 date, number).
@@ -55,7 +55,7 @@ pub struct SlotOut {
 }
 
 /// An option offered in a clarifying question.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize, schemars::JsonSchema)]
 pub struct OptionOut {
     pub kind: String,
     pub id: String,
@@ -63,7 +63,7 @@ pub struct OptionOut {
 }
 
 /// The reply to one message.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize, schemars::JsonSchema)]
 pub struct Reply {
     pub text: String,
     pub intent: Option<String>,

@@ -9,10 +9,9 @@ use axum::extract::{DefaultBodyLimit, FromRequestParts, Query, State};
 use axum::http::request::Parts;
 use axum::http::{header, StatusCode};
 use axum::response::IntoResponse;
-use axum::routing::{get, post, put};
-use axum::{Json, Router};
-use serde_json::json;
+use axum::Json;
 
+use super::openapi::{schema, Api, Body, Guard, Op};
 use super::{ApiError, AppJson};
 use crate::dataset::changes::{Batch, Records};
 use crate::engine::{ChangeError, Engine};
@@ -87,16 +86,38 @@ pub(super) fn check_bearer(
     Ok(allowed)
 }
 
+/// A batch applied. Fields in name order, as the reply has always had them.
+#[derive(serde::Serialize, schemars::JsonSchema)]
+pub struct Applied {
+    /// How many changes the batch held.
+    pub applied: usize,
+    /// The version the batch made.
+    pub dataset_version: u64,
+}
+
+/// A dataset replaced.
+#[derive(serde::Serialize, schemars::JsonSchema)]
+pub struct Replaced {
+    /// The version the replacement made.
+    pub dataset_version: u64,
+}
+
+/// The questions readers asked that got no answer, most asked first.
+#[derive(serde::Serialize, schemars::JsonSchema)]
+pub struct UnansweredList {
+    pub unanswered: Vec<crate::dialogue::store::Unanswered>,
+}
+
 async fn apply_batch(
     _: Admin,
     State(engine): State<Engine>,
     AppJson(batch): AppJson<Batch>,
 ) -> Result<impl IntoResponse, ApiError> {
     match engine.apply_batch(&batch).await {
-        Ok(version) => Ok(Json(json!({
-            "dataset_version": version,
-            "applied": batch.changes.len(),
-        }))),
+        Ok(version) => Ok(Json(Applied {
+            applied: batch.changes.len(),
+            dataset_version: version,
+        })),
         Err(e) => Err(change_error(
             "invalid_batch",
             "the batch was not applied",
@@ -125,7 +146,9 @@ async fn replace_dataset(
         ));
     };
     match engine.replace_records_checked(records, force).await {
-        Ok(version) => Ok(Json(json!({ "dataset_version": version }))),
+        Ok(version) => Ok(Json(Replaced {
+            dataset_version: version,
+        })),
         Err(e) => Err(change_error(
             "invalid_dataset",
             "the dataset was not replaced",
@@ -221,19 +244,69 @@ async fn unanswered(
         .unanswered(limit.min(crate::dialogue::store::UNANSWERED_CAP))
         .await
         .map_err(crate::engine::EngineError::Store)?;
-    Ok(Json(json!({ "unanswered": rows })))
+    Ok(Json(UnansweredList { unanswered: rows }))
 }
 
 /// The admin routes, with a body limit of their own (a whole scenario is
 /// larger than any reader's message).
-pub fn routes() -> Router<Engine> {
-    Router::new()
-        .route("/v1/admin/batches", post(apply_batch))
-        .route(
-            "/v1/admin/dataset",
-            put(replace_dataset).get(export_dataset),
+pub fn routes() -> Api {
+    Api::new()
+        .post(
+            "/v1/admin/batches",
+            apply_batch,
+            Op::new(
+                "Apply a batch of changes to the results, all or nothing",
+                Guard::Admin,
+                Body::Json(schema::<Applied>),
+            )
+            .reads::<Batch>()
+            .errors(&[503]),
         )
-        .route("/v1/admin/status", get(status))
-        .route("/v1/admin/unanswered", get(unanswered))
-        .layer(DefaultBodyLimit::max(MAX_ADMIN_BODY))
+        .put(
+            "/v1/admin/dataset",
+            replace_dataset,
+            Op::new(
+                "Replace the whole dataset",
+                Guard::Admin,
+                Body::Json(schema::<Replaced>),
+            )
+            .reads::<Records>()
+            .query(
+                "force",
+                "boolean",
+                "Replace even when most records of a kind would go.",
+            )
+            .errors(&[503]),
+        )
+        .get(
+            "/v1/admin/dataset",
+            export_dataset,
+            Op::new(
+                "The dataset being served, in the shape PUT takes",
+                Guard::Admin,
+                Body::Json(schema::<Records>),
+            )
+            .header(DATASET_VERSION_HEADER, "The exported dataset's version."),
+        )
+        .get(
+            "/v1/admin/status",
+            status,
+            Op::new(
+                "The service's data, intents, channels and session store",
+                Guard::Admin,
+                Body::Json(schema::<crate::engine::ServiceStatus>),
+            ),
+        )
+        .get(
+            "/v1/admin/unanswered",
+            unanswered,
+            Op::new(
+                "The questions readers asked that got no answer",
+                Guard::Admin,
+                Body::Json(schema::<UnansweredList>),
+            )
+            .query("limit", "integer", "At most this many (default 50).")
+            .errors(&[422, 503]),
+        )
+        .layer_routes(|r| r.layer(DefaultBodyLimit::max(MAX_ADMIN_BODY)))
 }

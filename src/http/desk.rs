@@ -20,8 +20,8 @@
 use axum::extract::State;
 use axum::http::header::{self, HeaderName};
 use axum::response::IntoResponse;
-use axum::routing::get;
-use axum::Router;
+
+use super::openapi::{Api, Body, Guard, Op};
 
 use crate::engine::Engine;
 
@@ -117,11 +117,29 @@ fn escape(text: &str) -> String {
 }
 
 /// The desk's routes: the page and its two files.
-pub fn routes() -> Router<Engine> {
-    Router::new()
-        .route("/desk", get(page))
-        .route("/desk/desk.css", get(style))
-        .route("/desk/desk.js", get(script))
+pub fn routes() -> Api {
+    let op =
+        |summary, media, description| Op::new(summary, Guard::Desk, Body::Text(media, description));
+    Api::new()
+        .get(
+            "/desk",
+            page,
+            op(
+                "The editors' desk page",
+                "text/html",
+                "The page, with the channels in force.",
+            ),
+        )
+        .get(
+            "/desk/desk.css",
+            style,
+            op("The desk page's style", "text/css", "The style sheet."),
+        )
+        .get(
+            "/desk/desk.js",
+            script,
+            op("The desk page's script", "text/javascript", "The script."),
+        )
 }
 
 #[cfg(test)]
@@ -130,6 +148,7 @@ mod tests {
 
     use axum::body::Body;
     use axum::http::{Request, StatusCode};
+    use axum::Router;
     use tower::ServiceExt;
 
     use super::*;

@@ -5,7 +5,6 @@ use axum::extract::rejection::JsonRejection;
 use axum::http::StatusCode;
 use axum::response::{IntoResponse, Response};
 use axum::Json;
-use serde_json::json;
 
 /// An error as the client sees it.
 #[derive(Debug)]
@@ -50,7 +49,12 @@ impl IntoResponse for ApiError {
         }
         let mut response = (
             self.status,
-            Json(json!({ "error": { "code": self.code, "message": self.message } })),
+            Json(super::openapi::ErrorBody {
+                error: super::openapi::ErrorDetail {
+                    code: self.code.to_string(),
+                    message: self.message,
+                },
+            }),
         )
             .into_response();
         if let Some(after) = self.retry_after {

@@ -14,10 +14,9 @@ use axum::http::request::Parts;
 use axum::http::{header, StatusCode};
 use axum::middleware::Next;
 use axum::response::{IntoResponse, Response};
-use axum::routing::get;
-use axum::Router;
 
 use super::admin::check_bearer;
+use super::openapi::{Api, Body, Guard, Op};
 use super::ApiError;
 use crate::engine::Engine;
 
@@ -72,6 +71,17 @@ pub async fn count(State(engine): State<Engine>, req: Request, next: Next) -> Re
 }
 
 /// The metrics route.
-pub fn routes() -> Router<Engine> {
-    Router::new().route("/metrics", get(metrics))
+pub fn routes() -> Api {
+    Api::new().get(
+        "/metrics",
+        metrics,
+        Op::new(
+            "The service's counters for a Prometheus scraper",
+            Guard::Metrics,
+            Body::Text(
+                "text/plain",
+                "The Prometheus text exposition format, version 0.0.4.",
+            ),
+        ),
+    )
 }

@@ -14,6 +14,7 @@ mod error;
 pub mod keys;
 pub mod limit;
 mod metrics;
+pub mod openapi;
 pub mod queue;
 pub mod reply;
 pub mod request_id;
@@ -31,10 +32,8 @@ use axum::extract::{
 use axum::http::StatusCode;
 use axum::middleware::Next;
 use axum::response::{IntoResponse, Response};
-use axum::routing::{delete, get, post};
 use axum::{Extension, Json, Router};
 use serde::Deserialize;
-use serde_json::json;
 use tokio::net::TcpListener;
 use tower_http::trace::TraceLayer;
 
@@ -45,7 +44,7 @@ pub use limit::{Rate, Rates};
 pub use queue::Queueing;
 pub use serve::Limits;
 
-use crate::engine::{Engine, Incoming};
+use crate::engine::{self, Engine, Incoming};
 
 /// Largest request body accepted.
 pub const MAX_BODY: usize = 16 * 1024;
@@ -156,7 +155,7 @@ fn source(extensions: &axum::http::Extensions) -> Option<String> {
 /// checks are left out: a load balancer polls them from one address.
 async fn limit_source(State(edge): State<Arc<EdgeState>>, req: Request, next: Next) -> Response {
     let path = req.uri().path();
-    if path != "/healthz" && path != "/readyz" {
+    if !openapi::UNLIMITED.contains(&path) {
         if let Some(src) = source(req.extensions()) {
             if let Err(e) = edge.take(&edge.sources, &src, edge.rates.per_source, "this address") {
                 return e.into_response();
@@ -222,7 +221,7 @@ pub struct AppJson<T>(pub T);
 pub struct AppPath<T>(pub T);
 
 /// A reader's message.
-#[derive(Debug, Deserialize)]
+#[derive(Debug, Deserialize, schemars::JsonSchema)]
 #[serde(deny_unknown_fields)]
 pub struct MessageIn {
     /// The reader's id on the channel; hashed before use.
@@ -316,25 +315,49 @@ async fn erase_user(
 /// so with a 200 and `"status": "degraded"` rather than a 503: every replica
 /// shares the store, and a 503 would take all of them out of the load
 /// balancer at once.
-async fn readyz(State(engine): State<Engine>) -> impl IntoResponse {
+async fn readyz(State(engine): State<Engine>) -> Json<Ready> {
     let (store, status) = engine.store_status().await;
     let snap = engine.snapshot();
     let (status, sessions) = match status {
         Ok(()) => ("ready", "ok".to_string()),
         Err(e) => ("degraded", e.to_string()),
     };
-    Json(json!({
-        "status": status,
-        "sessions": { "store": store, "status": sessions },
-        "dataset_version": snap.data.version,
-    }))
+    Json(Ready {
+        dataset_version: snap.data.version,
+        sessions: engine::StoreState {
+            status: sessions,
+            store: store.to_string(),
+        },
+        status: status.to_string(),
+    })
 }
 
-async fn healthz(State(engine): State<Engine>) -> impl IntoResponse {
+/// `GET /readyz`. Fields in name order, as the reply has always had them.
+#[derive(Debug, serde::Serialize, schemars::JsonSchema)]
+pub struct Ready {
+    pub dataset_version: u64,
+    pub sessions: engine::StoreState,
+    /// `ready`, or `degraded` while the session store cannot be reached.
+    pub status: String,
+}
+
+/// `GET /healthz`: the process is up with its data and intents loaded.
+#[derive(Debug, serde::Serialize, schemars::JsonSchema)]
+pub struct Health {
+    pub dataset_version: u64,
+    /// How many intents are loaded.
+    pub intents: usize,
+    /// Always `ok`.
+    pub status: String,
+}
+
+async fn healthz(State(engine): State<Engine>) -> Json<Health> {
     let snap = engine.snapshot();
-    Json(
-        json!({ "status": "ok", "dataset_version": snap.data.version, "intents": snap.catalog.intents.len() }),
-    )
+    Json(Health {
+        dataset_version: snap.data.version,
+        intents: snap.catalog.intents.len(),
+        status: "ok".into(),
+    })
 }
 
 async fn not_found() -> ApiError {
@@ -355,6 +378,58 @@ async fn wrong_method() -> ApiError {
     }
 }
 
+/// Every route, each with its description for `GET /v1/openapi.json`.
+pub fn routes() -> openapi::Api {
+    use openapi::{schema, Body, Guard, Op};
+    openapi::Api::new()
+        .post(
+            "/v1/messages",
+            messages,
+            Op::new(
+                "Answer a reader's message",
+                Guard::SignedClientKey,
+                Body::Json(schema::<engine::Answer>),
+            )
+            .reads::<MessageIn>()
+            .header(
+                "tidings-repeated",
+                "`true` when this is the stored reply to a message id seen before.",
+            )
+            .errors(&[429, 503]),
+        )
+        .delete(
+            "/v1/users/{channel}/{user}",
+            erase_user,
+            Op::new(
+                "Erase everything kept for a reader",
+                Guard::ClientKey,
+                Body::Empty,
+            )
+            .errors(&[400, 422, 503]),
+        )
+        .get(
+            "/healthz",
+            healthz,
+            Op::new(
+                "Whether the process is up",
+                Guard::Open,
+                Body::Json(schema::<Health>),
+            ),
+        )
+        .get(
+            "/readyz",
+            readyz,
+            Op::new(
+                "Whether the session store answers too",
+                Guard::Open,
+                Body::Json(schema::<Ready>),
+            ),
+        )
+        .merge(admin::routes())
+        .merge(desk::routes())
+        .merge(metrics::routes())
+}
+
 /// The application's routes and layers, without rate limits (see
 /// [`Edge::without_rate_limits`]).
 pub fn app(engine: Engine) -> Router {
@@ -366,14 +441,8 @@ pub fn app_with(engine: Engine, edge: &Edge) -> Router {
     let state = Arc::new(EdgeState::new(edge));
     let engine_for_keys = engine.clone();
     let engine_for_metrics = engine.clone();
-    Router::new()
-        .route("/v1/messages", post(messages))
-        .route("/v1/users/{channel}/{user}", delete(erase_user))
-        .route("/healthz", get(healthz))
-        .route("/readyz", get(readyz))
-        .merge(admin::routes())
-        .merge(desk::routes())
-        .merge(metrics::routes())
+    routes()
+        .finish()
         .fallback(not_found)
         .method_not_allowed_fallback(wrong_method)
         .with_state(engine)

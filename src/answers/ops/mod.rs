@@ -37,7 +37,9 @@ use crate::answers::value::Value;
 use crate::dataset::{Dataset, EntityRef};
 
 /// What a slot holds.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, serde::Deserialize)]
+#[derive(
+    Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, serde::Deserialize, schemars::JsonSchema,
+)]
 #[serde(rename_all = "snake_case")]
 pub enum EntityKind {
     Competitor,
