@@ -118,13 +118,20 @@ enum Slot<T> {
     Free { next: usize },
 }
 
-/// Doubly linked lists threaded through one vector of slots, so an entry
+/// Slots a slab allocates at a time.
+const CHUNK: usize = 4096;
+
+/// Doubly linked lists threaded through one store of slots, so an entry
 /// is unlinked or moved to the back in O(1) wherever it sits, given the
-/// slot its record kept. Freed slots are reused before the vector grows,
-/// so at a steady number of records it does not grow at all.
+/// slot its record kept. Freed slots are reused before the slab grows, so
+/// at a steady number of records it does not grow at all; when it does, it
+/// adds a chunk of [`CHUNK`] slots and never moves the ones it has (one
+/// vector doubling would copy every entry in a single operation).
 #[derive(Debug)]
 struct Slab<T> {
-    slots: Vec<Slot<T>>,
+    chunks: Vec<Vec<Slot<T>>>,
+    /// Slots made so far, used or free.
+    len: usize,
     /// The first free slot; free slots are chained through `Free::next`.
     free: usize,
     /// Entries linked, unlinked or moved so far: what an operation does
@@ -135,34 +142,57 @@ struct Slab<T> {
 impl<T> Slab<T> {
     fn new() -> Slab<T> {
         Slab {
-            slots: Vec::new(),
+            chunks: Vec::new(),
+            len: 0,
             free: NIL,
             steps: 0,
         }
     }
 
+    fn slot(&self, at: usize) -> Option<&Slot<T>> {
+        self.chunks.get(at / CHUNK)?.get(at % CHUNK)
+    }
+
+    fn slot_mut(&mut self, at: usize) -> Option<&mut Slot<T>> {
+        self.chunks.get_mut(at / CHUNK)?.get_mut(at % CHUNK)
+    }
+
+    /// Makes a new slot at the end; returns its index.
+    fn push_slot(&mut self, slot: Slot<T>) -> usize {
+        match self.chunks.last_mut() {
+            Some(chunk) if chunk.len() < CHUNK => chunk.push(slot),
+            _ => {
+                let mut chunk = Vec::with_capacity(CHUNK);
+                chunk.push(slot);
+                self.chunks.push(chunk);
+            }
+        }
+        self.len += 1;
+        self.len - 1
+    }
+
     fn front(&self, list: &List) -> Option<(usize, &T)> {
-        match self.slots.get(list.head) {
+        match self.slot(list.head) {
             Some(Slot::Used { value, .. }) => Some((list.head, value)),
             _ => None,
         }
     }
 
     fn ends(&self, at: usize) -> Option<(usize, usize)> {
-        match self.slots.get(at) {
+        match self.slot(at) {
             Some(Slot::Used { prev, next, .. }) => Some((*prev, *next)),
             _ => None,
         }
     }
 
     fn set_prev(&mut self, at: usize, to: usize) {
-        if let Some(Slot::Used { prev, .. }) = self.slots.get_mut(at) {
+        if let Some(Slot::Used { prev, .. }) = self.slot_mut(at) {
             *prev = to;
         }
     }
 
     fn set_next(&mut self, at: usize, to: usize) {
-        if let Some(Slot::Used { next, .. }) = self.slots.get_mut(at) {
+        if let Some(Slot::Used { next, .. }) = self.slot_mut(at) {
             *next = to;
         }
     }
@@ -201,7 +231,7 @@ impl<T> Slab<T> {
             next: NIL,
             value,
         };
-        let at = match self.slots.get_mut(self.free) {
+        let at = match self.slot_mut(self.free) {
             Some(free @ Slot::Free { .. }) => {
                 let Slot::Free { next } = std::mem::replace(free, slot) else {
                     unreachable!("matched as free just above")
@@ -210,10 +240,7 @@ impl<T> Slab<T> {
                 self.free = next;
                 at
             }
-            _ => {
-                self.slots.push(slot);
-                self.slots.len() - 1
-            }
+            _ => self.push_slot(slot),
         };
         self.attach_back(list, at);
         at
@@ -225,7 +252,7 @@ impl<T> Slab<T> {
         self.steps += 1;
         self.detach(list, prev, next);
         let freed = Slot::Free { next: self.free };
-        let slot = std::mem::replace(self.slots.get_mut(at)?, freed);
+        let slot = std::mem::replace(self.slot_mut(at)?, freed);
         self.free = at;
         match slot {
             Slot::Used { value, .. } => Some(value),
@@ -243,7 +270,7 @@ impl<T> Slab<T> {
         };
         self.steps += 1;
         self.detach(list, prev, next);
-        if let Some(Slot::Used { prev, next, .. }) = self.slots.get_mut(at) {
+        if let Some(Slot::Used { prev, next, .. }) = self.slot_mut(at) {
             *prev = list.tail;
             *next = NIL;
         }
@@ -356,9 +383,19 @@ impl Expiry {
     }
 }
 
+/// Readers past which the map is not sized up front: beyond it the map
+/// grows as readers come, and rehashes as it does.
+const PRESIZED_READERS: usize = 2_000_000;
+
 #[derive(Debug)]
 struct Maps {
-    readers: HashMap<Key, Reader>,
+    /// Sized at the start for twice the cap, so at most half full: it
+    /// never grows below the cap, and at that load deleting an entry
+    /// almost always frees its slot outright instead of leaving a marker,
+    /// so the markers that would make one insert rehash the whole table
+    /// do not pile up. Readers are boxed so the slots sized for readers
+    /// not yet there cost a key and a pointer each.
+    readers: HashMap<Key, Box<Reader>>,
     /// Readers in order of use, least recent first: one entry per reader.
     uses: Slab<Key>,
     use_order: List,
@@ -371,14 +408,15 @@ struct Maps {
 
 impl Maps {
     fn new(cap: usize) -> Maps {
+        let cap = cap.max(1);
         Maps {
-            readers: HashMap::new(),
+            readers: HashMap::with_capacity(2 * cap.min(PRESIZED_READERS)),
             uses: Slab::new(),
             use_order: List::EMPTY,
             sessions: Expiry::new(),
             replies: Expiry::new(),
             unanswered: HashMap::new(),
-            cap: cap.max(1),
+            cap,
         }
     }
 
@@ -446,12 +484,12 @@ impl Maps {
         let used = self.uses.push_back(&mut self.use_order, Arc::clone(&key));
         self.readers.insert(
             Arc::clone(&key),
-            Reader {
+            Box::new(Reader {
                 session: None,
                 replies: HashMap::new(),
                 noted: HashSet::new(),
                 used,
-            },
+            }),
         );
         key
     }
@@ -741,7 +779,7 @@ mod tests {
     fn use_order(maps: &Maps) -> Vec<String> {
         let mut out = Vec::new();
         let mut at = maps.use_order.head;
-        while let Some(Slot::Used { next, value, .. }) = maps.uses.slots.get(at) {
+        while let Some(Slot::Used { next, value, .. }) = maps.uses.slot(at) {
             out.push(value.to_string());
             at = *next;
         }
@@ -766,17 +804,17 @@ mod tests {
         assert_eq!(listed, replies);
         for (key, r) in &maps.readers {
             assert!(
-                matches!(maps.uses.slots.get(r.used), Some(Slot::Used { value, .. }) if value == key)
+                matches!(maps.uses.slot(r.used), Some(Slot::Used { value, .. }) if value == key)
             );
             if let Some(k) = &r.session {
                 assert!(matches!(
-                    maps.sessions.slab.slots.get(k.slot),
+                    maps.sessions.slab.slot(k.slot),
                     Some(Slot::Used { value, .. }) if value.reader == *key && value.message.is_none()
                 ));
             }
             for (m, k) in &r.replies {
                 assert!(matches!(
-                    maps.replies.slab.slots.get(k.slot),
+                    maps.replies.slab.slot(k.slot),
                     Some(Slot::Used { value, .. })
                         if value.reader == *key && value.message.as_ref() == Some(m)
                 ));
@@ -978,9 +1016,9 @@ mod tests {
         assert_eq!(maps.replies.len, 4 + 5);
         // Slots are reused: the slabs hold about what is kept, not what
         // was ever written.
-        assert!(maps.sessions.slab.slots.len() <= 4);
-        assert!(maps.replies.slab.slots.len() <= 4 + 7);
-        assert!(maps.uses.slots.len() <= 3);
+        assert!(maps.sessions.slab.len <= 4);
+        assert!(maps.replies.slab.len <= 4 + 7);
+        assert!(maps.uses.len <= 3);
         assert_eq!(use_order(&maps), ["b", "c", "a"]);
     }
 
