@@ -1,8 +1,9 @@
 //! Sessions in this process's memory: the default when no shared store is
 //! configured.
 //!
-//! Every operation does a bounded amount of work whatever the number of
-//! readers kept, the longest single one as well as the mean:
+//! No operation walks what the store keeps, and the list work of each
+//! one, the longest single one as well as the mean, is bounded whatever
+//! the number of readers kept:
 //!
 //! - expiry is a list per TTL, in expiry order (every record of one TTL
 //!   written later expires later), so each operation drops what is due
@@ -26,6 +27,11 @@
 //! they replace, a new reader at the cap unlinks the evicted reader's
 //! entries, and expiry unlinks each record as it comes due (each record is
 //! dropped once, by whichever operation first finds it due).
+//!
+//! The containers do not make one operation pay for the others either as
+//! far as this store decides it: slabs grow by chunks and never move their
+//! slots, and the reader map is sized for twice the cap at the start (see
+//! `Maps::readers`).
 
 use std::collections::{HashMap, HashSet};
 use std::sync::{Arc, Mutex};
