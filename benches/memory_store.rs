@@ -83,8 +83,8 @@ async fn measure(size: usize, ops: usize, reply: &str) -> ([f64; 4], [Duration; 
     }
     assert_eq!(store.readers(), size);
     let mut picks = Picks(0x5eed ^ size as u64);
-    // The longest single load, save and new reader: a compaction walk
-    // shows here, not in the means.
+    // The longest single load, save and new reader: one operation paying
+    // for many shows here, not in the means.
     let mut longest = [Duration::ZERO; 3];
 
     // Loads of random readers, with a message id looked up as a turn does.
@@ -142,11 +142,11 @@ async fn measure(size: usize, ops: usize, reply: &str) -> ([f64; 4], [Duration; 
     }
 
     // New readers at the cap: each save sends the least recently used
-    // reader away with everything kept for them. Their queue entries are
-    // left behind and compacted away in one walk once they are half of a
-    // queue, so the cost is only flat when averaged over a whole cycle:
-    // this runs at least as many new readers as the size, as one run, and
-    // gives the mean.
+    // reader away with everything kept for them. This runs at least as
+    // many new readers as the size, as one run, and gives the mean: work
+    // left behind by evictions and paid for later in one go (a walk once
+    // per cycle of the store) would show in the longest single save, and
+    // the whole cycle is inside the run so it cannot fall outside it.
     let mut fresh = size;
     let evictions = (ROUNDS * ops).max(size);
     let keys: Vec<String> = (fresh..fresh + evictions).map(reader).collect();
