@@ -19,7 +19,10 @@ DEPLOY = os.path.join(ROOT, "deploy")
 K8S = os.path.join(DEPLOY, "k8s")
 
 # The secrets the service takes from the environment (docs/api.md).
-SECRET_KEYS = {"TIDINGS_ADMIN_TOKEN", "TIDINGS_ID_SECRET", "TIDINGS_REDIS_URL"}
+SECRET_KEYS = {"TIDINGS_ADMIN_TOKEN", "TIDINGS_ID_SECRET", "TIDINGS_REDIS_URL",
+               "TIDINGS_METRICS_TOKEN"}
+# Of those, the ones a replica cannot start without.
+REQUIRED_SECRETS = {"TIDINGS_ADMIN_TOKEN", "TIDINGS_ID_SECRET"}
 
 problems = []
 
@@ -269,9 +272,12 @@ envs = [services[n]["environment"] for n in replicas]
 if any(e != envs[0] for e in envs):
     problem("compose.yaml", "every replica has the same environment (they share conversations)")
 env = envs[0]
-for key in SECRET_KEYS - {"TIDINGS_REDIS_URL"}:
+for key in REQUIRED_SECRETS:
     if not re.fullmatch(r"\$\{" + key + r":\?[^}]+\}", str(env.get(key, ""))):
         problem("compose.yaml", f"{key} comes from the environment, required (${{{key}:?...}})")
+# The metrics token is optional: from the environment, empty when unset.
+if str(env.get("TIDINGS_METRICS_TOKEN", "")) != "${TIDINGS_METRICS_TOKEN:-}":
+    problem("compose.yaml", "TIDINGS_METRICS_TOKEN comes from the environment, optional (${TIDINGS_METRICS_TOKEN:-})")
 if set(env) != set(config) | SECRET_KEYS:
     problem("compose.yaml", f"settings differ from the ConfigMap and Secret: "
             f"{sorted(set(env) ^ (set(config) | SECRET_KEYS))}")
