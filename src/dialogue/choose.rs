@@ -95,6 +95,12 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
     } else {
         MIN_SCORE
     };
+    // "there" for the event just talked about, "they" for the party or
+    // person: an intent that takes no such slot would answer about
+    // everywhere or everyone ("how many votes do the Greens have there" is
+    // not their seat total, "how many seats did they win" not the table).
+    let there = points_there(&a.tokens) && has_last_contest(s);
+    let they = points_back_at_someone(data, s, a);
     let mut focus_gap: Option<&Intent> = None;
     let mut ask_later: Option<Chosen> = None;
     let mut limit_gap: Option<(&Intent, Vec<String>)> = None;
@@ -116,22 +122,10 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
                 continue;
             }
         }
-        // "there" points at the event just talked about: an intent that
-        // takes no event would answer about everywhere ("how many votes do
-        // the Greens have there" is not their seat total).
-        if points_there(&a.tokens)
-            && has_last_contest(s)
-            && !intent.slots.iter().any(|d| d.kind == EntityKind::Contest)
-        {
-            continue;
-        }
-        // "they" for the party or person just asked about: an intent that
-        // takes neither would answer about everyone.
-        if points_back_at_someone(data, s, a)
-            && !intent
-                .slots
-                .iter()
-                .any(|d| matches!(d.kind, EntityKind::Group | EntityKind::Competitor))
+        let takes_one_of =
+            |kinds: &[EntityKind]| intent.slots.iter().any(|d| kinds.contains(&d.kind));
+        if (there && !takes_one_of(&[EntityKind::Contest]))
+            || (they && !takes_one_of(&[EntityKind::Group, EntityKind::Competitor]))
         {
             continue;
         }

@@ -100,6 +100,14 @@ fn touched(a: &Analysis) -> Vec<EntityKind> {
     kinds
 }
 
+/// Whether the kinds a message touches change the event: a new event, or
+/// only its round ("and in the final?").
+fn changes_event(kinds: &[EntityKind]) -> bool {
+    kinds
+        .iter()
+        .any(|k| matches!(k, EntityKind::Contest | EntityKind::Round))
+}
+
 /// Whether an intent has a slot that takes values of `kind`. A category or
 /// sport can also go into an event slot ("what about the women's?").
 fn takes(intent: &Intent, kind: EntityKind) -> bool {
@@ -172,7 +180,7 @@ pub fn variation<'c>(
             slots.remove(&def.name);
         }
     }
-    if kinds.contains(&EntityKind::Contest) || kinds.contains(&EntityKind::Round) {
+    if changes_event(&kinds) {
         let old = s.last_slots.iter().find_map(|(name, v)| match v {
             super::session::StoredSlot::Entity { entity } if entity.kind == "contest" => {
                 Some((name.clone(), load_entity(data, entity)?))
@@ -494,10 +502,7 @@ pub fn carried_over(
     match v {
         SlotValue::Entity {
             entity: EntityRef::Contest(old),
-        } if touched(a)
-            .iter()
-            .any(|k| matches!(k, EntityKind::Contest | EntityKind::Round)) =>
-        {
+        } if changes_event(&touched(a)) => {
             varied_contest(data, *old, a).map(|ci| SlotValue::Entity {
                 entity: EntityRef::Contest(ci),
             })

@@ -393,19 +393,17 @@ fn run(
                     .or_insert_with(|| Value::Text(v.display(ctx.data)));
             }
             values.insert("as_of".into(), ctx.as_of());
+            let wording = intent.reply_for(&ctx.channel.name, outcome);
             // A question of when or where is answered only by wording that
             // says it: "Counting is under way" does not say when Caddenmill
             // declares, nor where it is counted.
             if let Some(f @ (Focus::When | Focus::Where)) = a.frame.focus {
-                let says_it = intent
-                    .reply_for(&ctx.channel.name, outcome)
-                    .is_none_or(|t| wording_gives(t, f, &values));
+                let says_it = wording.is_none_or(|t| wording_gives(t, f, &values));
                 if spec.class == OutcomeClass::Answered && !says_it {
                     return not_covered(ctx, a, &Gap::Focus(f), Some(intent));
                 }
             }
-            let said = intent
-                .reply_for(&ctx.channel.name, outcome)
+            let said = wording
                 .map(|t| {
                     let fresh = intent.operation.from_data().then_some(&*FRESHNESS);
                     realise(ctx.channel, t, &values, fresh)
