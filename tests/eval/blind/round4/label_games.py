@@ -570,7 +570,7 @@ add(T("asdfgh qwerty", "none", outcome="not_understood", focus="other", tags=["g
 add(T("can you recommend a good pizza place near the harbour", "none", outcome="not_understood", focus="other",
       tags=["off_beat"]))
 
-# --- voice transcripts
+# --- voice questions, as speech recognition writes them
 add(T("who won the womens one hundred metres free style", "podium", {"contest": SW100F}, focus="who",
       says=[winner(SW100F)], tags=["voice", "number_words"]))
 add(T("how did hot hick new vasco do in the butterfly", "competitor_result", {"competitor": "p072", "contest": SM200FLY},
