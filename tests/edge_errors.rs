@@ -4,13 +4,10 @@
 
 mod common;
 
-use std::sync::atomic::{AtomicUsize, Ordering};
 use std::sync::Arc;
-use std::time::Duration;
 
+use common::down::Down;
 use common::{demo_engine, test_settings, Server};
-use tidings::dialogue::store::{BoxFuture, KeepReply, Loaded, Saved};
-use tidings::dialogue::{Session, SessionStore, StoreError, Unanswered};
 
 #[tokio::test]
 async fn headers_too_large_get_a_431_in_the_error_shape() {
@@ -52,57 +49,6 @@ async fn a_retried_message_gets_the_same_bytes_back() {
     }
 }
 
-/// A store that is down, counting what would be put on the unanswered list.
-#[derive(Default)]
-struct Down {
-    noted: AtomicUsize,
-}
-
-fn down() -> StoreError {
-    StoreError::Unavailable("down for the test".into())
-}
-
-impl SessionStore for Down {
-    fn load<'a>(
-        &'a self,
-        _: &'a str,
-        _: Option<&'a str>,
-    ) -> BoxFuture<'a, Result<Loaded, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn save<'a>(
-        &'a self,
-        _: &'a str,
-        _: &'a Session,
-        _: u64,
-        _: Duration,
-        _: Option<KeepReply<'a>>,
-    ) -> BoxFuture<'a, Result<Saved, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn erase<'a>(&'a self, _: &'a str) -> BoxFuture<'a, Result<u64, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn note_unanswered<'a>(
-        &'a self,
-        _: &'a str,
-        _: &'a str,
-        _: &'a str,
-    ) -> BoxFuture<'a, Result<(), StoreError>> {
-        self.noted.fetch_add(1, Ordering::SeqCst);
-        Box::pin(async { Ok(()) })
-    }
-    fn unanswered(&self, _: usize) -> BoxFuture<'_, Result<Vec<Unanswered>, StoreError>> {
-        Box::pin(async { Ok(vec![]) })
-    }
-    fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn name(&self) -> &'static str {
-        "down"
-    }
-}
-
 #[tokio::test]
 async fn degraded_follow_ups_are_not_counted_as_not_understood() {
     let store = Arc::new(Down::default());
@@ -121,5 +67,5 @@ async fn degraded_follow_ups_are_not_counted_as_not_understood() {
     for _ in 0..20 {
         tokio::task::yield_now().await;
     }
-    assert_eq!(store.noted.load(Ordering::SeqCst), 0);
+    assert_eq!(store.noted(), 0);
 }

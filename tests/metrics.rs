@@ -13,12 +13,10 @@ use std::collections::BTreeMap;
 use std::io::Write;
 use std::process::{Command, Stdio};
 use std::sync::Arc;
-use std::time::Duration;
 
+use common::down::Down;
 use common::Server;
 use serde_json::{json, Value};
-use tidings::dialogue::store::BoxFuture;
-use tidings::dialogue::{KeepReply, Loaded, Saved, Session, SessionStore, StoreError, Unanswered};
 
 const METRICS_TOKEN: &str = "metrics-token-for-the-test";
 const ADMIN_TOKEN: &str = "admin-token-for-the-metrics-test";
@@ -357,56 +355,9 @@ async fn counts_move_with_traffic_and_parse_with_a_general_parser() {
     assert_eq!(kind("tidings_dataset_age_seconds"), "gauge");
 }
 
-/// A session store that is down for good.
-struct Down;
-
-fn down() -> StoreError {
-    StoreError::Unavailable("down for the test".into())
-}
-
-impl SessionStore for Down {
-    fn load<'a>(
-        &'a self,
-        _: &'a str,
-        _: Option<&'a str>,
-    ) -> BoxFuture<'a, Result<Loaded, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn save<'a>(
-        &'a self,
-        _: &'a str,
-        _: &'a Session,
-        _: u64,
-        _: Duration,
-        _: Option<KeepReply<'a>>,
-    ) -> BoxFuture<'a, Result<Saved, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn erase<'a>(&'a self, _: &'a str) -> BoxFuture<'a, Result<u64, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn note_unanswered<'a>(
-        &'a self,
-        _: &'a str,
-        _: &'a str,
-        _: &'a str,
-    ) -> BoxFuture<'a, Result<(), StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn unanswered(&self, _: usize) -> BoxFuture<'_, Result<Vec<Unanswered>, StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn ping(&self) -> BoxFuture<'_, Result<(), StoreError>> {
-        Box::pin(async { Err(down()) })
-    }
-    fn name(&self) -> &'static str {
-        "down"
-    }
-}
-
 #[tokio::test]
 async fn a_store_outage_shows_as_errors_and_degraded_replies() {
-    let s = Server::start(common::engine_with(Arc::new(Down), settings())).await;
+    let s = Server::start(common::engine_with(Arc::new(Down::default()), settings())).await;
     for i in 0..2 {
         let (status, body) = s.ask(&format!("d-{i}"), "who won the men's 100m?").await;
         assert_eq!(status, 200);

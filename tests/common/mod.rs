@@ -3,6 +3,7 @@
 #![allow(dead_code)]
 
 pub mod cluster;
+pub mod down;
 pub mod speech;
 
 use std::io::{BufRead, BufReader};
