@@ -19,6 +19,7 @@ use serde::{Deserialize, Serialize};
 use crate::cli::Common;
 use crate::dialogue::Outcome;
 use crate::engine::Engine;
+use crate::understand::frame::Focus;
 
 /// One labelled turn.
 #[derive(Debug, Clone, Deserialize)]
@@ -34,9 +35,10 @@ pub struct Turn {
     #[serde(default)]
     pub outcome: Option<Outcome>,
     /// What the question asks for (`who`, `count`, `margin`...; the values
-    /// are in docs/intents.md). A reply that answers with another focus
-    /// answers a different question: with outcome `answered` it counts as
-    /// a wrong answer even when every fact in it is true.
+    /// are in docs/intents.md). A reply whose intent does not declare
+    /// this focus among those it answers answers a different question:
+    /// with outcome `answered` it counts as a wrong answer even when every
+    /// fact in it is true.
     #[serde(default)]
     pub focus: Option<String>,
     /// Phrases the reply must contain (case-insensitive).
@@ -183,6 +185,7 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
         ..Report::default()
     };
     let (mut tp, mut fp, mut fn_) = (0usize, 0usize, 0usize);
+    let snapshot = engine.snapshot();
     for (ci, case) in cases.iter().enumerate() {
         let (turns, case_tags): (&[Turn], &[String]) = match case {
             Case::Single(turn) => (std::slice::from_ref(turn), &[]),
@@ -285,7 +288,20 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
             }
             let mut focus_wrong = false;
             if let (Some(want), Some(got)) = (&t.focus, &reply.focus) {
-                if want != got && reply.outcome == Outcome::Answered {
+                // The reply names one focus, the one the question's frame
+                // found; an intent that declares several answers each of
+                // them ("is X ahead of Y" is a yes or no and a comparison,
+                // and its reply gives both). So a reply answers another
+                // question only when its intent does not answer the
+                // labelled focus at all.
+                let declared = Focus::ALL.iter().find(|f| f.name() == want).is_some_and(|&f| {
+                    reply
+                        .intent
+                        .as_deref()
+                        .and_then(|i| snapshot.catalog.intent(i))
+                        .is_some_and(|i| i.answers_focus(f))
+                });
+                if want != got && !declared && reply.outcome == Outcome::Answered {
                     problems.push(format!("focus: expected {want}, answered {got}"));
                     focus_wrong = true;
                     answer_ok = false;
