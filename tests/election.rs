@@ -335,6 +335,22 @@ async fn check_moment(
         }
     }
 
+    // While a ward counts, "is X ahead of Y" is answered by the count so
+    // far; "did X win" is not answered until the ward declares.
+    for w in truth.wards.values().filter(|w| w.status == "live") {
+        let (ahead, _) = truth.person(&w.entries[0].0);
+        let (behind, _) = truth.person(&w.entries[1].0);
+        let fresh = format!("{reader}-so-far-{}", w.name);
+        let q = format!("is {ahead} ahead of {behind}");
+        let r = ask_at(client, base, &fresh, &q).await;
+        assert_eq!(r["intent"], "candidates_compared", "{moment}: {q}: {r}");
+        assert_eq!(r["outcome"], "answered", "{moment}: {q}: {r}");
+        assert!(text(&r).contains("so far"), "{moment}: {q}: {r}");
+        let q = format!("did {ahead} win");
+        let r = ask_at(client, base, &fresh, &q).await;
+        assert_eq!(r["outcome"], "no_data", "{moment}: {q}: {r}");
+    }
+
     // Which races are still open, with how much is counted in each.
     let r = ask("which races are still open?").await;
     let t = text(&r);

@@ -399,7 +399,7 @@ fn run(
             // declares, nor where it is counted.
             if let Some(f @ (Focus::When | Focus::Where)) = a.frame.focus {
                 let says_it = wording.is_none_or(|t| wording_gives(t, f, &values));
-                if spec.class == OutcomeClass::Answered && !says_it {
+                if spec.class != OutcomeClass::NoData && !says_it {
                     return not_covered(ctx, a, &Gap::Focus(f), Some(intent));
                 }
             }
@@ -421,6 +421,10 @@ fn run(
             let class = match spec.class {
                 OutcomeClass::Answered => Outcome::Answered,
                 OutcomeClass::NoData => Outcome::NoData,
+                // "Is she ahead?" is answered by the count so far; "did
+                // she win?" is not, until the count ends.
+                OutcomeClass::SoFar if a.frame.settled && !a.frame.live => Outcome::NoData,
+                OutcomeClass::SoFar => Outcome::Answered,
             };
             Reply {
                 text: said.text,

@@ -197,6 +197,10 @@ pub struct Frame {
     pub live: bool,
     /// The question is in the past tense ("who won", "did she finish").
     pub past: bool,
+    /// The question asks how a contest ended ("who won", "did she beat
+    /// him", "was he elected"), not how it stands: figures so far do not
+    /// answer it.
+    pub settled: bool,
     /// Something the data does not hold.
     pub unheld: Option<Unheld>,
     /// Content words nothing explains (filled in by the analysis once the
@@ -267,6 +271,12 @@ pub const EXTREMES: &[&str] = &[
     "lightest",
     "oldest",
     "youngest",
+];
+
+/// Words that ask how a contest ended rather than how it stands.
+const SETTLED: &[&str] = &[
+    "won", "win", "wins", "winner", "winners", "beat", "beaten", "lost", "lose", "elected",
+    "declared", "victory", "medal", "medals", "gold", "silver", "bronze", "podium",
 ];
 
 /// Words that put a question in the past tense.
@@ -504,6 +514,7 @@ pub fn read(
         ..Frame::default()
     };
     f.past = tokens.iter().any(|t| PAST.contains(t));
+    f.settled = tokens.iter().any(|t| SETTLED.contains(t));
     f.live = find(tokens, 0, &["right", "now"]).is_some()
         || find(tokens, 0, &["at", "the", "moment"]).is_some()
         || tokens.iter().any(|t| {
@@ -1456,6 +1467,16 @@ mod tests {
         assert_eq!(p("who was runner up"), Some(Place::Nth(2)));
         assert_eq!(p("who won last night"), None);
         assert_eq!(p("who won the last race"), None);
+    }
+
+    #[test]
+    fn a_question_about_how_it_ended_is_told_from_one_about_how_it_stands() {
+        assert!(frame("did she win").settled);
+        assert!(frame("who won caddenmill").settled);
+        assert!(frame("did pim beat elric").settled);
+        assert!(!frame("is she ahead of lowen").settled);
+        assert!(!frame("how many votes has she got so far").settled);
+        assert!(!frame("how far behind is he").settled);
     }
 
     #[test]

@@ -50,7 +50,7 @@ pub static SPEC: OpSpec = OpSpec {
         ),
         answered("level", &["names", "place", "contest_name"]),
         // Both placed in a contest still under way: who is ahead so far.
-        no_data(
+        so_far(
             "ahead_so_far",
             &[
                 "ahead",

@@ -55,7 +55,7 @@ pub static SPEC: OpSpec = OpSpec {
             ],
         ),
         answered("tied", &["name", "contest_name", "place_nth", "with"]),
-        no_data(
+        so_far(
             "leading",
             &[
                 "name",
@@ -67,7 +67,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "stale",
             ],
         ),
-        no_data(
+        so_far(
             "trailing",
             &[
                 "name",

@@ -206,6 +206,11 @@ pub enum OutcomeClass {
     Answered,
     /// Honestly nothing to give yet, or no such result.
     NoData,
+    /// Figures of a contest still under way: an answer to how it stands
+    /// ("is she ahead?", "how many votes has he got so far?"), and nothing
+    /// yet for how it ended ("did she win?"). The turn decides which from
+    /// the question.
+    SoFar,
 }
 
 /// One outcome an operation may return.
@@ -425,6 +430,15 @@ pub(crate) const fn no_data(name: &'static str, facts: &'static [&'static str]) 
     OutcomeSpec {
         name,
         class: OutcomeClass::NoData,
+        facts,
+    }
+}
+
+/// Shorthand for outcome declarations.
+pub(crate) const fn so_far(name: &'static str, facts: &'static [&'static str]) -> OutcomeSpec {
+    OutcomeSpec {
+        name,
+        class: OutcomeClass::SoFar,
         facts,
     }
 }

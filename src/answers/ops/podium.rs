@@ -45,7 +45,7 @@ pub static SPEC: OpSpec = OpSpec {
         // An award asked for in a round that gives none.
         answered("no_awards", &[]),
         // Still under way: who leads now.
-        no_data("live", &["leader", "mark", "stale", "share", "counted"]),
+        so_far("live", &["leader", "mark", "stale", "share", "counted"]),
         no_data("scheduled", &["start"]),
         no_data("no_result", &[]),
     ],

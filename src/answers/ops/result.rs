@@ -34,7 +34,7 @@ pub static SPEC: OpSpec = OpSpec {
             ],
         ),
         answered("did_not_finish", &["name", "status", "contest_name"]),
-        no_data(
+        so_far(
             "live",
             &[
                 "name",
