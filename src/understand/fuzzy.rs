@@ -97,7 +97,7 @@ pub fn soundex(word: &str) -> String {
 /// Plain Soundex keeps the first letter, so "catherine" (C365) and
 /// "kathryn" (K365) never meet; classing the first letter the way Soundex
 /// classes the others (c/k → 2, vowels/h/w/y → 0) lets them.
-fn sound_key(word: &str) -> u32 {
+pub(crate) fn sound_key(word: &str) -> u32 {
     let code = soundex(word);
     let mut bytes: [u8; 4] = match code.as_bytes().try_into() {
         Ok(b) => b,

@@ -12,7 +12,7 @@ use std::collections::{HashMap, HashSet};
 use aho_corasick::{AhoCorasick, AhoCorasickBuilder, MatchKind};
 
 use super::english;
-use super::fuzzy::{FuzzyHit, FuzzyIndex};
+use super::fuzzy::{self, FuzzyHit, FuzzyIndex};
 use super::normalize::normalize;
 use crate::dataset::{Dataset, EntityRef};
 
@@ -84,6 +84,9 @@ pub struct Lexicon {
     /// Words of the catalog's phrasings and other common words, which are
     /// never taken for a misspelt name.
     vocabulary: HashSet<String>,
+    /// The stems of those words: "finish" is explained by a question
+    /// that says "finished", "leaders" by one that says "leader".
+    vocab_stems: HashSet<String>,
     /// The words of the catalog's phrasings alone.
     phrasing: HashSet<String>,
     /// Every surface form, sorted, for exact lookups of a single form
@@ -99,6 +102,12 @@ pub struct Lexicon {
     /// most misspellings keep ("dun varick" → "dunvarick", like
     /// "dunvarrick"), so most questions pay for no extra lookup at all.
     name_shapes: HashSet<(usize, String, String)>,
+    /// How fuzzy names sound, by word count: the sound keys of their first
+    /// and last words. Speech recognition keeps the consonants of a name it
+    /// splits more often than its first letters ("done varick" for
+    /// Dunvarrick, "ivan hall" for Ivenhall): a glued form that sounds like
+    /// some name is looked up too.
+    name_sounds: HashSet<(usize, u32, u32)>,
 }
 
 /// The shape of a name, as `Lexicon` keeps it in `name_shapes`: its number
@@ -110,6 +119,17 @@ fn name_shape(name: &str) -> (usize, String, String) {
     let last = words[words.len() - 1];
     let skip = last.chars().count().saturating_sub(3);
     (words.len(), first, last.chars().skip(skip).collect())
+}
+
+/// The sound of a name, as `Lexicon` keeps it in `name_sounds`: its number
+/// of words and the sound keys of its first and last words.
+fn name_sound(name: &str) -> (usize, u32, u32) {
+    let words: Vec<&str> = name.split(' ').collect();
+    (
+        words.len(),
+        fuzzy::sound_key(words[0]),
+        fuzzy::sound_key(words[words.len() - 1]),
+    )
 }
 
 /// What a stretch of words may name, best first, with scores.
@@ -396,6 +416,7 @@ impl Lexicon {
         let mut fuzzy_targets: Vec<Vec<Target>> = Vec::new();
         let mut fuzzy_words = Vec::new();
         let mut name_shapes = HashSet::new();
+        let mut name_sounds = HashSet::new();
         for (surface, ts) in surfaces.iter().zip(&targets) {
             // Rounds and categories only when long enough that a close
             // spelling is not another word ("finall", "womans").
@@ -414,6 +435,7 @@ impl Lexicon {
             fuzzy_targets.push(keep);
             fuzzy_words.push(surface.split(' ').count());
             name_shapes.insert(name_shape(surface));
+            name_sounds.insert(name_sound(surface));
         }
         let fuzzy = FuzzyIndex::new(fuzzy_terms);
         let mut vocab_words: Vec<String> = vocabulary
@@ -436,16 +458,27 @@ impl Lexicon {
             fuzzy,
             fuzzy_targets,
             fuzzy_words,
+            vocab_stems: vocabulary
+                .iter()
+                .map(|w| super::classify::stem(w))
+                .collect(),
             vocabulary,
             vocab_index,
             vocab_words,
             name_shapes,
+            name_sounds,
         }
     }
 
     /// Whether a word is an ordinary word of the catalog's questions.
     pub fn is_vocabulary(&self, word: &str) -> bool {
         self.vocabulary.contains(word)
+    }
+
+    /// Whether a word is an ordinary word of the catalog's questions or
+    /// another form of one ("finish" for "finished", "times" for "time").
+    pub fn explains(&self, word: &str) -> bool {
+        self.vocabulary.contains(word) || self.vocab_stems.contains(&super::classify::stem(word))
     }
 
     /// Whether a word is used by some intent's phrasings.
@@ -725,14 +758,24 @@ impl Lexicon {
             while i + width <= tokens.len() {
                 let window = &tokens[i..i + width];
                 // All pieces but one at most must be words the questions do
-                // not use: "who won" never becomes "whowon", and a misspelt
-                // name between question words ("did Galkase win") costs no
-                // lookups here, while "kal ven mark" is still tried.
+                // not use: "who won" never becomes "whowon", and "kal ven
+                // mark" is still tried. A pair may hold one such word when
+                // the other is a long unknown one: speech recognition hears
+                // a name's first syllable as a word ("done varick"); the
+                // glued form must then still start and end, or sound, like
+                // a name.
                 let unknown = window
                     .iter()
                     .filter(|t| !self.vocabulary.contains(**t))
                     .count();
-                let needed = if width == 2 { 2 } else { width - 1 };
+                let long_unknown = window
+                    .iter()
+                    .any(|t| t.len() >= 5 && !self.vocabulary.contains(*t));
+                let needed = match width {
+                    2 if long_unknown => 1,
+                    2 => 2,
+                    _ => width - 1,
+                };
                 let ok = (i..i + width).all(|k| usable(covered, k)) && unknown >= needed;
                 if !ok {
                     i += 1;
@@ -750,7 +793,10 @@ impl Lexicon {
                         query.push_str(piece);
                     }
                     let words = query.split(' ').count();
-                    if query.len() < 6 || !self.name_shapes.contains(&name_shape(&query)) {
+                    if query.len() < 6
+                        || !(self.name_shapes.contains(&name_shape(&query))
+                            || self.name_sounds.contains(&name_sound(&query)))
+                    {
                         continue;
                     }
                     let hits: Vec<_> = self
@@ -1012,6 +1058,12 @@ mod tests {
         );
         // Everyday words are never glued into a name.
         assert_eq!(spotted(&lex, &d, "who won in"), vec![]);
+        // Pieces that sound like the name though their first letters differ
+        // (speech recognition keeps the consonants).
+        assert_eq!(
+            spotted(&lex, &d, "who won done varick"),
+            vec![(2, 4, "council/dunvarrick".to_string())]
+        );
     }
 
     #[test]
