@@ -10,6 +10,8 @@ command -v redis-server >/dev/null 2>&1 || need_pkgs+=(redis-server)
 # Unicode's NormalizationTest.txt, an external reference for the normaliser.
 [ -e /usr/share/unicode/NormalizationTest.txt ] || [ -e /usr/share/unicode/NormalizationTest.txt.bz2 ] || need_pkgs+=(unicode-data)
 command -v bzcat >/dev/null 2>&1 || need_pkgs+=(bzip2)
+# WordNet 3.0's index files: the understander's list of adverbs is checked against them.
+[ -e /usr/share/wordnet/index.adv ] || need_pkgs+=(wordnet-base)
 # eSpeak NG renders voice replies' SSML so tests can measure the audio (tests/speech_tools.rs).
 command -v espeak-ng >/dev/null 2>&1 || need_pkgs+=(espeak-ng)
 # Headless Chromium and its WebDriver server drive the /desk page in a real browser

@@ -506,6 +506,27 @@ pub fn is_dictionary_word(word: &str) -> bool {
     DICTIONARY.contains(word)
 }
 
+/// Single words English uses mostly as adverbs (WordNet 3.0, see
+/// `english-adverbs.COPYING` and tools/english-adverbs.py).
+static ADVERBS: std::sync::LazyLock<std::collections::HashSet<&'static str>> =
+    std::sync::LazyLock::new(|| {
+        include_str!("english-adverbs.txt")
+            .lines()
+            .filter(|l| !l.starts_with('#') && !l.is_empty())
+            .collect()
+    });
+
+/// Adverbs that narrow what is asked ("only the wards counted at the
+/// leisure centre"): answering without them answers a wider question.
+const NARROWING_ADVERBS: &[&str] = &["only", "solely", "exclusively", "except", "excluding"];
+
+/// Whether a word is an adverb that does not change what is asked
+/// ("altogether", "roughly", "anyway"): left unexplained, it lowers the
+/// confidence of an answer but does not make the question another one.
+pub fn is_softening_adverb(word: &str) -> bool {
+    ADVERBS.contains(word) && !NARROWING_ADVERBS.contains(&word)
+}
+
 /// Whether a word carries no content of its own (a function word or a word
 /// of chat).
 pub fn is_filler(word: &str) -> bool {
@@ -790,5 +811,48 @@ mod tests {
             checked += 1;
         }
         assert_eq!(checked, 2100);
+    }
+
+    /// WordNet 3.0 (Debian package wordnet-base): "altogether" and
+    /// "roughly" are tagged as adverbs more often than anything else;
+    /// "still" more often as an adjective, "night" is a noun and "finish"
+    /// a verb. "only" is an adverb that narrows what is asked.
+    #[test]
+    fn adverbs_that_do_not_change_the_question_follow_wordnet() {
+        for w in ["altogether", "roughly", "anyway", "actually", "currently"] {
+            assert!(is_softening_adverb(w), "{w}");
+        }
+        for w in ["still", "night", "finish", "height", "population", "only"] {
+            assert!(!is_softening_adverb(w), "{w}");
+        }
+    }
+
+    /// The committed list is what tools/english-adverbs.py derives from
+    /// the WordNet 3.0 index files Debian's wordnet-base ships.
+    #[test]
+    fn the_adverb_list_is_derived_from_wordnet() {
+        let dir = "/usr/share/wordnet";
+        assert!(
+            std::path::Path::new(dir).join("index.adv").exists(),
+            "{dir}/index.adv not found: install Debian's wordnet-base package \
+             (apt-get install -y wordnet-base)"
+        );
+        let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR"));
+        let out = std::process::Command::new("python3")
+            .arg(root.join("tools/english-adverbs.py"))
+            .arg(dir)
+            .output()
+            .expect("running python3 tools/english-adverbs.py");
+        assert!(
+            out.status.success(),
+            "{}",
+            String::from_utf8_lossy(&out.stderr)
+        );
+        let derived = String::from_utf8(out.stdout).unwrap();
+        assert_eq!(
+            derived.trim_end(),
+            include_str!("english-adverbs.txt").trim_end(),
+            "regenerate with: python3 tools/english-adverbs.py > src/understand/english-adverbs.txt"
+        );
     }
 }

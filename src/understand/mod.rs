@@ -284,7 +284,7 @@ impl Understanding {
                         .chars()
                         .all(|c| c.is_ascii_digit() || c == '.' || c == ':')
                     && !english::is_filler(t)
-                    && !self.lexicon.is_vocabulary(t)
+                    && !self.lexicon.explains(t)
                     && pointer_at(&toks, i).is_none()
             })
             .collect();
