@@ -21,6 +21,10 @@ const WEEKDAYS: [(&str, Weekday); 7] = [
     ("sunday", Weekday::Sunday),
 ];
 
+/// Parts of a day that may follow a day ("tomorrow night", "on Friday
+/// evening") and stay part of it.
+const PARTS_OF_DAY: &[&str] = &["morning", "afternoon", "evening", "night"];
+
 const MONTHS: [&str; 12] = [
     "january",
     "february",
@@ -76,6 +80,13 @@ pub fn find_days(tokens: &[&str], today: Date, past: bool) -> Vec<DayMention> {
         let t = tokens[i];
         let found = match t {
             "today" | "tonight" => Some((i + 1, today)),
+            // "last night" is the evening before; "this morning" today.
+            "last" if tokens.get(i + 1) == Some(&"night") => {
+                today.yesterday().ok().map(|d| (i + 2, d))
+            }
+            "this" if tokens.get(i + 1).is_some_and(|t| PARTS_OF_DAY.contains(t)) => {
+                Some((i + 2, today))
+            }
             "tomorrow" => today.tomorrow().ok().map(|d| (i + 1, d)),
             "yesterday" => today.yesterday().ok().map(|d| (i + 1, d)),
             _ => {
@@ -137,7 +148,10 @@ pub fn find_days(tokens: &[&str], today: Date, past: bool) -> Vec<DayMention> {
             }
         };
         match found {
-            Some((end, date)) => {
+            Some((mut end, date)) => {
+                if tokens.get(end).is_some_and(|t| PARTS_OF_DAY.contains(t)) {
+                    end += 1;
+                }
                 out.push(DayMention {
                     start: i,
                     end,
@@ -190,6 +204,13 @@ mod tests {
                 .map(|m| m.date)
         };
         assert_eq!(f("whats on today"), Some(today));
+        assert_eq!(f("who won last night"), Some(date(2027, 8, 13)));
+        assert_eq!(f("what was on this morning"), Some(today));
+        // A part of the day stays part of the day it follows.
+        let toks: Vec<&str> = "whats on tomorrow night".split(' ').collect();
+        assert_eq!(find_days(&toks, today, false)[0].end, 4);
+        // "last" alone is a place, not a day.
+        assert_eq!(f("who came last"), None);
         assert_eq!(f("whats on tomorrow"), Some(date(2027, 8, 15)));
         assert_eq!(f("on saturday"), Some(today));
         assert_eq!(f("on monday"), Some(date(2027, 8, 16)));
