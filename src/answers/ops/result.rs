@@ -31,6 +31,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "contest_name",
                 "share",
                 "counted",
+                "winner",
             ],
         ),
         answered("did_not_finish", &["name", "status", "contest_name"]),
@@ -124,5 +125,63 @@ fn run(input: &OpInput) -> OpOutput {
     if let Some(a) = &e.award {
         f.put("award", a.as_str());
     }
+    // "Did she win?" answered "she finished 2nd" leaves out who did.
+    if place > 1 {
+        let first: Vec<usize> = (0..c.entries.len())
+            .filter(|&i| c.entries[i].place == Some(1))
+            .collect();
+        if !first.is_empty() {
+            f.put("winner", super::support::labels(data, c, &first));
+        }
+    }
     OpOutput::done("answered", f, mentioned)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::answers::ops::testing::{entity, run_with};
+    use crate::answers::value::Style;
+    use crate::dataset::demo;
+
+    fn said(out: &OpOutput, fact: &str) -> Option<String> {
+        match out {
+            OpOutput::Done { facts, .. } => facts.get(fact).map(|v| v.render(Style::Text)),
+            other => panic!("{other:?}"),
+        }
+    }
+
+    /// Every placed finisher of every final in the demo data: a winner's
+    /// result names no other winner; anyone else's names who won, as the
+    /// data's first place has it.
+    #[test]
+    fn a_result_below_first_says_who_won() {
+        let d = demo();
+        let mut checked = 0;
+        for (ci, c) in d.contests.iter().enumerate() {
+            if c.status != Status::Final {
+                continue;
+            }
+            for e in &c.entries {
+                let (Some(pid), Some(place)) = (e.competitor.as_deref(), e.place) else {
+                    continue;
+                };
+                let pi = d.competitor(pid).unwrap();
+                let mut slots = Slots::new();
+                slots.insert("competitor".into(), entity(EntityRef::Competitor(pi)));
+                slots.insert("contest".into(), entity(EntityRef::Contest(ci)));
+                let out = run_with(run, &d, &slots);
+                let winner = said(&out, "winner");
+                if place == 1 {
+                    assert_eq!(winner, None, "{pid} in {}", c.id);
+                } else {
+                    let first = c.entries.iter().find(|o| o.place == Some(1)).unwrap();
+                    let label = super::super::support::entry_label(&d, first);
+                    assert_eq!(winner.as_deref(), Some(label.as_str()), "{pid} in {}", c.id);
+                    checked += 1;
+                }
+            }
+        }
+        assert!(checked > 20, "only {checked} results below first");
+    }
 }
