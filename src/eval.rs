@@ -294,13 +294,16 @@ pub async fn evaluate(engine: &Engine, cases: &[Case]) -> Report {
                 // and its reply gives both). So a reply answers another
                 // question only when its intent does not answer the
                 // labelled focus at all.
-                let declared = Focus::ALL.iter().find(|f| f.name() == want).is_some_and(|&f| {
-                    reply
-                        .intent
-                        .as_deref()
-                        .and_then(|i| snapshot.catalog.intent(i))
-                        .is_some_and(|i| i.answers_focus(f))
-                });
+                let declared = Focus::ALL
+                    .iter()
+                    .find(|f| f.name() == want)
+                    .is_some_and(|&f| {
+                        reply
+                            .intent
+                            .as_deref()
+                            .and_then(|i| snapshot.catalog.intent(i))
+                            .is_some_and(|i| i.answers_focus(f))
+                    });
                 if want != got && !declared && reply.outcome == Outcome::Answered {
                     problems.push(format!("focus: expected {want}, answered {got}"));
                     focus_wrong = true;

@@ -91,6 +91,23 @@ async fn pronouns(s: &Server) {
         ],
     )
     .await;
+    // "that" ending a question is whoever the last answer was about.
+    let r = talk(
+        s,
+        "reader-that",
+        &[
+            (
+                "who won the women's 100 m freestyle?",
+                &["Pevelle Cosevmont"],
+            ),
+            (
+                "which delegation is that?",
+                &["Pevelle Cosevmont", "Vastrelia"],
+            ),
+        ],
+    )
+    .await;
+    assert_eq!(r[1]["intent"], "competitor_delegation", "{}", r[1]);
     // Two women just named: "she" is unclear, so the reader is asked.
     let r = talk(
         s,

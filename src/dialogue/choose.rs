@@ -314,6 +314,9 @@ pub fn stray_words(data: &Dataset, a: &Analysis, filled: &Filled) -> Vec<usize> 
             !no_match
                 && (!beside_name(i) || english::is_dictionary_word(&a.tokens[i]))
                 && !slot_words.contains(&a.tokens[i])
+                // An adverb ("altogether", "roughly") rarely changes what
+                // is asked; it costs confidence, not the answer.
+                && !english::is_softening_adverb(&a.tokens[i])
         })
         .collect()
 }
@@ -346,9 +349,13 @@ pub fn points_there(tokens: &[String]) -> bool {
 
 /// Whether the last answer was about an event.
 fn has_last_contest(s: &Session) -> bool {
+    let last_turn = s.recent.iter().map(|r| r.turn).max();
     s.last_slots.values().any(|v| {
         matches!(v, crate::dialogue::session::StoredSlot::Entity { entity } if entity.kind == "contest")
-    })
+    }) || s
+        .recent
+        .iter()
+        .any(|r| Some(r.turn) == last_turn && r.entity.kind == "contest")
 }
 
 /// The parts of the question the intent, with these slots, leaves out, as
@@ -371,8 +378,12 @@ pub fn leftover(data: &Dataset, intent: &Intent, a: &Analysis, filled: &Filled) 
         }
         out.push(mention_words(data, a, m));
     }
+    // A day on which every contest of the data falls narrows nothing: on
+    // an election night "tonight" is the whole night.
+    let whole = |date| data.facts.iter().all(|f| f.start.date() == date);
     for d in &a.days {
-        let covered = takes(EntityKind::Date)
+        let covered = whole(d.date)
+            || takes(EntityKind::Date)
             || matches!(pending_kind, Some(EntityKind::Contest))
             || values.iter().any(|v| match v {
                 SlotValue::Entity {

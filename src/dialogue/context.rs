@@ -315,11 +315,28 @@ enum Pointer {
     They,
     /// "that race", "it": an event.
     That,
+    /// "that" or "this" ending a question ("which party is that?", "who's
+    /// that?"): whoever or whatever the last answer was about.
+    Whatever,
+}
+
+/// Whether the message ends by pointing with "that" or "this" after a
+/// verb: "which party is that", "who was this".
+pub fn ends_pointing(tokens: &[String]) -> bool {
+    let n = tokens.len();
+    n >= 2
+        && matches!(tokens[n - 1].as_str(), "that" | "this")
+        && matches!(tokens[n - 2].as_str(), "is" | "was" | "s")
 }
 
 /// The pronouns in a message, in order, each as often as it occurs: "did
 /// she beat her?" points at two people.
 fn pointers(a: &Analysis) -> Vec<Pointer> {
+    pointers_at(a).into_iter().map(|(_, p)| p).collect()
+}
+
+/// The same, each with the token it is at.
+fn pointers_at(a: &Analysis) -> Vec<(usize, Pointer)> {
     let mut out = Vec::new();
     for (i, t) in a.tokens.iter().enumerate() {
         let p = match t.as_str() {
@@ -327,6 +344,9 @@ fn pointers(a: &Analysis) -> Vec<Pointer> {
             "he" | "him" | "his" | "himself" => Some(Pointer::He),
             "they" | "them" | "their" | "theirs" | "themselves" => Some(Pointer::They),
             "it" | "its" => Some(Pointer::That),
+            "that" | "this" if i + 1 == a.tokens.len() && ends_pointing(&a.tokens) => {
+                Some(Pointer::Whatever)
+            }
             "that" | "this" | "same" => a
                 .tokens
                 .get(i + 1)
@@ -339,7 +359,7 @@ fn pointers(a: &Analysis) -> Vec<Pointer> {
                 .map(|_| Pointer::That),
             _ => None,
         };
-        out.extend(p);
+        out.extend(p.map(|p| (i, p)));
     }
     out
 }
@@ -360,9 +380,9 @@ pub fn points_back_at_someone(data: &Dataset, s: &Session, a: &Analysis) -> bool
 /// The pronouns that can stand for a slot of this kind.
 fn pointers_for(kind: EntityKind) -> &'static [Pointer] {
     match kind {
-        EntityKind::Competitor => &[Pointer::She, Pointer::He, Pointer::They],
-        EntityKind::Group => &[Pointer::They],
-        EntityKind::Contest => &[Pointer::That],
+        EntityKind::Competitor => &[Pointer::She, Pointer::He, Pointer::They, Pointer::Whatever],
+        EntityKind::Group => &[Pointer::They, Pointer::Whatever],
+        EntityKind::Contest => &[Pointer::That, Pointer::Whatever],
         _ => &[],
     }
 }
@@ -398,6 +418,9 @@ fn referents(
         (EntityKind::Competitor, EntityRef::Competitor(_), Pointer::They) => true,
         (EntityKind::Group, EntityRef::Group(_), Pointer::They) => true,
         (EntityKind::Contest, EntityRef::Contest(_), Pointer::That) => true,
+        (EntityKind::Competitor, EntityRef::Competitor(_), Pointer::Whatever)
+        | (EntityKind::Group, EntityRef::Group(_), Pointer::Whatever)
+        | (EntityKind::Contest, EntityRef::Contest(_), Pointer::Whatever) => true,
         _ => false,
     };
     let Some(turn) = s.recent.iter().map(|r| r.turn).max() else {
@@ -432,10 +455,25 @@ pub fn resolve_pointers(
     a: &Analysis,
     slots: &mut Slots,
 ) -> Option<Need> {
-    let mut ps = pointers(a);
+    let mut ps = pointers_at(a);
     if ps.is_empty() {
         return None;
     }
+    // Where the message first names each kind, to keep the order of two
+    // slots of one kind: "is she ahead of Rhosyn Dretholm" asks about her.
+    let first_named = |kind: EntityKind| {
+        a.mentions
+            .iter()
+            .filter(|m| {
+                m.candidates.first().is_some_and(|(t, _)| match (t, kind) {
+                    (Target::Entity(EntityRef::Competitor(_), _), EntityKind::Competitor)
+                    | (Target::Entity(EntityRef::Group(_), _), EntityKind::Group) => true,
+                    _ => false,
+                })
+            })
+            .map(|m| m.start)
+            .min()
+    };
     // Names in the message fill their slots first (a person named in full
     // is never also "she"); each pronoun then stands for one slot, and two
     // slots never get the same entity ("did she beat her?").
@@ -451,16 +489,28 @@ pub fn resolve_pointers(
         if slots.contains_key(&def.name) {
             continue;
         }
-        if let Some(i) = named_left.iter().position(|k| *k == def.kind) {
-            // The message names one of this kind: it fills this slot.
-            named_left.remove(i);
-            continue;
-        }
         let wanted = pointers_for(def.kind);
-        let Some(i) = ps.iter().position(|p| wanted.contains(p)) else {
+        if let Some(i) = named_left.iter().position(|k| *k == def.kind) {
+            // The message names one of this kind: it fills this slot,
+            // unless a pronoun comes before the name and another slot of
+            // this kind is left for the name.
+            let open = intent
+                .slots
+                .iter()
+                .filter(|d| d.kind == def.kind && !slots.contains_key(&d.name))
+                .count();
+            let named_of_kind = named_left.iter().filter(|k| **k == def.kind).count();
+            let before = first_named(def.kind)
+                .is_some_and(|at| ps.iter().any(|(p_at, p)| *p_at < at && wanted.contains(p)));
+            if !(before && open > named_of_kind) {
+                named_left.remove(i);
+                continue;
+            }
+        }
+        let Some(i) = ps.iter().position(|(_, p)| wanted.contains(p)) else {
             continue;
         };
-        let p = ps.remove(i);
+        let (_, p) = ps.remove(i);
         match referents(data, s, def.kind, p, &used).as_slice() {
             [] => {}
             [one] => {
@@ -495,7 +545,9 @@ pub fn carried_over(
     let def = intent.slot(slot)?;
     let last = load_slots(data, &s.last_slots);
     let mut same_kind = last.values().filter(|v| v.kind() == def.kind);
-    let v = same_kind.next()?;
+    let Some(v) = same_kind.next() else {
+        return there_in_last_answer(data, s, def.kind, a);
+    };
     if same_kind.next().is_some() {
         return None;
     }
@@ -516,6 +568,32 @@ pub fn carried_over(
         }),
         other => Some(other.clone()),
     }
+}
+
+/// The one event the last answer named, for "there" after a question that
+/// named none: "what party is she?" is answered "… in Fennick Green", and
+/// "how did the Lanterns do there?" means Fennick Green.
+fn there_in_last_answer(
+    data: &Dataset,
+    s: &Session,
+    kind: EntityKind,
+    a: &Analysis,
+) -> Option<SlotValue> {
+    if kind != EntityKind::Contest || !super::choose::points_there(&a.tokens) {
+        return None;
+    }
+    let turn = s.recent.iter().map(|r| r.turn).max()?;
+    let mut contests = s
+        .recent
+        .iter()
+        .filter(|r| r.turn == turn)
+        .filter_map(|r| load_entity(data, &r.entity))
+        .filter(|e| matches!(e, EntityRef::Contest(_)));
+    let one = contests.next()?;
+    contests
+        .next()
+        .is_none()
+        .then_some(SlotValue::Entity { entity: one })
 }
 
 /// Fills the intent's slots from the message, then from the conversation:

@@ -64,6 +64,11 @@ pub struct Session {
     #[serde(default)]
     pub last_slots: BTreeMap<String, StoredSlot>,
     pub pending: Option<Pending>,
+    /// Whether the last question asked how a contest ended ("who won the
+    /// marathon?") rather than how it stands, so that "and the men's?"
+    /// asks the same.
+    #[serde(default, skip_serializing_if = "std::ops::Not::not")]
+    pub last_settled: bool,
     /// Entities the last answers were about, most recent first: what "she",
     /// "they" and "that race" can refer to.
     #[serde(default)]
@@ -110,6 +115,7 @@ impl Session {
             last_intent: None,
             last_slots: BTreeMap::new(),
             pending: None,
+            last_settled: false,
             recent: Vec::new(),
             created_at: now,
             updated_at: now,

@@ -204,8 +204,12 @@ fn turn_inner(ctx: &TurnContext, session: Session, text: &str) -> (Reply, Sessio
     {
         let filled = fill(ctx.data, intent, &a, &carried);
         let confidence = filled.certainty;
+        // A variation asks what the last question asked, unless it says
+        // otherwise ("and now?").
+        s.last_settled = (s.last_settled || a.frame.settled) && !a.frame.live;
         (intent, filled, confidence)
     } else {
+        s.last_settled = a.frame.settled;
         match choose::choose(ctx.data, ctx.catalog, &s, &a) {
             Choice::Intent(c) => (c.intent, c.filled, c.confidence),
             Choice::NotUnderstood => return (not_understood(ctx, &a), s, false),
@@ -423,7 +427,7 @@ fn run(
                 OutcomeClass::NoData => Outcome::NoData,
                 // "Is she ahead?" is answered by the count so far; "did
                 // she win?" is not, until the count ends.
-                OutcomeClass::SoFar if a.frame.settled && !a.frame.live => Outcome::NoData,
+                OutcomeClass::SoFar if s.last_settled => Outcome::NoData,
                 OutcomeClass::SoFar => Outcome::Answered,
             };
             Reply {

@@ -274,9 +274,12 @@ pub const EXTREMES: &[&str] = &[
 ];
 
 /// Words that ask how a contest ended rather than how it stands.
+/// A question in the past tense ("how did she do", "what place did he
+/// get") asks the same, unless it says "so far" or "now".
 const SETTLED: &[&str] = &[
     "won", "win", "wins", "winner", "winners", "beat", "beaten", "lost", "lose", "elected",
-    "declared", "victory", "medal", "medals", "gold", "silver", "bronze", "podium",
+    "declared", "victory", "medal", "medals", "gold", "silver", "bronze", "podium", "did",
+    "finished", "ended", "came",
 ];
 
 /// Words that put a question in the past tense.
@@ -514,7 +517,9 @@ pub fn read(
         ..Frame::default()
     };
     f.past = tokens.iter().any(|t| PAST.contains(t));
-    f.settled = tokens.iter().any(|t| SETTLED.contains(t));
+    f.settled = tokens.iter().any(|t| SETTLED.contains(t))
+        && find(tokens, 0, &["so", "far"]).is_none()
+        && !f.live;
     f.live = find(tokens, 0, &["right", "now"]).is_some()
         || find(tokens, 0, &["at", "the", "moment"]).is_some()
         || tokens.iter().any(|t| {
@@ -743,7 +748,11 @@ fn focus(
     let pronouns = tokens
         .iter()
         .filter(|t| matches!(**t, "he" | "she" | "him" | "her" | "they" | "them"))
-        .count();
+        .count()
+        // "which party is that?": whoever was just talked about.
+        + usize::from(
+            n >= 2 && matches!(tokens[n - 1], "that" | "this") && matches!(tokens[n - 2], "is" | "was" | "s"),
+        );
     let people = mentions.iter().filter(|m| is_person(m)).count() + pronouns;
     let contest_named = mentions.iter().any(is_contest);
     let has = |w: &str| tokens.iter().enumerate().any(|(i, t)| *t == w && !named(i));
@@ -1477,6 +1486,9 @@ mod tests {
         assert!(!frame("is she ahead of lowen").settled);
         assert!(!frame("how many votes has she got so far").settled);
         assert!(!frame("how far behind is he").settled);
+        assert!(frame("how did she do in the marathon").settled);
+        assert!(!frame("how did she do so far").settled);
+        assert!(!frame("who is winning right now").settled);
     }
 
     #[test]
