@@ -7,7 +7,8 @@
 
 use serde::{Deserialize, Serialize};
 
-use super::load::{build, DataProblem, LoadError};
+use super::load::{build, record, syntax, DataProblem, LoadError};
+use super::locate::Spans;
 use super::model::{Competitor, Contest, Entry, Group, Id, Scenario, Sport, Status};
 use super::Dataset;
 
@@ -110,14 +111,17 @@ pub fn removes_too_much(current: &Records, new: &Records, share: f64) -> Vec<Dat
     kinds
         .into_iter()
         .filter(|(_, _, (gone, of))| *of > 0 && (*gone as f64) > share * (*of as f64))
-        .map(|(file, what, (gone, of))| DataProblem {
-            file: file.into(),
-            record: String::new(),
-            field: "id".into(),
-            message: format!(
-                "the replacement removes {gone} of {of} {what}, more than {:.0}%; send it with ?force=true if that is meant",
-                share * 100.0
-            ),
+        .map(|(file, what, (gone, of))| {
+            DataProblem::new(
+                file,
+                "",
+                "id",
+                String::new(),
+                format!(
+                    "the replacement removes {gone} of {of} {what}, more than {:.0}%; send it with ?force=true if that is meant",
+                    share * 100.0
+                ),
+            )
         })
         .collect()
 }
@@ -144,6 +148,46 @@ impl Records {
             self.contests,
             version,
         )
+    }
+}
+
+/// Name of a batch's body in its problems.
+pub const BATCH: &str = "batch";
+
+/// Reads a batch from its JSON text. A syntax error is reported at its line
+/// and column; otherwise every change that does not fit the format is
+/// reported, each at the place serde stopped in it.
+pub fn parse(text: &str) -> Result<Batch, Vec<DataProblem>> {
+    let mut p = Vec::new();
+    let Some(spans) = syntax(BATCH, text, &mut p) else {
+        return Err(p);
+    };
+    let whole = record::<Batch>(BATCH, text, &spans, "", &mut p);
+    if let Some(batch) = whole {
+        return Ok(batch);
+    }
+    // The first problem serde met may hide others: each change is read on
+    // its own, and the whole batch's problem stays only when no change has
+    // one (a misspelt top-level field, say).
+    let mut each = Vec::new();
+    if let Some(items) = spans.member("changes").and_then(Spans::items) {
+        for (i, item) in items.iter().enumerate() {
+            record::<Change>(BATCH, text, item, &format!("change {}", i + 1), &mut each);
+        }
+    }
+    Err(if each.is_empty() { p } else { each })
+}
+
+/// Places the batch's problems at their line and column in the batch's
+/// text, reported under `name`; problems about records the batch did not
+/// touch stay as they are.
+pub fn locate(problems: &mut [DataProblem], name: &str, text: &str) {
+    let spans = Spans::scan(text);
+    for problem in problems.iter_mut().filter(|p| p.file == BATCH) {
+        match &spans {
+            Some(s) if problem.line.is_none() => problem.locate(name, text, s),
+            _ => problem.file = name.to_string(),
+        }
     }
 }
 
@@ -177,65 +221,162 @@ pub fn apply(data: &Dataset, batch: &Batch, now: &str) -> Result<Dataset, Vec<Da
     if batch.changes.is_empty() {
         problems.push(problem(0, "changes", "a batch needs at least one change"));
     }
+    // A change that cannot be made is left out and the others are made,
+    // so the records' check below still finds the problems they have.
     for (i, change) in batch.changes.iter().enumerate() {
         let n = i + 1;
         if let Err(p) = apply_one(&mut r, change, n) {
             problems.push(p);
         }
     }
-    if !problems.is_empty() {
-        return Err(problems);
-    }
     if let Some(t) = &batch.as_of {
         // The data's time only moves forward.
         match t.parse::<jiff::Timestamp>() {
-            Err(_) => {
-                return Err(vec![problem(
-                    0,
-                    "as_of",
-                    "expected an RFC 3339 time with offset",
-                )])
-            }
-            Ok(at) if at < data.as_of => {
-                return Err(vec![problem(
-                    0,
-                    "as_of",
-                    &format!(
-                        "{t} is earlier than the data's as_of; the data's time only moves forward"
-                    ),
-                )])
-            }
+            Err(_) => problems.push(problem(0, "as_of", "expected an RFC 3339 time with offset")),
+            Ok(at) if at < data.as_of => problems.push(problem(
+                0,
+                "as_of",
+                &format!(
+                    "{t} is earlier than the data's as_of; the data's time only moves forward"
+                ),
+            )),
             Ok(_) => {}
         }
     }
     // Without a time of its own the batch is as of now, unless the data are
-    // already later (a fixed clock behind the feed): never backwards.
+    // already later (a fixed clock behind the feed): never backwards. A
+    // time that does not read leaves the data's as it was for the check.
     r.scenario.as_of = match &batch.as_of {
-        Some(t) => t.clone(),
+        Some(t) if problems.iter().all(|p| p.field != "as_of") => t.clone(),
+        Some(_) => r.scenario.as_of.clone(),
         None => match now.parse::<jiff::Timestamp>() {
             Ok(n) if n < data.as_of => r.scenario.as_of.clone(),
             _ => now.to_string(),
         },
     };
-    r.build(data.version + 1).map_err(|e| match e {
-        LoadError::Invalid(p) => p,
-        LoadError::File(m) => vec![problem(0, "batch", &m)],
-    })
-}
-
-fn problem(n: usize, field: &str, message: &str) -> DataProblem {
-    DataProblem {
-        file: "batch".into(),
-        record: if n == 0 {
-            String::new()
-        } else {
-            format!("change {n}")
-        },
-        field: field.into(),
-        message: message.into(),
+    let touched = touched(&r, batch);
+    match r.build(data.version + 1) {
+        Ok(next) if problems.is_empty() => Ok(next),
+        Ok(_) => Err(problems),
+        Err(LoadError::Invalid(p)) => {
+            problems.extend(p.into_iter().map(|p| in_batch(p, &touched)));
+            Err(problems)
+        }
+        Err(LoadError::File(m)) => {
+            problems.push(problem(0, "batch", &m));
+            Err(problems)
+        }
     }
 }
 
+/// A problem with `field` of change `n` (1-based; 0 for the batch itself),
+/// placed at that field in the batch; `field` may go on into the value
+/// (`add/2`, the third alias).
+fn problem(n: usize, field: &str, message: &str) -> DataProblem {
+    let (record, pointer) = if n == 0 {
+        (String::new(), format!("/{field}"))
+    } else {
+        (format!("change {n}"), format!("/changes/{}/{field}", n - 1))
+    };
+    let name = field.split('/').next().unwrap_or(field);
+    DataProblem::new(BATCH, &record, name, pointer, message.into())
+}
+
+/// For each record the batch changed, by file and index in the records
+/// after the batch: the last change that touched it, and the pointer in
+/// the batch under which that change holds the record's fields.
+type Touched = std::collections::HashMap<(&'static str, usize), (usize, String)>;
+
+fn touched(r: &Records, batch: &Batch) -> Touched {
+    let mut out = Touched::new();
+    let contest = |id: &str| r.contests.iter().position(|c| c.id == id);
+    for (i, change) in batch.changes.iter().enumerate() {
+        let here = format!("/changes/{i}");
+        let (key, under) = match change {
+            Change::Results { contest: id, .. } | Change::Schedule { contest: id, .. } => {
+                (contest(id).map(|x| ("contests.json", x)), here)
+            }
+            Change::AddContest { contest: c } => (
+                contest(&c.id).map(|x| ("contests.json", x)),
+                format!("{here}/contest"),
+            ),
+            Change::AddCompetitor { competitor } => (
+                r.competitors
+                    .iter()
+                    .position(|c| c.id == competitor.id)
+                    .map(|x| ("competitors.json", x)),
+                format!("{here}/competitor"),
+            ),
+            Change::Aliases { of, id, .. } => {
+                let key = match of.as_str() {
+                    "competitor" => r
+                        .competitors
+                        .iter()
+                        .position(|c| c.id == *id)
+                        .map(|x| ("competitors.json", x)),
+                    "group" => r
+                        .groups
+                        .iter()
+                        .position(|g| g.id == *id)
+                        .map(|x| ("groups.json", x)),
+                    "contest" => contest(id).map(|x| ("contests.json", x)),
+                    "sport" => r
+                        .sports
+                        .iter()
+                        .position(|s| s.id == *id)
+                        .map(|x| ("sports.json", x)),
+                    _ => None,
+                };
+                // The aliases a change adds stand in its `add` list.
+                (key, format!("{here}/add"))
+            }
+        };
+        if let Some(key) = key {
+            out.insert(key, (i + 1, under));
+        }
+    }
+    out
+}
+
+/// A problem the records' check found, moved into the batch: to the change
+/// that made the record it is about, with its record naming both the change
+/// and the record. A problem with a record the batch did not touch (an
+/// existing group whose alias a new competitor's name now clashes with) is
+/// placed at the batch as a whole.
+fn in_batch(p: DataProblem, touched: &Touched) -> DataProblem {
+    let mut steps = p.pointer.splitn(3, '/').skip(1);
+    let index = steps.next().and_then(|s| s.parse::<usize>().ok());
+    let rest = steps.next().unwrap_or_default();
+    let file = super::load::FILES.iter().find(|f| **f == p.file);
+    let found = match (file, index) {
+        (Some(file), Some(index)) => touched.get(&(*file, index)),
+        _ => None,
+    };
+    let Some((n, under)) = found else {
+        let record = if p.record.is_empty() {
+            p.file.clone()
+        } else {
+            format!("{} {}", p.file, p.record)
+        };
+        return DataProblem::new(BATCH, &record, &p.field, String::new(), p.message);
+    };
+    let pointer = if under.ends_with("/add") || rest.is_empty() {
+        under.clone()
+    } else {
+        format!("{under}/{rest}")
+    };
+    DataProblem::new(
+        BATCH,
+        &format!("change {n} ({} {})", p.file, p.record),
+        &p.field,
+        pointer,
+        p.message,
+    )
+}
+
+// A problem is large for an error, but these run once per change of a
+// batch, never in a loop that a large error would slow.
+#[allow(clippy::result_large_err)]
 fn contest_mut<'a>(r: &'a mut Records, id: &str, n: usize) -> Result<&'a mut Contest, DataProblem> {
     r.contests
         .iter_mut()
@@ -243,6 +384,7 @@ fn contest_mut<'a>(r: &'a mut Records, id: &str, n: usize) -> Result<&'a mut Con
         .ok_or_else(|| problem(n, "contest", &format!("no contest {id:?}")))
 }
 
+#[allow(clippy::result_large_err)]
 fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProblem> {
     match change {
         Change::Results {
@@ -252,6 +394,11 @@ fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProbl
             updated,
             counted,
         } => {
+            // Checked before anything changes: a change is made whole or
+            // not at all.
+            if counted.is_some_and(|share| !(0.0..=1.0).contains(&share)) {
+                return Err(problem(n, "counted", "counted is a share from 0 to 1"));
+            }
             let c = contest_mut(r, contest, n)?;
             if let Some(s) = status {
                 c.status = *s;
@@ -262,11 +409,8 @@ fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProbl
             if updated.is_some() {
                 c.updated = updated.clone();
             }
-            if let Some(share) = counted {
-                if !(0.0..=1.0).contains(share) {
-                    return Err(problem(n, "counted", "counted is a share from 0 to 1"));
-                }
-                c.counted = Some(*share);
+            if counted.is_some() {
+                c.counted = *counted;
             }
         }
         Change::Schedule {
@@ -338,10 +482,14 @@ fn apply_one(r: &mut Records, change: &Change, n: usize) -> Result<(), DataProbl
             let Some(list) = list else {
                 return Err(problem(n, "id", &format!("no {of} {id:?}")));
             };
+            if let Some(k) = add.iter().position(|a| a.trim().is_empty()) {
+                return Err(problem(
+                    n,
+                    &format!("add/{k}"),
+                    "an alias must not be empty",
+                ));
+            }
             for a in add {
-                if a.trim().is_empty() {
-                    return Err(problem(n, "add", "an alias must not be empty"));
-                }
                 if !list.contains(a) {
                     list.push(a.clone());
                 }

@@ -12,6 +12,7 @@ use std::path::{Path, PathBuf};
 use jiff::{civil::DateTime, tz::TimeZone, Timestamp};
 use serde::de::DeserializeOwned;
 
+use super::locate::{line_col, offset_of, Spans};
 use super::mark;
 use super::model::*;
 use super::{ContestFacts, Dataset};
@@ -19,26 +20,60 @@ use super::{ContestFacts, Dataset};
 /// One thing wrong with the data.
 #[derive(Debug, Clone, PartialEq, Eq, serde::Serialize)]
 pub struct DataProblem {
-    /// The file, relative to what the caller gave.
+    /// The file, relative to what the caller gave; once located, as the
+    /// caller named it.
     pub file: String,
     /// The record's id, or its position when it has none.
     pub record: String,
     /// The field at fault.
     pub field: String,
+    /// Where the field stands in its file, as a JSON pointer (RFC 6901):
+    /// `/3/entries/1/award`. A field that is absent is found at its record.
+    pub pointer: String,
+    /// Line and column (1-based, in characters) of `pointer` in the file,
+    /// once the problem is located in the file's text.
+    pub line: Option<usize>,
+    pub column: Option<usize>,
     pub message: String,
+}
+
+impl DataProblem {
+    /// A problem not yet located in any text.
+    pub fn new(file: &str, record: &str, field: &str, pointer: String, message: String) -> Self {
+        DataProblem {
+            file: file.to_string(),
+            record: record.to_string(),
+            field: field.to_string(),
+            pointer,
+            line: None,
+            column: None,
+            message,
+        }
+    }
+
+    /// Finds the problem's pointer in `text` (the file it names, parsed as
+    /// `spans`) and reports it under `name`.
+    pub fn locate(&mut self, name: &str, text: &str, spans: &Spans) {
+        let (line, column) = line_col(text, spans.find(&self.pointer).start);
+        self.file = name.to_string();
+        self.line = Some(line);
+        self.column = Some(column);
+    }
 }
 
 impl fmt::Display for DataProblem {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        if self.record.is_empty() {
-            write!(f, "{}: {}", self.file, self.message)
-        } else {
-            write!(
-                f,
-                "{}: record {}: field {}: {}",
-                self.file, self.record, self.field, self.message
-            )
+        write!(f, "{}", self.file)?;
+        if let (Some(l), Some(c)) = (self.line, self.column) {
+            write!(f, ":{l}:{c}")?;
         }
+        if !self.record.is_empty() {
+            write!(f, ": record {}", self.record)?;
+        }
+        if !self.field.is_empty() {
+            write!(f, ": field {}", self.field)?;
+        }
+        write!(f, ": {}", self.message)
     }
 }
 
@@ -84,30 +119,220 @@ pub type FileSource<'a> = dyn Fn(&str) -> Result<(String, String), LoadError> + 
 
 /// Reads and validates a scenario from any source of file texts; `read`
 /// returns the name to report and the text of one of [`FILES`].
+///
+/// Each file is parsed on its own, so a broken file does not hide the
+/// problems of the others, and each record of a file on its own, so every
+/// record that does not fit the model is reported. The records are checked
+/// against each other only when they all parse (a record that did not
+/// parse would make the rest look wrong). Every problem is located at its
+/// file's line and column.
 pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
-    let scenario: Scenario = parse(read("scenario.json")?)?;
-    let sports: Vec<Sport> = parse(read("sports.json")?)?;
-    let groups: Vec<Group> = parse(read("groups.json")?)?;
-    let competitors: Vec<Competitor> = parse(read("competitors.json")?)?;
-    let contests: Vec<Contest> = parse(read("contests.json")?)?;
-    build(scenario, sports, groups, competitors, contests, 1)
+    let mut texts = Vec::with_capacity(FILES.len());
+    for name in FILES {
+        texts.push(read(name)?);
+    }
+    let mut p = Vec::new();
+    let spans: Vec<Option<Spans>> = texts
+        .iter()
+        .map(|(name, text)| syntax(name, text, &mut p))
+        .collect();
+    let scenario = spans[0]
+        .as_ref()
+        .and_then(|s| record::<Scenario>(&texts[0].0, &texts[0].1, s, "", &mut p));
+    let sports = records::<Sport>(&texts[1], spans[1].as_ref(), &mut p);
+    let groups = records::<Group>(&texts[2], spans[2].as_ref(), &mut p);
+    let competitors = records::<Competitor>(&texts[3], spans[3].as_ref(), &mut p);
+    let contests = records::<Contest>(&texts[4], spans[4].as_ref(), &mut p);
+    let (Some(scenario), Some(sports), Some(groups), Some(competitors), Some(contests)) =
+        (scenario, sports, groups, competitors, contests)
+    else {
+        return Err(LoadError::Invalid(p));
+    };
+    build(scenario, sports, groups, competitors, contests, 1).map_err(|e| match e {
+        LoadError::Invalid(mut problems) => {
+            for problem in &mut problems {
+                if let Some(i) = FILES.iter().position(|f| *f == problem.file) {
+                    if let Some(s) = &spans[i] {
+                        problem.locate(&texts[i].0, &texts[i].1, s);
+                    }
+                }
+            }
+            // In the order an editor reads the files: file by file, top down.
+            problems.sort_by_key(|p| {
+                let file = texts.iter().position(|(name, _)| *name == p.file);
+                (file, p.line, p.column)
+            });
+            LoadError::Invalid(problems)
+        }
+        other => other,
+    })
 }
 
-fn parse<T: DeserializeOwned>((name, text): (String, String)) -> Result<T, LoadError> {
-    serde_json::from_str(&text)
-        .map_err(|e| LoadError::File(format!("{name}:{}:{}: {e}", e.line(), e.column())))
+/// Checks that `text` is one JSON value; its spans, or a problem at the
+/// place serde stopped.
+pub fn syntax(name: &str, text: &str, p: &mut Vec<DataProblem>) -> Option<Spans> {
+    if let Err(e) = serde_json::from_str::<serde::de::IgnoredAny>(text) {
+        p.push(serde_problem(name, text, None, "", &e));
+        return None;
+    }
+    let spans = Spans::scan(text);
+    if spans.is_none() {
+        // serde accepted the text, so the scanner should too.
+        p.push(DataProblem::new(
+            name,
+            "",
+            "",
+            String::new(),
+            "cannot read this JSON".into(),
+        ));
+    }
+    spans
+}
+
+/// Every record of an array file, each parsed from its own part of the
+/// text; `None` when the file is not an array or any record does not fit.
+fn records<T: DeserializeOwned>(
+    (name, text): &(String, String),
+    spans: Option<&Spans>,
+    p: &mut Vec<DataProblem>,
+) -> Option<Vec<T>> {
+    let spans = spans?;
+    let Some(items) = spans.items() else {
+        let mut problem = DataProblem::new(
+            name,
+            "",
+            "",
+            String::new(),
+            "expected an array of records: [ {...}, {...} ]".into(),
+        );
+        problem.locate(name, text, spans);
+        p.push(problem);
+        return None;
+    };
+    let before = p.len();
+    let out: Vec<T> = items
+        .iter()
+        .enumerate()
+        .filter_map(|(i, item)| record(name, text, item, &record_name(text, item, i), p))
+        .collect();
+    (p.len() == before).then_some(out)
+}
+
+/// One record, parsed from its span of the text; a problem at serde's
+/// position otherwise.
+pub fn record<T: DeserializeOwned>(
+    name: &str,
+    text: &str,
+    item: &Spans,
+    record: &str,
+    p: &mut Vec<DataProblem>,
+) -> Option<T> {
+    match serde_json::from_str(&text[item.start..item.end]) {
+        Ok(v) => Some(v),
+        Err(e) => {
+            p.push(serde_problem(name, text, Some(item), record, &e));
+            None
+        }
+    }
+}
+
+/// How a record is named in a problem: its id when it has a string one,
+/// else its position (`#3`).
+pub fn record_name(text: &str, item: &Spans, i: usize) -> String {
+    item.member("id")
+        .and_then(|id| serde_json::from_str::<String>(&text[id.start..id.end]).ok())
+        .filter(|id| !id.trim().is_empty())
+        .unwrap_or_else(|| format!("#{}", i + 1))
+}
+
+/// Where a problem serde found in a record is best shown: an unknown field
+/// at its name, an unknown value at the value, a missing field at its
+/// object, a value of the wrong type where it starts. serde's own position
+/// is after the fact (past the name, the value or the whole object).
+fn refine(spans: &Spans, text: &str, at: usize, message: &str) -> usize {
+    let quoted = |prefix: &str| {
+        message
+            .strip_prefix(prefix)
+            .and_then(|rest| rest.split('`').next())
+    };
+    let better = if let Some(name) = quoted("unknown field `") {
+        spans.key_nearest(name, at)
+    } else if let Some(value) = quoted("unknown variant `") {
+        spans.string_nearest(text, value, at)
+    } else if message.starts_with("missing field `") {
+        spans.object_at(at.saturating_sub(1))
+    } else {
+        spans.scalar_at(at)
+    };
+    better.unwrap_or(at)
+}
+
+/// A serde error in the part of `text` that `within` spans (the whole text
+/// when `None`), located in the whole text.
+pub fn serde_problem(
+    name: &str,
+    text: &str,
+    within: Option<&Spans>,
+    record: &str,
+    e: &serde_json::Error,
+) -> DataProblem {
+    let full = e.to_string();
+    let mut message = full
+        .strip_suffix(&format!(" at line {} column {}", e.line(), e.column()))
+        .unwrap_or(&full)
+        .to_string();
+    // serde names the Rust types it expected; an editor knows JSON's.
+    for (rust, json) in [
+        ("expected u32", "expected a whole number"),
+        ("expected f64", "expected a number"),
+        ("expected a sequence", "expected a list [...]"),
+        ("expected a boolean", "expected true or false"),
+    ] {
+        if let Some(rest) = message.strip_suffix(rust) {
+            message = format!("{rest}{json}");
+        }
+    }
+    if let Some((rest, _)) = message.split_once("expected struct ") {
+        message = format!("{rest}expected an object {{...}}");
+    }
+    let base = within.map_or(0, |s| s.start);
+    let part = &text[base..];
+    let mut at = base + offset_of(part, e.line(), e.column());
+    if let (true, Some(spans)) = (e.is_data(), within) {
+        at = refine(spans, text, at, &message);
+    }
+    let (line, column) = line_col(text, at);
+    DataProblem {
+        file: name.to_string(),
+        record: record.to_string(),
+        field: String::new(),
+        pointer: String::new(),
+        line: Some(line),
+        column: Some(column),
+        message,
+    }
 }
 
 struct Problems(Vec<DataProblem>);
 
 impl Problems {
-    fn add(&mut self, file: &str, record: &str, field: &str, message: impl Into<String>) {
-        self.0.push(DataProblem {
-            file: file.to_string(),
-            record: record.to_string(),
-            field: field.to_string(),
-            message: message.into(),
-        });
+    /// A problem with `field` of `record`; `pointer` is the field's place
+    /// in its file.
+    fn add(
+        &mut self,
+        file: &str,
+        record: &str,
+        field: &str,
+        pointer: String,
+        message: impl Into<String>,
+    ) {
+        self.0.push(DataProblem::new(
+            file,
+            record,
+            field,
+            pointer,
+            message.into(),
+        ));
     }
 }
 
@@ -121,9 +346,15 @@ fn index<T>(
     for (i, item) in items.iter().enumerate() {
         let key = id(item);
         if key.trim().is_empty() {
-            p.add(file, &format!("#{}", i + 1), "id", "id is empty");
+            p.add(
+                file,
+                &format!("#{}", i + 1),
+                "id",
+                format!("/{i}/id"),
+                "id is empty",
+            );
         } else if ix.insert(key.to_string(), i).is_some() {
-            p.add(file, key, "id", "duplicate id");
+            p.add(file, key, "id", format!("/{i}/id"), "duplicate id");
         }
     }
     ix
@@ -147,6 +378,7 @@ pub fn build(
                 sf,
                 &scenario.id,
                 "time_zone",
+                "/time_zone".into(),
                 format!("unknown time zone {:?}", scenario.time_zone),
             );
             TimeZone::UTC
@@ -159,6 +391,7 @@ pub fn build(
                 sf,
                 &scenario.id,
                 "as_of",
+                "/as_of".into(),
                 "expected an RFC 3339 time with offset",
             );
             Timestamp::UNIX_EPOCH
@@ -172,32 +405,35 @@ pub fn build(
                 sf,
                 &scenario.id,
                 "clock",
+                "/clock".into(),
                 "expected an RFC 3339 time with offset",
             );
             None
         }
     };
     let mut seen = HashSet::new();
-    for a in &scenario.awards {
+    for (k, a) in scenario.awards.iter().enumerate() {
         if !seen.insert(a) {
             p.add(
                 sf,
                 &scenario.id,
                 "awards",
+                format!("/awards/{k}"),
                 format!("award {a:?} listed twice"),
             );
         }
     }
 
     let sport_ix = index(&sports, |s| &s.id, "sports.json", &mut p);
-    for s in &sports {
+    for (i, s) in sports.iter().enumerate() {
         let mut ds = HashSet::new();
-        for d in &s.disciplines {
+        for (k, d) in s.disciplines.iter().enumerate() {
             if !ds.insert(&d.id) {
                 p.add(
                     "sports.json",
                     &s.id,
                     "disciplines",
+                    format!("/{i}/disciplines/{k}/id"),
                     format!("duplicate discipline id {:?}", d.id),
                 );
             }
@@ -207,25 +443,44 @@ pub fn build(
     let competitor_ix = index(&competitors, |c| &c.id, "competitors.json", &mut p);
     let contest_ix = index(&contests, |c| &c.id, "contests.json", &mut p);
 
-    for c in &competitors {
+    for (i, c) in competitors.iter().enumerate() {
         let f = "competitors.json";
         if !group_ix.contains_key(&c.group) {
-            p.add(f, &c.id, "group", format!("no group with id {:?}", c.group));
+            p.add(
+                f,
+                &c.id,
+                "group",
+                format!("/{i}/group"),
+                format!("no group with id {:?}", c.group),
+            );
         }
         if !sport_ix.contains_key(&c.sport) {
-            p.add(f, &c.id, "sport", format!("no sport with id {:?}", c.sport));
+            p.add(
+                f,
+                &c.id,
+                "sport",
+                format!("/{i}/sport"),
+                format!("no sport with id {:?}", c.sport),
+            );
         }
         if c.given.trim().is_empty() && c.family.trim().is_empty() {
-            p.add(f, &c.id, "family", "a competitor needs a name");
+            p.add(
+                f,
+                &c.id,
+                "family",
+                format!("/{i}/family"),
+                "a competitor needs a name",
+            );
         }
     }
 
     check_alias_clashes(&groups, &competitors, &mut p);
 
     let mut facts = Vec::with_capacity(contests.len());
-    for c in &contests {
+    for (ci, c) in contests.iter().enumerate() {
         facts.push(check_contest(
             c,
+            ci,
             &scenario,
             &tz,
             &sports,
@@ -326,16 +581,17 @@ fn check_alias_clashes(groups: &[Group], competitors: &[Competitor], p: &mut Pro
         }
     }
     let mut people: HashMap<String, &str> = HashMap::new();
-    for c in competitors {
+    for (i, c) in competitors.iter().enumerate() {
         people
             .entry(normalize(&format!("{} {}", c.given, c.family)))
             .or_insert(&c.id);
-        for a in &c.aliases {
+        for (k, a) in c.aliases.iter().enumerate() {
             if let Some(g) = group_names.get(&normalize(a)) {
                 p.add(
                     "competitors.json",
                     &c.id,
                     "aliases",
+                    format!("/{i}/aliases/{k}"),
                     format!(
                         "alias {a:?} is also a name of group {g:?}: a name must mean one thing"
                     ),
@@ -343,13 +599,14 @@ fn check_alias_clashes(groups: &[Group], competitors: &[Competitor], p: &mut Pro
             }
         }
     }
-    for g in groups {
-        for a in &g.aliases {
+    for (i, g) in groups.iter().enumerate() {
+        for (k, a) in g.aliases.iter().enumerate() {
             if let Some(c) = people.get(&normalize(a)) {
                 p.add(
                     "groups.json",
                     &g.id,
                     "aliases",
+                    format!("/{i}/aliases/{k}"),
                     format!("alias {a:?} is also the name of competitor {c:?}: a name must mean one thing"),
                 );
             }
@@ -360,6 +617,7 @@ fn check_alias_clashes(groups: &[Group], competitors: &[Competitor], p: &mut Pro
 #[allow(clippy::too_many_arguments)]
 fn check_contest(
     c: &Contest,
+    ci: usize,
     scenario: &Scenario,
     tz: &TimeZone,
     sports: &[Sport],
@@ -370,14 +628,22 @@ fn check_contest(
     p: &mut Problems,
 ) -> ContestFacts {
     let f = "contests.json";
+    let at = |field: &str| format!("/{ci}/{field}");
     match sport_ix.get(&c.sport) {
-        None => p.add(f, &c.id, "sport", format!("no sport with id {:?}", c.sport)),
+        None => p.add(
+            f,
+            &c.id,
+            "sport",
+            at("sport"),
+            format!("no sport with id {:?}", c.sport),
+        ),
         Some(&s) => {
             if !sports[s].disciplines.iter().any(|d| d.id == c.discipline) {
                 p.add(
                     f,
                     &c.id,
                     "discipline",
+                    at("discipline"),
                     format!("sport {:?} has no discipline {:?}", c.sport, c.discipline),
                 );
             }
@@ -394,6 +660,7 @@ fn check_contest(
                 f,
                 &c.id,
                 "start",
+                at("start"),
                 format!(
                     "expected a local time such as 2027-08-14T19:40, got {:?}",
                     c.start
@@ -406,13 +673,25 @@ fn check_contest(
         None => None,
         Some(Ok(t)) => Some(t),
         Some(Err(_)) => {
-            p.add(f, &c.id, "updated", "expected an RFC 3339 time with offset");
+            p.add(
+                f,
+                &c.id,
+                "updated",
+                at("updated"),
+                "expected an RFC 3339 time with offset",
+            );
             None
         }
     };
     if let Some(share) = c.counted {
         if !(0.0..=1.0).contains(&share) {
-            p.add(f, &c.id, "counted", "expected a share between 0 and 1");
+            p.add(
+                f,
+                &c.id,
+                "counted",
+                at("counted"),
+                "expected a share between 0 and 1",
+            );
         }
     }
     let better = c.better.unwrap_or(c.measure.default_better());
@@ -420,17 +699,20 @@ fn check_contest(
     let mut seen = HashSet::new();
     for (i, e) in c.entries.iter().enumerate() {
         let rec = format!("{} entry {}", c.id, i + 1);
+        let at = |field: &str| format!("/{ci}/entries/{i}/{field}");
         match (&e.competitor, &e.group) {
             (Some(_), Some(_)) => p.add(
                 f,
                 &rec,
                 "competitor",
+                at("competitor"),
                 "an entry names a competitor or a group, not both",
             ),
             (None, None) => p.add(
                 f,
                 &rec,
                 "competitor",
+                at("competitor"),
                 "an entry needs a competitor or a group",
             ),
             _ => {}
@@ -441,6 +723,7 @@ fn check_contest(
                     f,
                     &rec,
                     "competitor",
+                    at("competitor"),
                     format!("no competitor with id {id:?}"),
                 ),
                 Some(&ci) => {
@@ -450,6 +733,7 @@ fn check_contest(
                             f,
                             &rec,
                             "competitor",
+                            at("competitor"),
                             format!("{id} competes in {}, not {}", who.sport, c.sport),
                         );
                     }
@@ -459,6 +743,7 @@ fn check_contest(
                                 f,
                                 &rec,
                                 "competitor",
+                                at("competitor"),
                                 format!("{id} is in category {a}, the contest is {b}"),
                             );
                         }
@@ -466,20 +751,44 @@ fn check_contest(
                 }
             }
             if !seen.insert(id.clone()) {
-                p.add(f, &rec, "competitor", format!("{id} is entered twice"));
+                p.add(
+                    f,
+                    &rec,
+                    "competitor",
+                    at("competitor"),
+                    format!("{id} is entered twice"),
+                );
             }
         }
         if let Some(id) = &e.group {
             if !group_ix.contains_key(id) {
-                p.add(f, &rec, "group", format!("no group with id {id:?}"));
+                p.add(
+                    f,
+                    &rec,
+                    "group",
+                    at("group"),
+                    format!("no group with id {id:?}"),
+                );
             }
             if !seen.insert(format!("group:{id}")) {
-                p.add(f, &rec, "group", format!("{id} is entered twice"));
+                p.add(
+                    f,
+                    &rec,
+                    "group",
+                    at("group"),
+                    format!("{id} is entered twice"),
+                );
             }
         }
-        for m in &e.members {
+        for (k, m) in e.members.iter().enumerate() {
             if !competitor_ix.contains_key(m) {
-                p.add(f, &rec, "members", format!("no competitor with id {m:?}"));
+                p.add(
+                    f,
+                    &rec,
+                    "members",
+                    at(&format!("members/{k}")),
+                    format!("no competitor with id {m:?}"),
+                );
             }
         }
         let mark = match &e.mark {
@@ -487,7 +796,7 @@ fn check_contest(
             Some(text) => match mark::parse(c.measure, text) {
                 Ok(m) => Some(m),
                 Err(err) => {
-                    p.add(f, &rec, "mark", err.to_string());
+                    p.add(f, &rec, "mark", at("mark"), err.to_string());
                     None
                 }
             },
@@ -498,16 +807,23 @@ fn check_contest(
                 f,
                 &rec,
                 "place",
+                at("place"),
                 format!("an entry with status {:?} has no place", e.status),
             );
         }
         if let Some(a) = &e.award {
             if !scenario.awards.contains(a) {
-                p.add(f, &rec, "award", format!("unknown award {a:?}"));
+                p.add(
+                    f,
+                    &rec,
+                    "award",
+                    at("award"),
+                    format!("unknown award {a:?}"),
+                );
             }
         }
     }
-    check_places(c, &marks, better, scenario, p);
+    check_places(c, ci, &marks, better, scenario, p);
     ContestFacts {
         start,
         better,
@@ -522,6 +838,7 @@ fn check_contest(
 /// the marks, and awards must follow places in a final contest.
 fn check_places(
     c: &Contest,
+    ci: usize,
     marks: &[Option<mark::Mark>],
     better: Better,
     scenario: &Scenario,
@@ -537,6 +854,7 @@ fn check_places(
     placed.sort();
     for (k, &(place, i)) in placed.iter().enumerate() {
         let rec = format!("{} entry {}", c.id, i + 1);
+        let at = |field: &str| format!("/{ci}/entries/{i}/{field}");
         // Standard competition ranking: a place equals one plus the number of
         // entries placed strictly ahead of it.
         let ahead = placed.iter().filter(|(q, _)| *q < place).count() as u32;
@@ -545,6 +863,7 @@ fn check_places(
                 f,
                 &rec,
                 "place",
+                at("place"),
                 format!(
                     "place {place} does not follow the places before it (expected {})",
                     ahead + 1
@@ -560,6 +879,7 @@ fn check_places(
                         f,
                         &rec,
                         "mark",
+                        at("mark"),
                         format!("shares place {place} but its mark differs"),
                     );
                 }
@@ -570,6 +890,7 @@ fn check_places(
                         f,
                         &rec,
                         "mark",
+                        at("mark"),
                         format!("place {place} has a better mark than place {prev_place}"),
                     );
                 }
@@ -587,7 +908,7 @@ fn check_places(
             None
         };
         if place == 0 {
-            p.add(f, &rec, "place", "places start at 1");
+            p.add(f, &rec, "place", at("place"), "places start at 1");
             continue;
         }
         if e.award.as_ref() != expected {
@@ -604,7 +925,7 @@ fn check_places(
                 }
                 (None, None) => unreachable!("equal"),
             };
-            p.add(f, &rec, "award", msg);
+            p.add(f, &rec, "award", at("award"), msg);
         }
     }
     for (i, e) in c.entries.iter().enumerate() {
@@ -613,6 +934,7 @@ fn check_places(
                 f,
                 &format!("{} entry {}", c.id, i + 1),
                 "award",
+                format!("/{ci}/entries/{i}/award"),
                 "an award needs a place",
             );
         }
