@@ -596,4 +596,75 @@ mod tests {
         let problems = apply(&d, &b, "2027-08-14T21:31:00+01:00").unwrap_err();
         assert!(problems.iter().any(|p| p.field == "award"), "{problems:?}");
     }
+
+    /// A batch's problems as `tidings check` and the admin API give them.
+    fn refused(text: &str) -> Vec<String> {
+        let mut problems = match parse(text) {
+            Ok(b) => apply(&demo(), &b, "2027-08-14T21:31:00+01:00").unwrap_err(),
+            Err(p) => p,
+        };
+        locate(&mut problems, BATCH, text);
+        problems.iter().map(|p| p.to_string()).collect()
+    }
+
+    #[test]
+    fn every_problem_of_a_batch_is_at_its_place_in_the_batch() {
+        let text = r#"{"as_of": "yesterday", "changes": [
+  {"change": "aliases", "of": "group", "id": "quessary", "add": ["Q", " "]},
+  {"change": "results", "contest": "ath-m-marathon-final", "status": "final", "counted": 2},
+  {"change": "add_competitor", "competitor":
+    {"id": "p900", "given": "Ada", "family": "Ness", "group": "atlantis", "sport": "athletics"}},
+  {"change": "results", "contest": "ath-m-marathon-final",
+   "entries": [{"competitor": "p036", "place": 2, "mark": "2:05:31"}]}
+]}"#;
+        assert_eq!(
+            refused(text),
+            [
+                "batch:2:71: record change 1: field add: an alias must not be empty",
+                "batch:3:90: record change 2: field counted: counted is a share from 0 to 1",
+                "batch:1:11: field as_of: expected an RFC 3339 time with offset",
+                "batch:5:63: record change 3 (competitors.json p900): field group: no group with id \"atlantis\"",
+                "batch:7:48: record change 4 (contests.json ath-m-marathon-final entry 1): field place: place 2 does not follow the places before it (expected 1)",
+            ]
+        );
+    }
+
+    #[test]
+    fn a_problem_with_a_record_the_batch_did_not_touch_is_at_the_batch() {
+        // A new competitor named as an existing delegation's alias: the
+        // clash is found on the delegation, which the batch did not touch.
+        let d = demo();
+        let g = &d.groups[0];
+        let alias = g.aliases.first().expect("the demo's groups have aliases");
+        let text = format!(
+            r#"{{"changes": [{{"change": "add_competitor", "competitor":
+  {{"id": "p900", "given": "{alias}", "family": "", "group": "{}", "sport": "athletics"}}}}]}}"#,
+            g.id
+        );
+        let lines = refused(&text);
+        assert!(
+            lines.iter().any(|l| l.starts_with(&format!(
+                "batch:1:1: record groups.json {}: field aliases:",
+                g.id
+            ))),
+            "{lines:?}"
+        );
+    }
+
+    #[test]
+    fn every_change_that_does_not_fit_the_format_is_reported() {
+        let text = "{\"changes\": [\n  {\"change\": \"results\"},\n  {\"change\": \"schedule\", \"contest\": \"x\", \"when\": \"soon\"}\n]}";
+        assert_eq!(
+            refused(text),
+            [
+                "batch:2:3: record change 1: missing field `contest`",
+                "batch:3:42: record change 2: unknown field `when`, expected one of `contest`, `start`, `venue`",
+            ]
+        );
+        // A misspelt top-level field, with every change fine.
+        assert_eq!(
+            refused("{\"chnages\": []}"),
+            ["batch:1:2: unknown field `chnages`, expected `as_of` or `changes`"]
+        );
+    }
 }

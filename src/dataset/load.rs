@@ -940,3 +940,126 @@ fn check_places(
         }
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// The demo's files, with some replaced.
+    fn load_with(replaced: &[(&str, &str)]) -> Result<Dataset, LoadError> {
+        let dir = Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+        load_files(&|name: &str| {
+            let text = match replaced.iter().find(|(n, _)| *n == name) {
+                Some((_, t)) => t.to_string(),
+                None => std::fs::read_to_string(dir.join(name)).expect("the demo file"),
+            };
+            Ok((format!("data/{name}"), text))
+        })
+    }
+
+    fn problems(result: Result<Dataset, LoadError>) -> Vec<DataProblem> {
+        match result {
+            Err(LoadError::Invalid(p)) => p,
+            Err(e) => panic!("{e}"),
+            Ok(_) => panic!("the data loads"),
+        }
+    }
+
+    fn at(p: &DataProblem) -> (usize, usize) {
+        (p.line.expect("located"), p.column.expect("located"))
+    }
+
+    const GROUPS: &str =
+        "[\n  {\"id\": \"x\", \"name\": \"X\"},\n  {\"id\": \"x\", \"name\": \"Y\"}\n]\n";
+
+    #[test]
+    fn a_data_rule_problem_is_at_the_value_at_fault() {
+        let p = problems(load_with(&[("groups.json", GROUPS)]));
+        let dup = p
+            .iter()
+            .find(|p| p.message == "duplicate id")
+            .expect("the duplicate is reported");
+        assert_eq!(dup.file, "data/groups.json");
+        assert_eq!(dup.pointer, "/1/id");
+        assert_eq!(at(dup), (3, 10));
+        assert!(
+            dup.to_string()
+                .starts_with("data/groups.json:3:10: record x: field id: duplicate id"),
+            "{dup}"
+        );
+        // Every competitor's group is now unknown: each at its own line.
+        let unknown: Vec<&DataProblem> = p
+            .iter()
+            .filter(|p| p.file.ends_with("competitors.json") && p.field == "group")
+            .collect();
+        assert!(unknown.len() > 10);
+        let mut lines: Vec<usize> = unknown.iter().map(|p| at(p).0).collect();
+        lines.dedup();
+        assert_eq!(lines.len(), unknown.len(), "one line each");
+        // Sorted as the files are read: scenario, sports, groups, ...
+        assert!(p[0].file.ends_with("groups.json"), "{}", p[0]);
+    }
+
+    #[test]
+    fn a_problem_with_a_field_that_is_absent_is_at_its_record() {
+        let contests = r#"[{"id": "c", "sport": "athletics", "discipline": "100m", "phase": "final",
+  "start": "2027-08-14T19:40", "status": "final", "measure": "time",
+  "entries": [
+    {"place": 1, "mark": "9.99"}
+  ]}]"#;
+        let p = problems(load_with(&[("contests.json", contests)]));
+        let needs = p
+            .iter()
+            .find(|p| p.message.contains("needs a competitor or a group"))
+            .unwrap();
+        assert_eq!(needs.pointer, "/0/entries/0/competitor");
+        assert_eq!(at(needs), (4, 5));
+    }
+
+    #[test]
+    fn every_file_that_does_not_read_is_reported_and_each_record_on_its_own() {
+        let p = problems(load_with(&[
+            ("scenario.json", "{\"id\": \"games\",,}"),
+            (
+                "groups.json",
+                "[\n  {\"id\": \"a\", \"name\": \"A\", \"colour\": \"red\"},\n  {\"id\": \"b\"},\n  {\"id\": \"c\", \"name\": \"C\"}\n]",
+            ),
+        ]));
+        let lines: Vec<String> = p.iter().map(|p| p.to_string()).collect();
+        assert_eq!(
+            lines,
+            [
+                "data/scenario.json:1:16: key must be a string",
+                // Unknown field: at its name.
+                "data/groups.json:2:28: record a: unknown field `colour`, expected one of `id`, `name`, `code`, `aliases`, `plural`",
+                // Missing field: at its record.
+                "data/groups.json:3:3: record b: missing field `name`",
+            ],
+            "{lines:#?}"
+        );
+    }
+
+    #[test]
+    fn serde_names_for_types_are_said_as_json_names() {
+        let p = problems(load_with(&[(
+            "groups.json",
+            "[{\"id\": \"a\", \"name\": \"A\", \"plural\": \"yes\", \"aliases\": \"A\"}]",
+        )]));
+        assert_eq!(p.len(), 1, "{p:?}");
+        assert_eq!(
+            p[0].message,
+            "invalid type: string \"yes\", expected true or false"
+        );
+        assert_eq!(at(&p[0]), (1, 37));
+        let p = problems(load_with(&[("groups.json", "[\"harbour\"]")]));
+        assert_eq!(
+            p[0].to_string(),
+            "data/groups.json:1:2: record #1: invalid type: string \"harbour\", expected an object {...}"
+        );
+        let p = problems(load_with(&[("groups.json", "{}")]));
+        assert_eq!(
+            p[0].to_string(),
+            "data/groups.json:1:1: expected an array of records: [ {...}, {...} ]"
+        );
+    }
+}
