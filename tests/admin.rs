@@ -571,3 +571,63 @@ async fn a_refused_batch_names_each_field_at_its_line_and_column() {
 fn col_of(text: &str, line: usize, value: &str) -> usize {
     text.lines().nth(line - 1).unwrap().find(value).unwrap() + 1
 }
+
+#[tokio::test]
+async fn a_refused_dataset_names_each_record_at_its_line_and_column() {
+    let s = Server::start(admin_server_engine()).await;
+    let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+    let read = |f: &str| -> Value {
+        serde_json::from_str(&std::fs::read_to_string(dir.join(f)).unwrap()).unwrap()
+    };
+    let mut competitors = read("competitors.json");
+    competitors[4]["group"] = json!("atlantis");
+    let id = competitors[4]["id"].as_str().unwrap().to_string();
+    let body = serde_json::to_string_pretty(&json!({
+        "scenario": read("scenario.json"), "sports": read("sports.json"),
+        "groups": read("groups.json"), "competitors": competitors,
+        "contests": read("contests.json"),
+    }))
+    .unwrap();
+    let r = s
+        .client
+        .put(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body(body.clone())
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+    let reply: Value = r.json().await.unwrap();
+    assert_eq!(reply["error"]["code"], "invalid_dataset");
+    let (line, text) = body
+        .lines()
+        .enumerate()
+        .find(|(_, l)| l.contains("\"atlantis\""))
+        .unwrap();
+    let want = format!(
+        "dataset:{}:{}: record competitors.json {id}: field group: no group with id \"atlantis\"",
+        line + 1,
+        text.find("\"atlantis\"").unwrap() + 1
+    );
+    let msg = reply["error"]["message"].as_str().unwrap();
+    assert!(msg.contains(&want), "{want}\n{msg}");
+
+    // A record that does not fit the format: each one, at its place.
+    let broken = body.replacen("\"status\": \"final\"", "\"status\": \"over\"", 2);
+    let r = s
+        .client
+        .put(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body(broken)
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+    let reply: Value = r.json().await.unwrap();
+    assert_eq!(reply["error"]["code"], "invalid_body");
+    let msg = reply["error"]["message"].as_str().unwrap();
+    assert_eq!(msg.matches("unknown variant `over`").count(), 2, "{msg}");
+    assert!(msg.starts_with("dataset:"), "{msg}");
+}

@@ -7,7 +7,7 @@
 
 use serde::{Deserialize, Serialize};
 
-use super::load::{build, record, syntax, DataProblem, LoadError};
+use super::load::{build, record, records, syntax, DataProblem, LoadError, FILES};
 use super::locate::Spans;
 use super::model::{Competitor, Contest, Entry, Group, Id, Scenario, Sport, Status};
 use super::Dataset;
@@ -176,6 +176,53 @@ pub fn parse(text: &str) -> Result<Batch, Vec<DataProblem>> {
         }
     }
     Err(if each.is_empty() { p } else { each })
+}
+
+/// Name of a whole dataset's body (`PUT /v1/admin/dataset`) in its problems.
+pub const DATASET: &str = "dataset";
+
+/// Reads a whole dataset from its JSON text, as [`parse`] reads a batch:
+/// a syntax error at its line and column, else every record that does not
+/// fit the format, each read on its own.
+pub fn parse_records(text: &str) -> Result<Records, Vec<DataProblem>> {
+    let mut p = Vec::new();
+    let Some(spans) = syntax(DATASET, text, &mut p) else {
+        return Err(p);
+    };
+    if let Some(r) = record::<Records>(DATASET, text, &spans, "", &mut p) {
+        return Ok(r);
+    }
+    let mut each = Vec::new();
+    if let Some(s) = spans.member("scenario") {
+        record::<Scenario>(DATASET, text, s, "scenario", &mut each);
+    }
+    records::<Sport>(DATASET, text, spans.member("sports"), &mut each);
+    records::<Group>(DATASET, text, spans.member("groups"), &mut each);
+    records::<Competitor>(DATASET, text, spans.member("competitors"), &mut each);
+    records::<Contest>(DATASET, text, spans.member("contests"), &mut each);
+    Err(if each.is_empty() { p } else { each })
+}
+
+/// Places the problems of a whole dataset at their line and column in its
+/// text: a problem in `contests.json` at `/3/mark` is at
+/// `/contests/3/mark` of the body, its record named with its file.
+pub fn locate_records(problems: &mut [DataProblem], text: &str) {
+    let Some(spans) = Spans::scan(text) else {
+        return;
+    };
+    for p in problems.iter_mut().filter(|p| p.line.is_none()) {
+        let Some(file) = FILES.iter().find(|f| **f == p.file) else {
+            continue;
+        };
+        let member = file.trim_end_matches(".json");
+        p.pointer = format!("/{member}{}", p.pointer);
+        p.record = if p.record.is_empty() {
+            file.to_string()
+        } else {
+            format!("{file} {}", p.record)
+        };
+        p.locate(DATASET, text, &spans);
+    }
 }
 
 /// Places the batch's problems at their line and column in the batch's

@@ -139,10 +139,15 @@ pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
     let scenario = spans[0]
         .as_ref()
         .and_then(|s| record::<Scenario>(&texts[0].0, &texts[0].1, s, "", &mut p));
-    let sports = records::<Sport>(&texts[1], spans[1].as_ref(), &mut p);
-    let groups = records::<Group>(&texts[2], spans[2].as_ref(), &mut p);
-    let competitors = records::<Competitor>(&texts[3], spans[3].as_ref(), &mut p);
-    let contests = records::<Contest>(&texts[4], spans[4].as_ref(), &mut p);
+    let of = |i: usize| (texts[i].0.as_str(), texts[i].1.as_str(), spans[i].as_ref());
+    let (name, text, s) = of(1);
+    let sports = records::<Sport>(name, text, s, &mut p);
+    let (name, text, s) = of(2);
+    let groups = records::<Group>(name, text, s, &mut p);
+    let (name, text, s) = of(3);
+    let competitors = records::<Competitor>(name, text, s, &mut p);
+    let (name, text, s) = of(4);
+    let contests = records::<Contest>(name, text, s, &mut p);
     let (Some(scenario), Some(sports), Some(groups), Some(competitors), Some(contests)) =
         (scenario, sports, groups, competitors, contests)
     else {
@@ -191,8 +196,9 @@ pub fn syntax(name: &str, text: &str, p: &mut Vec<DataProblem>) -> Option<Spans>
 
 /// Every record of an array file, each parsed from its own part of the
 /// text; `None` when the file is not an array or any record does not fit.
-fn records<T: DeserializeOwned>(
-    (name, text): &(String, String),
+pub fn records<T: DeserializeOwned>(
+    name: &str,
+    text: &str,
     spans: Option<&Spans>,
     p: &mut Vec<DataProblem>,
 ) -> Option<Vec<T>> {

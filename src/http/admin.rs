@@ -12,7 +12,7 @@ use axum::response::IntoResponse;
 use axum::Json;
 
 use super::openapi::{schema, Api, Body, Guard, Op};
-use super::{ApiError, AppJson};
+use super::ApiError;
 use crate::dataset::changes::{self, Batch, Records};
 use crate::dataset::DataProblem;
 use crate::engine::{ChangeError, Engine};
@@ -154,7 +154,7 @@ impl<S: Send + Sync> FromRequest<S> for JsonText {
     }
 }
 
-/// A body that does not read as a batch: 400 for broken JSON, 422 for JSON
+/// A body that does not read as a batch or a dataset: 400 for broken JSON, 422 for JSON
 /// that does not fit the format; every problem with its line and column.
 fn unreadable(text: &str, problems: &[DataProblem]) -> ApiError {
     let syntax = serde_json::from_str::<serde::de::IgnoredAny>(text).is_err();
@@ -214,7 +214,7 @@ async fn replace_dataset(
     _: Admin,
     State(engine): State<Engine>,
     force: Result<Query<Force>, axum::extract::rejection::QueryRejection>,
-    AppJson(records): AppJson<Records>,
+    JsonText(text): JsonText,
 ) -> Result<impl IntoResponse, ApiError> {
     let Ok(Query(Force { force })) = force else {
         return Err(ApiError::invalid(
@@ -222,10 +222,19 @@ async fn replace_dataset(
             "?force= must be true or false",
         ));
     };
+    let records = changes::parse_records(&text).map_err(|p| unreadable(&text, &p))?;
     match engine.replace_records_checked(records, force).await {
         Ok(version) => Ok(Json(Replaced {
             dataset_version: version,
         })),
+        Err(ChangeError::Invalid(mut problems)) => {
+            changes::locate_records(&mut problems, &text);
+            Err(change_error(
+                "invalid_dataset",
+                "the dataset was not replaced",
+                ChangeError::Invalid(problems),
+            ))
+        }
         Err(e) => Err(change_error(
             "invalid_dataset",
             "the dataset was not replaced",
