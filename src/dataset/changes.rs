@@ -158,6 +158,9 @@ pub const BATCH: &str = "batch";
 /// and column; otherwise every change that does not fit the format is
 /// reported, each at the place serde stopped in it.
 pub fn parse(text: &str) -> Result<Batch, Vec<DataProblem>> {
+    if let Ok(batch) = serde_json::from_str(text) {
+        return Ok(batch);
+    }
     let mut p = Vec::new();
     let Some(spans) = syntax(BATCH, text, &mut p) else {
         return Err(p);
@@ -185,6 +188,9 @@ pub const DATASET: &str = "dataset";
 /// a syntax error at its line and column, else every record that does not
 /// fit the format, each read on its own.
 pub fn parse_records(text: &str) -> Result<Records, Vec<DataProblem>> {
+    if let Ok(records) = serde_json::from_str(text) {
+        return Ok(records);
+    }
     let mut p = Vec::new();
     let Some(spans) = syntax(DATASET, text, &mut p) else {
         return Err(p);

@@ -3,7 +3,8 @@
 //! A scenario is a folder of JSON files: `scenario.json` (one object) and
 //! `sports.json`, `groups.json`, `competitors.json`, `contests.json` (arrays).
 //! Every problem is collected, not just the first, so an editor can fix a file
-//! in one pass; each names the file, the record and the field.
+//! in one pass; each names the file, the record and the field, and stands at
+//! the `line:column` of the value at fault (`locate`).
 
 use std::collections::{HashMap, HashSet};
 use std::fmt;
@@ -132,22 +133,22 @@ pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
         texts.push(read(name)?);
     }
     let mut p = Vec::new();
-    let spans: Vec<Option<Spans>> = texts
-        .iter()
-        .map(|(name, text)| syntax(name, text, &mut p))
-        .collect();
-    let scenario = spans[0]
-        .as_ref()
-        .and_then(|s| record::<Scenario>(&texts[0].0, &texts[0].1, s, "", &mut p));
-    let of = |i: usize| (texts[i].0.as_str(), texts[i].1.as_str(), spans[i].as_ref());
-    let (name, text, s) = of(1);
-    let sports = records::<Sport>(name, text, s, &mut p);
-    let (name, text, s) = of(2);
-    let groups = records::<Group>(name, text, s, &mut p);
-    let (name, text, s) = of(3);
-    let competitors = records::<Competitor>(name, text, s, &mut p);
-    let (name, text, s) = of(4);
-    let contests = records::<Contest>(name, text, s, &mut p);
+    let of = |i: usize| (texts[i].0.as_str(), texts[i].1.as_str());
+    let scenario = parse_file::<Scenario>(of(0), &mut p, |name, text, spans, p| {
+        record(name, text, spans, "", p)
+    });
+    let sports = parse_file(of(1), &mut p, |name, text, spans, p| {
+        records::<Sport>(name, text, Some(spans), p)
+    });
+    let groups = parse_file(of(2), &mut p, |name, text, spans, p| {
+        records::<Group>(name, text, Some(spans), p)
+    });
+    let competitors = parse_file(of(3), &mut p, |name, text, spans, p| {
+        records::<Competitor>(name, text, Some(spans), p)
+    });
+    let contests = parse_file(of(4), &mut p, |name, text, spans, p| {
+        records::<Contest>(name, text, Some(spans), p)
+    });
     let (Some(scenario), Some(sports), Some(groups), Some(competitors), Some(contests)) =
         (scenario, sports, groups, competitors, contests)
     else {
@@ -155,6 +156,8 @@ pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
     };
     build(scenario, sports, groups, competitors, contests, 1).map_err(|e| match e {
         LoadError::Invalid(mut problems) => {
+            // Where values stand is worked out only now that it is needed.
+            let spans: Vec<Option<Spans>> = texts.iter().map(|(_, t)| Spans::scan(t)).collect();
             for problem in &mut problems {
                 if let Some(i) = FILES.iter().position(|f| *f == problem.file) {
                     if let Some(s) = &spans[i] {
@@ -171,6 +174,30 @@ pub fn load_files(read: &FileSource) -> Result<Dataset, LoadError> {
         }
         other => other,
     })
+}
+
+/// One file's records: read whole when they fit (the usual case, one pass),
+/// else read again piece by piece by `each` over the file's spans, so that
+/// every problem is found and placed.
+fn parse_file<T: DeserializeOwned>(
+    (name, text): (&str, &str),
+    p: &mut Vec<DataProblem>,
+    each: impl Fn(&str, &str, &Spans, &mut Vec<DataProblem>) -> Option<T>,
+) -> Option<T> {
+    if let Ok(v) = serde_json::from_str(text) {
+        return Some(v);
+    }
+    let spans = syntax(name, text, p)?;
+    let before = p.len();
+    let v = each(name, text, &spans, p);
+    if v.is_some() || p.len() == before {
+        // serde refused the whole but no piece: say what serde said.
+        if let Err(e) = serde_json::from_str::<T>(text) {
+            p.push(serde_problem(name, text, Some(&spans), "", &e));
+        }
+        return None;
+    }
+    v
 }
 
 /// Checks that `text` is one JSON value; its spans, or a problem at the
