@@ -532,6 +532,10 @@ fn a_folder_of_batches_is_checked_against_its_scenario_with_places() {
     // The batch that checks out is not reported; a single batch file is
     // checked with its folder.
     assert!(!out.contains("01.json"), "{out}");
+    // The election night as shipped applies batch after batch.
+    let shipped = Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/election/replay");
+    let (code, clean) = check(&[shipped.to_str().unwrap()]);
+    assert_eq!(code, 0, "{clean}");
     let (code, again) = check(&[replay.join("01.json").to_str().unwrap()]);
     assert_eq!(code, 1);
     assert_eq!(again, out);
