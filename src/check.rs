@@ -6,7 +6,7 @@ use std::path::{Path, PathBuf};
 
 use crate::answers::channel::Channels;
 use crate::catalog;
-use crate::dataset::{self, LoadError};
+use crate::dataset::{self, changes, DataProblem, Dataset, LoadError};
 
 /// Checks each path; returns the exit code.
 pub fn run(paths: &[PathBuf]) -> i32 {
@@ -34,6 +34,9 @@ fn check_path(p: &Path) -> Vec<String> {
     if p.is_dir() && p.join("scenario.json").exists() {
         return check_data(p);
     }
+    if p.is_dir() && is_batch_folder(p) {
+        return check_batches(p);
+    }
     if p.is_dir() {
         return check_intents(p);
     }
@@ -48,9 +51,12 @@ fn check_path(p: &Path) -> Vec<String> {
         };
     }
     // A single intent or data file is checked with the rest of its folder,
-    // since files refer to each other.
+    // since files refer to each other; so is a batch file, which changes
+    // the scenario its folder's parent holds.
     let folder = p.parent().unwrap_or(Path::new("."));
-    if name.ends_with(".json") {
+    if name.ends_with(".json") && is_batch_folder(folder) {
+        check_batches(folder)
+    } else if name.ends_with(".json") {
         check_data(folder)
     } else {
         check_intents(folder)
@@ -64,56 +70,90 @@ fn check_intents(dir: &Path) -> Vec<String> {
     }
 }
 
-/// Data problems name a record; the line and column are where the record's
-/// id stands in its file.
+/// Data problems are located by the loader at the field at fault (or its
+/// record, when the field is absent).
 fn check_data(dir: &Path) -> Vec<String> {
     match dataset::load_dir(dir) {
         Ok(_) => vec![],
-        Err(LoadError::File(m)) => vec![m],
-        Err(LoadError::Invalid(problems)) => problems
-            .iter()
-            .map(|p| {
-                let path = dir.join(&p.file);
-                let (line, col) = std::fs::read_to_string(&path)
-                    .ok()
-                    .and_then(|t| locate_record(&t, &p.record))
-                    .unwrap_or((1, 1));
-                let what = if p.record.is_empty() {
-                    p.message.clone()
-                } else {
-                    format!("record {}: field {}: {}", p.record, p.field, p.message)
-                };
-                format!("{}:{line}:{col}: {what}", path.display())
-            })
-            .collect(),
+        Err(e) => load_problems(e),
     }
 }
 
-/// Where `"id": "<record>"` stands in a JSON text, 1-based.
-fn locate_record(text: &str, record: &str) -> Option<(usize, usize)> {
-    if record.is_empty() {
-        return None;
+fn load_problems(e: LoadError) -> Vec<String> {
+    match e {
+        LoadError::File(m) => vec![m],
+        LoadError::Invalid(problems) => problems.iter().map(located).collect(),
     }
-    let needle = format!("\"{record}\"");
-    for (i, line) in text.lines().enumerate() {
-        if let Some(c) = line.find(&needle) {
-            if line[..c].contains("\"id\"") {
-                return Some((i + 1, line[..c].chars().count() + 1));
+}
+
+/// A problem as `file:line:column: ...`; the rare one that has no place
+/// in a text (a batch about a record it did not touch) is put at the top
+/// of its file, so every line has the same shape.
+fn located(p: &DataProblem) -> String {
+    if p.line.is_some() {
+        p.to_string()
+    } else {
+        let mut at = p.clone();
+        at.line = Some(1);
+        at.column = Some(1);
+        at.to_string()
+    }
+}
+
+/// A folder of batch files for `tidings replay`: `.json` files and no
+/// `scenario.json`, inside a scenario folder.
+fn is_batch_folder(dir: &Path) -> bool {
+    !dir.join("scenario.json").exists()
+        && dir
+            .parent()
+            .is_some_and(|parent| parent.join("scenario.json").exists())
+        && std::fs::read_dir(dir).is_ok_and(|rd| {
+            rd.flatten()
+                .any(|e| e.path().extension().is_some_and(|x| x == "json"))
+        })
+}
+
+/// Every batch file of the folder, applied in file-name order to the
+/// scenario of the folder's parent as the admin API would apply it; each
+/// problem at its file, line and column. A batch that is refused leaves the
+/// data as they were, so the batches after it are checked against that.
+fn check_batches(dir: &Path) -> Vec<String> {
+    let scenario = dir.parent().unwrap_or(Path::new("."));
+    let mut data: Dataset = match dataset::load_dir(scenario) {
+        Ok(d) => d,
+        Err(e) => return load_problems(e),
+    };
+    let mut files: Vec<PathBuf> = match std::fs::read_dir(dir) {
+        Ok(rd) => rd
+            .flatten()
+            .map(|e| e.path())
+            .filter(|f| f.extension().is_some_and(|x| x == "json"))
+            .collect(),
+        Err(e) => return vec![format!("{}: cannot read: {e}", dir.display())],
+    };
+    files.sort();
+    let mut out = Vec::new();
+    for f in files {
+        let name = f.display().to_string();
+        let text = match std::fs::read_to_string(&f) {
+            Ok(t) => t,
+            Err(e) => {
+                out.push(format!("{name}: cannot read: {e}"));
+                continue;
+            }
+        };
+        let result = changes::parse(&text).and_then(|batch| {
+            // Without its own time a batch keeps the data's, as on replay.
+            let as_of = crate::engine::rfc3339(&data.as_of.to_zoned_datetime(data.tz.clone()));
+            changes::apply(&data, &batch, &as_of)
+        });
+        match result {
+            Ok(next) => data = next,
+            Err(mut problems) => {
+                changes::locate(&mut problems, &name, &text);
+                out.extend(problems.iter().map(located));
             }
         }
     }
-    None
-}
-
-#[cfg(test)]
-mod tests {
-    use super::locate_record;
-
-    #[test]
-    fn a_record_is_found_by_its_id() {
-        let t = "[\n  {\"id\": \"p1\"},\n  {\n    \"id\": \"p2\", \"group\": \"p1\"\n  }\n]";
-        assert_eq!(locate_record(t, "p2"), Some((4, 11)));
-        assert_eq!(locate_record(t, "p1"), Some((2, 10)));
-        assert_eq!(locate_record(t, "nobody"), None);
-    }
+    out
 }

@@ -489,9 +489,11 @@ fn replayed(snap: Snapshot, c: &Common) -> Result<Snapshot, String> {
             serde_json::from_str(&step.body).map_err(|e| e.to_string())?;
         // A batch without its own time keeps the data's.
         let as_of = engine::rfc3339(&data.as_of.to_zoned_datetime(data.tz.clone()));
-        data = crate::dataset::changes::apply(&data, &batch, &as_of).map_err(|problems| {
+        data = crate::dataset::changes::apply(&data, &batch, &as_of).map_err(|mut problems| {
+            let name = step.path.display().to_string();
+            crate::dataset::changes::locate(&mut problems, &name, &step.body);
             let list: Vec<String> = problems.iter().map(|p| p.to_string()).collect();
-            format!("{}: {}", step.path.display(), list.join("; "))
+            list.join("\n")
         })?;
     }
     // Answers are given as at --until, not as at the last batch before it:

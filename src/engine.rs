@@ -825,12 +825,9 @@ impl Engine {
                 .build(data.version + 1)
                 .map_err(|e| match e {
                     LoadError::Invalid(p) => p,
-                    LoadError::File(m) => vec![DataProblem {
-                        file: "dataset".into(),
-                        record: String::new(),
-                        field: String::new(),
-                        message: m,
-                    }],
+                    LoadError::File(m) => {
+                        vec![DataProblem::new("dataset", "", "", String::new(), m)]
+                    }
                 })
         })
         .await

@@ -14,7 +14,7 @@ use std::time::Duration;
 
 use jiff::Timestamp;
 
-use crate::dataset::changes::Batch;
+use crate::dataset::changes::{self, Batch};
 
 /// One batch file, read and parsed.
 #[derive(Debug)]
@@ -88,8 +88,11 @@ pub fn read_steps(paths: &[PathBuf]) -> Result<Vec<Step>, Vec<String>> {
 
 fn read_step(path: &Path) -> Result<Step, String> {
     let body = std::fs::read_to_string(path).map_err(|e| format!("{}: {e}", path.display()))?;
-    let batch: Batch = serde_json::from_str(&body)
-        .map_err(|e| format!("{}:{}:{}: {e}", path.display(), e.line(), e.column()))?;
+    let batch: Batch = changes::parse(&body).map_err(|mut problems| {
+        changes::locate(&mut problems, &path.display().to_string(), &body);
+        let lines: Vec<String> = problems.iter().map(|p| p.to_string()).collect();
+        lines.join("\n")
+    })?;
     let as_of = match &batch.as_of {
         None => None,
         Some(t) => Some(t.parse::<Timestamp>().map_err(|e| {

@@ -492,3 +492,142 @@ async fn the_exported_dataset_restores_what_was_served() {
         .unwrap();
     assert_eq!(r.status().as_u16(), 401);
 }
+
+/// Posts a batch as raw text, so that its lines and columns are known.
+async fn post_text(s: &Server, body: &str) -> (u16, Value) {
+    let r = s
+        .client
+        .post(s.url("/v1/admin/batches"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body(body.to_string())
+        .send()
+        .await
+        .unwrap();
+    (r.status().as_u16(), r.json().await.unwrap())
+}
+
+#[tokio::test]
+async fn a_refused_batch_names_each_field_at_its_line_and_column() {
+    let s = Server::start(admin_server_engine()).await;
+    let body = concat!(
+        "{\"changes\": [\n",
+        "  {\"change\": \"schedule\", \"contest\": \"no-such-race\", \"venue\": \"Nowhere\"},\n",
+        "  {\"change\": \"results\", \"contest\": \"ath-m-marathon-final\", \"status\": \"final\",\n",
+        "   \"entries\": [{\"competitor\": \"p036\", \"place\": 1, \"mark\": \"slow\", \"award\": \"gold\"}]}\n",
+        "]}\n"
+    );
+    let (status, reply) = post_text(&s, body).await;
+    assert_eq!(status, 422, "{reply}");
+    assert_eq!(reply["error"]["code"], "invalid_batch");
+    let msg = reply["error"]["message"].as_str().unwrap();
+    // Line 2, where "no-such-race" starts; line 4, where "slow" starts.
+    let col =
+        |line: usize, value: &str| body.lines().nth(line - 1).unwrap().find(value).unwrap() + 1;
+    assert!(
+        msg.contains(&format!(
+            "batch:2:{}: record change 1: field contest: no contest \"no-such-race\"",
+            col(2, "\"no-such-race\"")
+        )),
+        "{msg}"
+    );
+    assert!(
+        msg.contains(&format!(
+            "batch:4:{}: record change 2 (contests.json ath-m-marathon-final entry 1): field mark:",
+            col(4, "\"slow\"")
+        )),
+        "{msg}"
+    );
+
+    // A change that does not fit the format: 422, at the value refused.
+    let body = "{\"changes\": [\n  {\"change\": \"results\", \"contest\": \"x\", \"status\": \"done\"}\n]}";
+    let (status, reply) = post_text(&s, body).await;
+    assert_eq!(status, 422, "{reply}");
+    assert_eq!(reply["error"]["code"], "invalid_body");
+    let msg = reply["error"]["message"].as_str().unwrap();
+    assert!(
+        msg.starts_with(&format!(
+            "batch:2:{}: record change 1: unknown variant `done`",
+            col_of(body, 2, "\"done\"")
+        )),
+        "{msg}"
+    );
+
+    // Broken JSON: 400, at serde's line and column.
+    let (status, reply) = post_text(&s, "{\"changes\": [\n  {\"change\": }\n]}").await;
+    assert_eq!(status, 400, "{reply}");
+    assert_eq!(reply["error"]["code"], "malformed_json");
+    assert!(
+        reply["error"]["message"]
+            .as_str()
+            .unwrap()
+            .starts_with("batch:2:14: expected value"),
+        "{reply}"
+    );
+    let (_, st) = admin(&s, "GET", "/v1/admin/status", None).await;
+    assert_eq!(st["dataset_version"], 1);
+}
+
+fn col_of(text: &str, line: usize, value: &str) -> usize {
+    text.lines().nth(line - 1).unwrap().find(value).unwrap() + 1
+}
+
+#[tokio::test]
+async fn a_refused_dataset_names_each_record_at_its_line_and_column() {
+    let s = Server::start(admin_server_engine()).await;
+    let dir = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("dataset-demo/games");
+    let read = |f: &str| -> Value {
+        serde_json::from_str(&std::fs::read_to_string(dir.join(f)).unwrap()).unwrap()
+    };
+    let mut competitors = read("competitors.json");
+    competitors[4]["group"] = json!("atlantis");
+    let id = competitors[4]["id"].as_str().unwrap().to_string();
+    let body = serde_json::to_string_pretty(&json!({
+        "scenario": read("scenario.json"), "sports": read("sports.json"),
+        "groups": read("groups.json"), "competitors": competitors,
+        "contests": read("contests.json"),
+    }))
+    .unwrap();
+    let r = s
+        .client
+        .put(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body(body.clone())
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+    let reply: Value = r.json().await.unwrap();
+    assert_eq!(reply["error"]["code"], "invalid_dataset");
+    let (line, text) = body
+        .lines()
+        .enumerate()
+        .find(|(_, l)| l.contains("\"atlantis\""))
+        .unwrap();
+    let want = format!(
+        "dataset:{}:{}: record competitors.json {id}: field group: no group with id \"atlantis\"",
+        line + 1,
+        text.find("\"atlantis\"").unwrap() + 1
+    );
+    let msg = reply["error"]["message"].as_str().unwrap();
+    assert!(msg.contains(&want), "{want}\n{msg}");
+
+    // A record that does not fit the format: each one, at its place.
+    let broken = body.replacen("\"status\": \"final\"", "\"status\": \"over\"", 2);
+    let r = s
+        .client
+        .put(s.url("/v1/admin/dataset"))
+        .bearer_auth(TOKEN)
+        .header("content-type", "application/json")
+        .body(broken)
+        .send()
+        .await
+        .unwrap();
+    assert_eq!(r.status(), 422);
+    let reply: Value = r.json().await.unwrap();
+    assert_eq!(reply["error"]["code"], "invalid_body");
+    let msg = reply["error"]["message"].as_str().unwrap();
+    assert_eq!(msg.matches("unknown variant `over`").count(), 2, "{msg}");
+    assert!(msg.starts_with("dataset:"), "{msg}");
+}

@@ -1,9 +1,11 @@
-//! The results dataset: the model, loading and validating it, live changes
-//! to it (`changes`), and the handle through which every request reads one
+//! The results dataset: the model, loading and validating it, where its
+//! values stand in the JSON texts (`locate`), live changes to it
+//! (`changes`), and the handle through which every request reads one
 //! consistent version of it.
 
 pub mod changes;
 pub mod load;
+pub mod locate;
 pub mod mark;
 pub mod model;
 pub mod shared;

@@ -5,15 +5,16 @@
 //! service was started with (`--admin-token`); without one configured the
 //! admin API is off and answers 403, never open.
 
-use axum::extract::{DefaultBodyLimit, FromRequestParts, Query, State};
+use axum::extract::{DefaultBodyLimit, FromRequest, FromRequestParts, Query, Request, State};
 use axum::http::request::Parts;
 use axum::http::{header, StatusCode};
 use axum::response::IntoResponse;
 use axum::Json;
 
 use super::openapi::{schema, Api, Body, Guard, Op};
-use super::{ApiError, AppJson};
-use crate::dataset::changes::{Batch, Records};
+use super::ApiError;
+use crate::dataset::changes::{self, Batch, Records};
+use crate::dataset::DataProblem;
 use crate::engine::{ChangeError, Engine};
 
 /// Largest admin request body: a whole scenario fits with room to spare.
@@ -108,16 +109,92 @@ pub struct UnansweredList {
     pub unanswered: Vec<crate::dialogue::store::Unanswered>,
 }
 
+/// A JSON body kept as its text, so that every problem found in it can be
+/// given with its line and column. Refused as `AppJson` refuses: 415
+/// without a JSON content type, 413 over the body limit.
+pub struct JsonText(pub String);
+
+impl<S: Send + Sync> FromRequest<S> for JsonText {
+    type Rejection = ApiError;
+
+    async fn from_request(req: Request, state: &S) -> Result<JsonText, ApiError> {
+        let json = req
+            .headers()
+            .get(header::CONTENT_TYPE)
+            .and_then(|v| v.to_str().ok())
+            .and_then(|v| v.split(';').next())
+            .map(|v| v.trim().to_ascii_lowercase())
+            .is_some_and(|v| v == "application/json" || v.ends_with("+json"));
+        if !json {
+            return Err(ApiError {
+                status: StatusCode::UNSUPPORTED_MEDIA_TYPE,
+                code: "unsupported_media_type",
+                message: "send the body as JSON with content-type: application/json".into(),
+                retry_after: None,
+            });
+        }
+        match String::from_request(req, state).await {
+            Ok(text) => Ok(JsonText(text)),
+            Err(r) if r.status() == StatusCode::PAYLOAD_TOO_LARGE => Err(ApiError {
+                status: StatusCode::PAYLOAD_TOO_LARGE,
+                code: "body_too_large",
+                message: format!(
+                    "the request body is larger than the admin API accepts ({} MiB)",
+                    MAX_ADMIN_BODY / (1024 * 1024)
+                ),
+                retry_after: None,
+            }),
+            Err(_) => Err(ApiError {
+                status: StatusCode::BAD_REQUEST,
+                code: "malformed_json",
+                message: "the body is not UTF-8 text".into(),
+                retry_after: None,
+            }),
+        }
+    }
+}
+
+/// A body that does not read as a batch or a dataset: 400 for broken JSON, 422 for JSON
+/// that does not fit the format; every problem with its line and column.
+fn unreadable(text: &str, problems: &[DataProblem]) -> ApiError {
+    let syntax = serde_json::from_str::<serde::de::IgnoredAny>(text).is_err();
+    let message = problems
+        .iter()
+        .map(|p| p.to_string())
+        .collect::<Vec<_>>()
+        .join("; ");
+    if syntax {
+        ApiError {
+            status: StatusCode::BAD_REQUEST,
+            code: "malformed_json",
+            message,
+            retry_after: None,
+        }
+    } else {
+        ApiError::invalid("invalid_body", message)
+    }
+}
+
 async fn apply_batch(
     _: Admin,
     State(engine): State<Engine>,
-    AppJson(batch): AppJson<Batch>,
+    JsonText(text): JsonText,
 ) -> Result<impl IntoResponse, ApiError> {
+    let batch = changes::parse(&text).map_err(|p| unreadable(&text, &p))?;
     match engine.apply_batch(&batch).await {
         Ok(version) => Ok(Json(Applied {
             applied: batch.changes.len(),
             dataset_version: version,
         })),
+        Err(ChangeError::Invalid(mut problems)) => {
+            // Problems are placed at the field of the batch at fault.
+            changes::locate(&mut problems, changes::BATCH, &text);
+            Err(change_error(
+                "invalid_batch",
+                "the batch was not applied",
+                ChangeError::Invalid(problems),
+            ))
+        }
         Err(e) => Err(change_error(
             "invalid_batch",
             "the batch was not applied",
@@ -137,7 +214,7 @@ async fn replace_dataset(
     _: Admin,
     State(engine): State<Engine>,
     force: Result<Query<Force>, axum::extract::rejection::QueryRejection>,
-    AppJson(records): AppJson<Records>,
+    JsonText(text): JsonText,
 ) -> Result<impl IntoResponse, ApiError> {
     let Ok(Query(Force { force })) = force else {
         return Err(ApiError::invalid(
@@ -145,10 +222,19 @@ async fn replace_dataset(
             "?force= must be true or false",
         ));
     };
+    let records = changes::parse_records(&text).map_err(|p| unreadable(&text, &p))?;
     match engine.replace_records_checked(records, force).await {
         Ok(version) => Ok(Json(Replaced {
             dataset_version: version,
         })),
+        Err(ChangeError::Invalid(mut problems)) => {
+            changes::locate_records(&mut problems, &text);
+            Err(change_error(
+                "invalid_dataset",
+                "the dataset was not replaced",
+                ChangeError::Invalid(problems),
+            ))
+        }
         Err(e) => Err(change_error(
             "invalid_dataset",
             "the dataset was not replaced",
