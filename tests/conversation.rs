@@ -108,6 +108,20 @@ async fn pronouns(s: &Server) {
     )
     .await;
     assert_eq!(r[1]["intent"], "competitor_delegation", "{}", r[1]);
+    // So is a side asked for with no one named.
+    let r = talk(
+        s,
+        "reader-which",
+        &[
+            (
+                "who won the women's 100 m freestyle?",
+                &["Pevelle Cosevmont"],
+            ),
+            ("and which delegation?", &["Pevelle Cosevmont", "Vastrelia"]),
+        ],
+    )
+    .await;
+    assert_eq!(r[1]["intent"], "competitor_delegation", "{}", r[1]);
     // Two women just named: "she" is unclear, so the reader is asked.
     let r = talk(
         s,

@@ -22,7 +22,7 @@ use crate::understand::lexicon::{Mention, Target};
 use crate::understand::slots::{Filled, Need};
 use crate::understand::Analysis;
 
-use super::context::{fill_in_context, points_back_at_someone};
+use super::context::{fill_in_context, points_at_event, points_back_at_someone};
 use super::session::Session;
 
 /// Intents scoring below this share of the best score are not tried: a
@@ -30,7 +30,7 @@ use super::session::Session;
 const TRY_SHARE: f32 = 0.5;
 /// The lowest score tried when the question states its focus and the
 /// intent answers it.
-const FOCUS_FLOOR: f32 = 0.35;
+const FOCUS_FLOOR: f32 = 0.3;
 /// How many intents are tried at most.
 const TRY_MAX: usize = 6;
 /// What the frame adds to the score of an intent whose first declared
@@ -99,7 +99,7 @@ pub fn choose<'c>(data: &Dataset, catalog: &'c Catalog, s: &Session, a: &Analysi
     // person: an intent that takes no such slot would answer about
     // everywhere or everyone ("how many votes do the Greens have there" is
     // not their seat total, "how many seats did they win" not the table).
-    let there = points_there(&a.tokens) && has_last_contest(s);
+    let there = (points_there(&a.tokens) || points_at_event(a)) && has_last_contest(s);
     let they = points_back_at_someone(data, s, a);
     let mut focus_gap: Option<&Intent> = None;
     let mut ask_later: Option<Chosen> = None;

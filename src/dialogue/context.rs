@@ -353,7 +353,17 @@ fn pointers_at(a: &Analysis) -> Vec<(usize, Pointer)> {
                 .filter(|n| {
                     matches!(
                         n.as_str(),
-                        "race" | "event" | "final" | "contest" | "heat" | "match" | "game"
+                        "race"
+                            | "event"
+                            | "final"
+                            | "contest"
+                            | "heat"
+                            | "match"
+                            | "game"
+                            | "ward"
+                            | "seat"
+                            | "constituency"
+                            | "fixture"
                     )
                 })
                 .map(|_| Pointer::That),
@@ -361,7 +371,22 @@ fn pointers_at(a: &Analysis) -> Vec<(usize, Pointer)> {
         };
         out.extend(p.map(|p| (i, p)));
     }
+    // "and which party?" points at whoever the last answer was about.
+    if out.is_empty()
+        && a.mentions.is_empty()
+        && crate::understand::frame::bare_group_question(&a.tokens)
+    {
+        out.push((a.tokens.len(), Pointer::Whatever));
+    }
     out
+}
+
+/// Whether the message points at an event with "that ward", "this race":
+/// an intent that takes no event would answer about every event.
+pub fn points_at_event(a: &Analysis) -> bool {
+    pointers_at(a).iter().any(|(i, p)| {
+        *p == Pointer::That && matches!(a.tokens[*i].as_str(), "that" | "this" | "same")
+    })
 }
 
 /// Whether the message points with "they" or "them" at someone the last

@@ -312,6 +312,23 @@ const PAST: &[&str] = &[
 ];
 
 /// Words for what a group is in a scenario, as readers write them.
+/// Whether the whole message asks for someone's side with no one named:
+/// "which party?", "and for which team", "what party then". After an
+/// answer about a person it is that person's side.
+pub fn bare_group_question<S: AsRef<str>>(tokens: &[S]) -> bool {
+    let words: Vec<&str> = tokens
+        .iter()
+        .map(AsRef::as_ref)
+        .filter(|t| {
+            !matches!(
+                *t,
+                "and" | "for" | "so" | "ok" | "then" | "is" | "it" | "again"
+            )
+        })
+        .collect();
+    matches!(words.as_slice(), [w, g] if matches!(*w, "which" | "what") && GROUP_WORDS.contains(g))
+}
+
 const GROUP_WORDS: &[&str] = &[
     "team",
     "teams",
@@ -747,9 +764,10 @@ fn focus(
     // "she", "him" stand for a person named before.
     let pronouns = tokens
         .iter()
-        .filter(|t| matches!(**t, "he" | "she" | "him" | "her" | "they" | "them"))
+        .filter(|t| matches!(**t, "he" | "she" | "him" | "her" | "his" | "they" | "them"))
         .count()
-        // "which party is that?": whoever was just talked about.
+        // "which party is that?", "and which party?": whoever was just
+        // talked about.
         + usize::from(
             n >= 2 && matches!(tokens[n - 1], "that" | "this") && matches!(tokens[n - 2], "is" | "was" | "s"),
         );
@@ -766,6 +784,9 @@ fn focus(
     let t0 = at(tokens, onset);
     let t1 = at(tokens, onset + 1);
     let some = |f: Focus, ws: &[&str]| (Some(f), words(ws));
+    if mentions.is_empty() && bare_group_question(tokens) {
+        return some(Focus::GroupOf, &["which", "what"]);
+    }
 
     // By how much: a margin, a gap, a lead.
     if find(tokens, 0, &["by", "how", "much"]).is_some()
@@ -1167,11 +1188,33 @@ fn focus(
         || (t0 != "who" && mark_noun(tokens, &person))
         || find(tokens, 0, &["best", "time"]).is_some()
         || find(tokens, 0, &["best", "mark"]).is_some()
+        // "what was her share", "Zellick's percentage": a share of the
+        // vote is a figure of one's own, not a gap (a share of the count
+        // is its progress, read above).
+        || (people > 0
+            && tokens
+                .iter()
+                .any(|t| matches!(*t, "share" | "percentage" | "percent"))
+            && !tokens
+                .iter()
+                .any(|t| matches!(*t, "counted" | "count" | "in")))
     {
         return some(
             Focus::Mark,
             &[
-                "what", "how", "fast", "far", "high", "time", "mark", "score", "record", "best",
+                "what",
+                "how",
+                "fast",
+                "far",
+                "high",
+                "time",
+                "mark",
+                "score",
+                "record",
+                "best",
+                "share",
+                "percentage",
+                "percent",
             ],
         );
     }
@@ -1396,6 +1439,8 @@ mod tests {
         assert_eq!(f("what is the margin"), Some(Focus::Margin));
         assert_eq!(f("how many medals"), Some(Focus::Count));
         assert_eq!(f("how many votes did she get"), Some(Focus::Mark));
+        assert_eq!(f("what was her share"), Some(Focus::Mark));
+        assert_eq!(f("and his percentage"), Some(Focus::Mark));
         assert_eq!(f("how much is counted"), Some(Focus::Status));
         assert_eq!(f("how many are in so far"), Some(Focus::Status));
         assert_eq!(
@@ -1476,6 +1521,17 @@ mod tests {
         assert_eq!(p("who was runner up"), Some(Place::Nth(2)));
         assert_eq!(p("who won last night"), None);
         assert_eq!(p("who won the last race"), None);
+    }
+
+    #[test]
+    fn a_side_asked_for_with_no_one_named() {
+        let t = |s: &str| bare_group_question(&s.split(' ').collect::<Vec<_>>());
+        assert!(t("which party"));
+        assert!(t("and for which party"));
+        assert!(t("what team is it then"));
+        assert!(!t("which party has the most seats"));
+        assert!(!t("which party is leading"));
+        assert_eq!(frame("and which party").focus, Some(Focus::GroupOf));
     }
 
     #[test]
