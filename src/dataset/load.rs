@@ -135,9 +135,10 @@ pub fn build(
     sports: Vec<Sport>,
     groups: Vec<Group>,
     competitors: Vec<Competitor>,
-    contests: Vec<Contest>,
+    mut contests: Vec<Contest>,
     version: u64,
 ) -> Result<Dataset, LoadError> {
+    super::sides::fill_places(&mut contests);
     let mut p = Problems(Vec::new());
     let sf = "scenario.json";
     let tz = match TimeZone::get(&scenario.time_zone) {
@@ -187,6 +188,10 @@ pub fn build(
                 format!("award {a:?} listed twice"),
             );
         }
+    }
+
+    for (rec, field, msg) in super::table::check_rules(&scenario, &sports) {
+        p.add(sf, &rec, &field, msg);
     }
 
     let sport_ix = index(&sports, |s| &s.id, "sports.json", &mut p);
@@ -241,7 +246,8 @@ pub fn build(
         return Err(LoadError::Invalid(p.0));
     }
     for (ci, f) in facts.iter_mut().enumerate() {
-        f.name = contest_name(&contests, &sports, &sport_ix, ci);
+        f.name = super::sides::contest_name(&contests, &sports, &groups, &competitors, ci)
+            .unwrap_or_else(|| contest_name(&contests, &sports, &sport_ix, ci));
     }
     let mut entries_of = vec![Vec::new(); competitors.len()];
     for (ci, c) in contests.iter().enumerate() {
@@ -253,7 +259,7 @@ pub fn build(
             }
         }
     }
-    Ok(Dataset {
+    let mut data = Dataset {
         scenario,
         sports,
         groups,
@@ -269,7 +275,10 @@ pub fn build(
         competitor_ix,
         contest_ix,
         entries_of,
-    })
+        tables: Vec::new(),
+    };
+    data.tables = super::table::compute_all(&data);
+    Ok(data)
 }
 
 /// "women's long jump", with the phase added when it is not the final or
@@ -507,6 +516,9 @@ fn check_contest(
             }
         }
     }
+    for (rec, field, msg) in super::sides::check(c) {
+        p.add(f, &rec, field, msg);
+    }
     check_places(c, &marks, better, scenario, p);
     ContestFacts {
         start,
@@ -578,14 +590,16 @@ fn check_places(
         let e = &c.entries[i];
         // Awards are given only when a final is over; heats place without them.
         // (The same rule as `Dataset::awards_in`.)
-        let expected = if c.status == Status::Final && c.phase == "final" {
-            scenario
-                .awards
-                .get(place as usize - 1)
-                .filter(|_| place >= 1)
-        } else {
-            None
-        };
+        // A draw is a result with no award due.
+        let expected =
+            if c.status == Status::Final && c.phase == "final" && !super::sides::is_draw(c) {
+                scenario
+                    .awards
+                    .get(place as usize - 1)
+                    .filter(|_| place >= 1)
+            } else {
+                None
+            };
         if place == 0 {
             p.add(f, &rec, "place", "places start at 1");
             continue;
