@@ -18,6 +18,7 @@ mod group_result;
 mod head_to_head;
 mod leader;
 mod margin_of;
+mod match_score;
 mod medal_table;
 mod next_for;
 mod open_contests;
@@ -27,6 +28,12 @@ mod profile;
 mod result;
 mod standings;
 pub mod support;
+mod table;
+mod team_form;
+mod team_last;
+mod team_next;
+mod team_record;
+pub mod team_support;
 
 use std::collections::{BTreeMap, HashMap};
 
@@ -396,6 +403,12 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &placed::SPEC,
     &margin_of::SPEC,
     &about::SPEC,
+    &table::SPEC,
+    &match_score::SPEC,
+    &team_next::SPEC,
+    &team_last::SPEC,
+    &team_form::SPEC,
+    &team_record::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,
