@@ -271,6 +271,39 @@ impl Dataset {
         })
     }
 
+    /// The names readers give a two-sided contest: each side by its name
+    /// or an alias, home side first, joined by "v", "vs" or "versus"
+    /// ("Ambervale v Kestrel Bay"). Empty for any other contest. "against"
+    /// and "and" are left out: "Ambervale against Kestrel Bay" asks about
+    /// the two clubs, not one match.
+    pub fn match_names(&self, contest: usize) -> Vec<String> {
+        let Some(line) = self.score_line(contest) else {
+            return Vec::new();
+        };
+        let c = &self.contests[contest];
+        let forms = |entry: usize| -> Vec<String> {
+            match self.entry_group(&c.entries[entry]) {
+                Some(g) => {
+                    let g = &self.groups[g];
+                    std::iter::once(g.name.clone())
+                        .chain(g.aliases.iter().cloned())
+                        .collect()
+                }
+                None => vec![self.entry_name(&c.entries[entry])],
+            }
+        };
+        let (home, away) = (forms(line.home), forms(line.away));
+        let mut out = Vec::new();
+        for h in &home {
+            for a in &away {
+                for sep in ["v", "vs", "versus"] {
+                    out.push(format!("{h} {sep} {a}"));
+                }
+            }
+        }
+        out
+    }
+
     /// The unit of a score, singular or plural by `n`: "goal", "goals".
     pub fn score_unit(&self, n: u64) -> String {
         let one = &self.scenario.score_unit;

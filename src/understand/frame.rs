@@ -1071,6 +1071,7 @@ fn focus(
                     | "stand"
                     | "standing"
                     | "table"
+                    | "league"
                     | "end"
             )
         }) {
@@ -1092,7 +1093,9 @@ fn focus(
             }
             return some(
                 Focus::Rank,
-                &["where", "rank", "ranked", "stand", "table", "place"],
+                &[
+                    "where", "rank", "ranked", "stand", "table", "league", "place",
+                ],
             );
         }
         return some(Focus::Where, &["where", "venue", "location"]);

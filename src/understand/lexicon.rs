@@ -346,6 +346,10 @@ impl Lexicon {
             for a in &c.aliases {
                 add(a, Target::Entity(EntityRef::Contest(ci), Form::Alias));
             }
+            // A match is named by its two sides ("Ambervale v Kestrel Bay").
+            for n in data.match_names(ci) {
+                add(&n, Target::Entity(EntityRef::Contest(ci), Form::Full));
+            }
             add(&c.phase, Target::Phase(c.phase.clone()));
             if let Some(cat) = &c.category {
                 add(cat, Target::Category(cat.clone()));

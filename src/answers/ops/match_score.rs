@@ -25,9 +25,9 @@ pub static SPEC: OpSpec = OpSpec {
     outcomes: &[
         answered(
             "won",
-            &["match", "score", "winner", "loser", "when", "round"],
+            &["match", "score", "winner", "loser", "start", "round"],
         ),
-        answered("drawn", &["match", "score", "when", "round"]),
+        answered("drawn", &["match", "score", "start", "round"]),
         answered(
             "live",
             &[
@@ -35,9 +35,9 @@ pub static SPEC: OpSpec = OpSpec {
             ],
         ),
         answered("suspended", &["match", "score", "round"]),
-        answered("abandoned", &["match", "score", "when", "round"]),
-        no_data("postponed", &["match", "when", "round"]),
-        no_data("scheduled", &["match", "when", "venue", "round"]),
+        answered("abandoned", &["match", "score", "start", "round"]),
+        no_data("postponed", &["match", "start", "round"]),
+        no_data("scheduled", &["match", "start", "venue", "round"]),
         no_data("no_match", &["name"]),
     ],
     run,
@@ -76,7 +76,7 @@ fn run(input: &OpInput) -> OpOutput {
     );
     let mut f = Facts::new()
         .set("match", data.contest_name(ci))
-        .set("when", when_value(&data.facts[ci].start, input.now))
+        .set("start", when_value(&data.facts[ci].start, input.now))
         .set("score", score_value(data, ci, &line));
     if let Some(r) = &c.round {
         f.put("round", Value::Text(r.clone()));
@@ -128,7 +128,8 @@ fn run(input: &OpInput) -> OpOutput {
 }
 
 /// The match a reader most likely means by a team: one under way (or
-/// stopped for now), else the latest one started, else the next one due.
+/// stopped for now), else one on today, else the latest one started, else
+/// the next one due.
 fn pick(input: &OpInput, g: usize) -> Option<usize> {
     let data = input.data;
     let all = matches_of(data, g);
@@ -136,6 +137,15 @@ fn pick(input: &OpInput, g: usize) -> Option<usize> {
     if let Some(&(ci, _)) = all
         .iter()
         .find(|(ci, _)| matches!(data.contests[*ci].status, Status::Live | Status::Suspended))
+    {
+        return Some(ci);
+    }
+    // A match on today (played earlier, due later or called off) is the
+    // one "the Ambervale game" means on a matchday.
+    let today = input.now.date();
+    if let Some(&(ci, _)) = all
+        .iter()
+        .find(|(ci, _)| data.facts[*ci].start.date() == today)
     {
         return Some(ci);
     }

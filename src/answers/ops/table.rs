@@ -35,6 +35,13 @@ pub static SPEC: OpSpec = OpSpec {
             kind: EntityKind::Place,
             required: false,
         },
+        // The competition named ("the league table"): the table of that
+        // discipline, when the scenario declares one.
+        Param {
+            name: "discipline",
+            kind: EntityKind::Discipline,
+            required: false,
+        },
     ],
     outcomes: &[
         answered(
@@ -122,7 +129,19 @@ const DEFAULT_BOTTOM_ROWS: usize = 3;
 
 fn run(input: &OpInput) -> OpOutput {
     let data = input.data;
-    let Some(table) = chosen_table(data, input.settings) else {
+    let named = match input.entity("discipline") {
+        Some(EntityRef::Discipline(si, di)) => Some((si, di)),
+        _ => None,
+    };
+    let table = match named {
+        Some((si, di)) => data.tables.iter().find(|t| {
+            let r = data.table_rule(t);
+            r.sport.as_deref() == Some(data.sports[si].id.as_str())
+                && r.discipline.as_deref() == Some(data.sports[si].disciplines[di].id.as_str())
+        }),
+        None => chosen_table(data, input.settings),
+    };
+    let Some(table) = table else {
         return OpOutput::done("no_table", Facts::new(), vec![]);
     };
     let rule = data.table_rule(table);
@@ -202,7 +221,7 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("conceded", Value::Int(r.conceded as i64));
         f.put("difference", signed_value(r.difference()));
         let leaders: Vec<Value> = rows.iter().filter(|x| x.rank == 1).map(name_of).collect();
-        f.put("leader", Value::List(leaders));
+        f.put("leader", names(leaders));
         f.put("gap", gap_value(rule.count, &rows[0], r));
         return OpOutput::done("position", f, me.clone()).about(me);
     }
@@ -217,7 +236,7 @@ fn run(input: &OpInput) -> OpOutput {
         }
         f.put(
             "holders",
-            Value::List(holders.iter().map(|r| name_of(r)).collect()),
+            names(holders.iter().map(|r| name_of(r)).collect()),
         );
         f.put("points", value_of(holders[0]));
         let who: Vec<EntityRef> = holders.iter().map(|r| EntityRef::Group(r.group)).collect();
@@ -245,10 +264,7 @@ fn run(input: &OpInput) -> OpOutput {
     if bottom {
         let last_rank = rows.last().map(|r| r.rank).unwrap_or(1);
         let last: Vec<&TableRow> = rows.iter().filter(|r| r.rank == last_rank).collect();
-        f.put(
-            "last",
-            Value::List(last.iter().map(|r| name_of(r)).collect()),
-        );
+        f.put("last", names(last.iter().map(|r| name_of(r)).collect()));
         f.put("last_points", value_of(last[0]));
         let who = last.iter().map(|r| EntityRef::Group(r.group)).collect();
         return OpOutput::done("bottom", f, mentioned).about(who);
@@ -256,13 +272,23 @@ fn run(input: &OpInput) -> OpOutput {
     let leaders: Vec<&TableRow> = rows.iter().filter(|r| r.rank == 1).collect();
     f.put(
         "leader",
-        Value::List(leaders.iter().map(|r| name_of(r)).collect()),
+        names(leaders.iter().map(|r| name_of(r)).collect()),
     );
     f.put("leaders_count", Value::Int(leaders.len() as i64));
     f.put("leader_points", value_of(leaders[0]));
     f.put("still_to_play", Value::Int(table.still_to_play as i64));
     let who = leaders.iter().map(|r| EntityRef::Group(r.group)).collect();
     OpOutput::done("top", f, mentioned).about(who)
+}
+
+/// Names as one value: a single name keeps its own verb agreement
+/// ("Ambervale Town are"), several make a list.
+fn names(mut v: Vec<Value>) -> Value {
+    if v.len() == 1 {
+        v.remove(0)
+    } else {
+        Value::List(v)
+    }
 }
 
 /// What a row is ranked by first, for "level" and gaps: points in a

@@ -17,7 +17,7 @@ pub static SPEC: OpSpec = OpSpec {
         answered(
             "answered",
             &[
-                "name", "result", "score", "opponent", "where", "when", "round",
+                "name", "result", "score", "opponent", "where", "start", "round",
             ],
         ),
         no_data("none", &["name"]),
@@ -52,7 +52,7 @@ fn run(input: &OpInput) -> OpOutput {
         mentioned.push(EntityRef::Group(og));
     }
     f.put("where", Value::Text(venue_word(c.entries[ei].side).into()));
-    f.put("when", when_value(&data.facts[ci].start, input.now));
+    f.put("start", when_value(&data.facts[ci].start, input.now));
     if let Some(r) = &c.round {
         f.put("round", Value::Text(r.clone()));
     }

@@ -21,7 +21,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "name",
                 "opponent",
                 "where",
-                "when",
+                "start",
                 "venue",
                 "round",
                 "postponed",
@@ -80,7 +80,7 @@ fn run(input: &OpInput) -> OpOutput {
         return OpOutput::done("none", f, mentioned);
     };
     put_match(&mut f, ci, ei, &mut mentioned);
-    f.put("when", when_value(&data.facts[ci].start, input.now));
+    f.put("start", when_value(&data.facts[ci].start, input.now));
     if let Some(v) = &data.contests[ci].venue {
         f.put("venue", Value::Text(v.clone()));
     }

@@ -37,10 +37,10 @@ pub static SPEC: OpSpec = OpSpec {
                 "rival_scored",
                 "last",
                 "last_when",
-                "next_when",
+                "next",
             ],
         ),
-        no_data("never_met", &["name", "rival", "next_when"]),
+        no_data("never_met", &["name", "rival", "next"]),
         no_data("same_team", &["name"]),
     ],
     run,
@@ -75,7 +75,7 @@ fn run(input: &OpInput) -> OpOutput {
     if let Some(&(ci, _)) = meetings.iter().find(|(ci, _)| {
         data.contests[*ci].status == Status::Scheduled && data.facts[*ci].start.timestamp() >= now
     }) {
-        f.put("next_when", when_value(&data.facts[ci].start, input.now));
+        f.put("next", when_value(&data.facts[ci].start, input.now));
     }
     let played: Vec<(usize, usize, Outcome)> = meetings
         .iter()
