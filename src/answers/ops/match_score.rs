@@ -27,6 +27,12 @@ pub static SPEC: OpSpec = OpSpec {
             "won",
             &["match", "score", "winner", "loser", "start", "round"],
         ),
+        // Level on the score, decided another way (penalties, away goals):
+        // the side placed first goes through.
+        answered(
+            "won_level",
+            &["match", "score", "winner", "loser", "start", "round"],
+        ),
         answered("drawn", &["match", "score", "start", "round"]),
         answered(
             "live",
@@ -118,7 +124,12 @@ fn run(input: &OpInput) -> OpOutput {
                         "loser",
                         Value::Text(data.entry_name(&c.entries[line.other(w)])),
                     );
-                    "won"
+                    let level = line.scores().is_some_and(|(h, a)| h == a);
+                    if level {
+                        "won_level"
+                    } else {
+                        "won"
+                    }
                 }
                 _ => "drawn",
             }
@@ -198,6 +209,13 @@ mod tests {
         assert_eq!(f["score"].render(Style::Spoken), "Ash FC two, Birch FC one");
         assert_eq!(f["winner"].render(Style::Text), "Ash FC");
         assert_eq!(run_on(&d, ("contest", EntityRef::Contest(1))).0, "drawn");
+        // Level, with places given: decided another way.
+        let mut level = d.clone();
+        level.contests[1].entries[1].place = Some(2);
+        assert_eq!(
+            run_on(&level, ("contest", EntityRef::Contest(1))).0,
+            "won_level"
+        );
         let (o, f) = run_on(&d, ("contest", EntityRef::Contest(2)));
         assert_eq!(o, "live");
         assert_eq!(f["leader"].render(Style::Text), "Birch FC");
