@@ -145,3 +145,42 @@ fn sides_level_on_every_results_tie_breaker_share_a_place() {
         ]
     );
 }
+
+/// The JSON examples of docs/data-league.md parse as what they show: table
+/// rules that load, contests identical to the league demo's records of the
+/// same id, and a batch the admin API accepts the shape of.
+#[test]
+fn the_examples_in_the_league_data_reference_parse() {
+    let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR"));
+    let doc = std::fs::read_to_string(root.join("docs/data-league.md")).unwrap();
+    let blocks: Vec<&str> = doc
+        .split("```json\n")
+        .skip(1)
+        .map(|b| b.split("```").next().unwrap())
+        .collect();
+    assert_eq!(blocks.len(), 3, "three JSON examples");
+    let tables: serde_json::Value = serde_json::from_str(&format!("{{{}}}", blocks[0])).unwrap();
+    let rules: Vec<tidings::dataset::table::TableRule> =
+        serde_json::from_value(tables["tables"].clone()).unwrap();
+    assert_eq!(rules.len(), 3);
+    let demo: Vec<serde_json::Value> = serde_json::from_str(
+        &std::fs::read_to_string(root.join("dataset-demo/league/contests.json")).unwrap(),
+    )
+    .unwrap();
+    let shown: Vec<serde_json::Value> = serde_json::from_str(blocks[1]).unwrap();
+    for c in &shown {
+        let _: tidings::dataset::Contest = serde_json::from_value(c.clone()).unwrap();
+        let same = demo
+            .iter()
+            .find(|d| d["id"] == c["id"])
+            .expect("in the demo");
+        assert_eq!(same, c, "the example of {} is the demo's record", c["id"]);
+    }
+    let _: tidings::dataset::changes::Batch = serde_json::from_str(blocks[2]).unwrap();
+    // The league rule in the reference is the demo's own.
+    let scenario: serde_json::Value = serde_json::from_str(
+        &std::fs::read_to_string(root.join("dataset-demo/league/scenario.json")).unwrap(),
+    )
+    .unwrap();
+    assert_eq!(scenario["tables"][0], tables["tables"][0]);
+}
