@@ -281,7 +281,22 @@ pub fn compute_all(data: &Dataset) -> Vec<Table> {
 
 /// Computes the table of rule `rule` from the final contests.
 pub fn compute(data: &Dataset, rule: usize) -> Table {
-    let r = &data.scenario.tables[rule];
+    let (rows, still_to_play) = compute_rule(data, &data.scenario.tables[rule], &|_| true);
+    Table {
+        rule,
+        rows,
+        still_to_play,
+    }
+}
+
+/// Computes the rows of a table by `r` over the contests that pass `keep`
+/// as well as the rule's own sport and discipline (a medal table for one
+/// sport or one day), with how many counted contests are still to play.
+pub fn compute_rule(
+    data: &Dataset,
+    r: &TableRule,
+    keep: &dyn Fn(usize) -> bool,
+) -> (Vec<TableRow>, usize) {
     let awards = data.awards();
     let mut rows: Vec<TableRow> = (0..data.groups.len())
         .map(|group| TableRow {
@@ -301,7 +316,7 @@ pub fn compute(data: &Dataset, rule: usize) -> Table {
     let mut entered = vec![false; data.groups.len()];
     let mut still_to_play = 0;
     let counted: Vec<usize> = (0..data.contests.len())
-        .filter(|&ci| counts_towards(r, &data.contests[ci]))
+        .filter(|&ci| counts_towards(r, &data.contests[ci]) && keep(ci))
         .collect();
     for &ci in &counted {
         let c = &data.contests[ci];
@@ -380,10 +395,20 @@ pub fn compute(data: &Dataset, rule: usize) -> Table {
         .filter_map(|k| parse_key(k, r.count, awards).ok())
         .collect();
     order_rows(data, r, &counted, &keys, &mut rows);
-    Table {
-        rule,
-        rows,
-        still_to_play,
+    (rows, still_to_play)
+}
+
+/// The rule of a medal table (or of seat totals): the scenario's awards
+/// counted, ordered by the first award, then the second, and so on.
+pub fn awards_rule(data: &Dataset) -> TableRule {
+    TableRule {
+        id: "awards".into(),
+        name: "awards".into(),
+        count: TableCount::Awards,
+        sport: None,
+        discipline: None,
+        points: PointsRule::default(),
+        order: data.awards().to_vec(),
     }
 }
 
@@ -695,17 +720,44 @@ mod tests {
         )
         .unwrap();
         let t = compute(&d, 0);
-        let medals = crate::answers::ops::support::medal_table(&d);
         let ours: Vec<(usize, u32, Vec<u32>)> = t
             .rows
             .iter()
             .map(|r| (r.group, r.rank, r.awards.clone()))
             .collect();
-        let theirs: Vec<(usize, u32, Vec<u32>)> = medals
-            .iter()
-            .map(|r| (r.group, r.rank, r.counts.clone()))
+        // Counted here the plain way: medals per delegation from the final
+        // contests, golds first, then silvers, then bronzes, equal counts
+        // sharing a rank (standard competition ranking).
+        let mut counts = vec![vec![0u32; 3]; d.groups.len()];
+        for c in d.contests.iter().filter(|c| c.status == Status::Final) {
+            for e in &c.entries {
+                if let (Some(a), Some(g)) = (&e.award, d.entry_group(e)) {
+                    let k = ["gold", "silver", "bronze"]
+                        .iter()
+                        .position(|x| x == a)
+                        .unwrap();
+                    counts[g][k] += 1;
+                }
+            }
+        }
+        let mut theirs: Vec<(usize, u32, Vec<u32>)> = counts
+            .into_iter()
+            .enumerate()
+            .filter(|(_, c)| c.iter().sum::<u32>() > 0)
+            .map(|(g, c)| (g, 0, c))
             .collect();
-        assert!(!ours.is_empty());
+        theirs.sort_by(|a, b| {
+            b.2.cmp(&a.2)
+                .then(d.groups[a.0].name.cmp(&d.groups[b.0].name))
+        });
+        for i in 0..theirs.len() {
+            theirs[i].1 = if i > 0 && theirs[i].2 == theirs[i - 1].2 {
+                theirs[i - 1].1
+            } else {
+                i as u32 + 1
+            };
+        }
+        assert!(theirs.len() > 3);
         assert_eq!(ours, theirs);
     }
 
