@@ -351,6 +351,11 @@ impl Lexicon {
                 add(&n, Target::Entity(EntityRef::Contest(ci), Form::Full));
             }
             add(&c.phase, Target::Phase(c.phase.clone()));
+            // A round of a season or tournament ("matchday 5") is asked
+            // about like a phase.
+            if let Some(r) = &c.round {
+                add(r, Target::Phase(r.clone()));
+            }
             if let Some(cat) = &c.category {
                 add(cat, Target::Category(cat.clone()));
                 for syn in category_synonyms(cat) {

@@ -26,6 +26,7 @@ mod placed;
 mod podium;
 mod profile;
 mod result;
+mod round_matches;
 mod standings;
 pub mod support;
 mod table;
@@ -409,6 +410,7 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &team_last::SPEC,
     &team_form::SPEC,
     &team_record::SPEC,
+    &round_matches::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,
