@@ -470,6 +470,29 @@ mod tests {
     }
 
     #[test]
+    fn the_loader_demands_no_award_for_a_drawn_final_and_refuses_one() {
+        let d = league(&["ash", "birch"], &[], r#""awards":["winner"]"#).unwrap();
+        let mut records = crate::dataset::changes::Records::of(&d);
+        let final_of = |award: &str| -> Contest {
+            serde_json::from_str(&format!(
+                r#"{{"id":"f","sport":"football","discipline":"cup","phase":"final","start":"2027-05-01T15:00","status":"final","measure":"score","entries":[{{"group":"ash","side":"home","mark":"2"{award}}},{{"group":"birch","side":"away","mark":"2"}}]}}"#
+            ))
+            .unwrap()
+        };
+        records.contests = vec![final_of("")];
+        assert!(records.clone().build(2).is_ok());
+        records.contests = vec![final_of(r#","award":"winner""#)];
+        let p = problems(records.clone().build(2));
+        assert!(p.iter().any(|m| m.contains("award")), "{p:?}");
+        // Decided another way (places 1 and 2 with a level score), the
+        // side placed first carries the first award.
+        let mut decided = final_of(r#","award":"winner","place":1"#);
+        decided.entries[1].place = Some(2);
+        records.contests = vec![decided];
+        assert!(records.build(2).is_ok());
+    }
+
+    #[test]
     fn sides_and_scores_are_checked() {
         let p = problems(league(
             &["ash", "birch"],

@@ -84,6 +84,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "difference",
                 "leader",
                 "gap",
+                "in_hand",
                 "teams",
             ],
         ),
@@ -110,6 +111,7 @@ pub static SPEC: OpSpec = OpSpec {
                 "gap",
                 "ahead_place",
                 "behind_place",
+                "in_hand",
             ],
         ),
         answered("level", &["table_name", "name", "rival", "points", "place"]),
@@ -188,6 +190,9 @@ fn run(input: &OpInput) -> OpOutput {
         f.put("ahead", name_of(ahead));
         f.put("behind", name_of(behind));
         f.put("gap", gap_value(rule.count, ahead, behind));
+        if let Some(n) = in_hand(ahead, behind) {
+            f.put("in_hand", n);
+        }
         f.put("ahead_place", rank_value(ahead.rank, shared(ahead)));
         f.put("behind_place", rank_value(behind.rank, shared(behind)));
         return OpOutput::done("gap", f, mentioned).about(vec![EntityRef::Group(ahead.group)]);
@@ -223,6 +228,9 @@ fn run(input: &OpInput) -> OpOutput {
         let leaders: Vec<Value> = rows.iter().filter(|x| x.rank == 1).map(name_of).collect();
         f.put("leader", names(leaders));
         f.put("gap", gap_value(rule.count, &rows[0], r));
+        if let Some(n) = in_hand(&rows[0], r) {
+            f.put("in_hand", n);
+        }
         return OpOutput::done("position", f, me.clone()).about(me);
     }
 
@@ -279,6 +287,12 @@ fn run(input: &OpInput) -> OpOutput {
     f.put("still_to_play", Value::Int(table.still_to_play as i64));
     let who = leaders.iter().map(|r| EntityRef::Group(r.group)).collect();
     OpOutput::done("top", f, mentioned).about(who)
+}
+
+/// Games the team behind has in hand over the one ahead (played fewer),
+/// as "one game"; `None` when it has none.
+fn in_hand(ahead: &TableRow, behind: &TableRow) -> Option<Value> {
+    (behind.played < ahead.played).then(|| games_value(ahead.played - behind.played))
 }
 
 /// Names as one value: a single name keeps its own verb agreement
@@ -452,6 +466,30 @@ mod tests {
             &[("group", group(&d, "cedar")), ("rival", group(&d, "dale"))],
         );
         assert_eq!(o, "level");
+        // Everyone has played two: no games in hand.
+        assert!(!f.contains_key("in_hand"));
+    }
+
+    #[test]
+    fn games_in_hand_are_counted_for_the_team_behind() {
+        let d = league(
+            &["ash", "birch", "cedar"],
+            &[
+                ("m1", "ash", "birch", "final", Some((1, 0))),
+                ("m2", "ash", "cedar", "final", Some((1, 0))),
+                ("m3", "birch", "cedar", "scheduled", None),
+            ],
+            RULE,
+        )
+        .unwrap();
+        let (o, f) = run_on(
+            &d,
+            &[("group", group(&d, "birch")), ("rival", group(&d, "ash"))],
+        );
+        assert_eq!(o, "gap");
+        assert_eq!(f["in_hand"].render(Style::Text), "one game");
+        let (_, f) = run_on(&d, &[("group", group(&d, "cedar"))]);
+        assert_eq!(f["in_hand"].render(Style::Text), "one game");
     }
 
     #[test]
