@@ -70,7 +70,8 @@ fn run(input: &OpInput) -> OpOutput {
                 }
             }
             s => {
-                if s.is_off() {
+                // Suspended play may resume: still to finish, not off.
+                if matches!(s, Status::Postponed | Status::Abandoned) {
                     off += 1;
                 } else {
                     to_play += 1;
