@@ -185,7 +185,7 @@ def main():
             # "league" and "cup" alone are words of questions ("top of the
             # league"), not names of a competition.
             {"id": "league", "name": "Vellmark League"},
-            {"id": "cup", "name": "Vellmark Cup"},
+            {"id": "cup", "name": "Vellmark Cup", "aliases": ["cup"]},
         ],
     }]
     # Clubs take plural verbs in British newsrooms ("Ambervale are top").
