@@ -99,3 +99,32 @@ async fn the_election_question_set_meets_its_targets() {
     );
     meets_targets(&r);
 }
+
+/// The league demo's set at its own clock (matchday 13 under way).
+#[tokio::test]
+async fn the_league_question_set_meets_its_targets() {
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let cases = tidings::eval::load_set(&root.join("tests/eval/league.yaml"))
+        .expect("the league set parses");
+    assert!(
+        cases.len() >= 60,
+        "at least 60 cases, found {}",
+        cases.len()
+    );
+    let snap = tidings::engine::load(&tidings::engine::Sources {
+        data: Some(root.join("dataset-demo/league")),
+        intents: Some(root.join("intents/league")),
+    })
+    .expect("the league demo loads");
+    let settings = tidings::engine::Settings::with_clock(
+        tidings::engine::Clock::Fixed("2027-11-06T16:05:00+00:00".parse().unwrap()),
+        b"test-secret".to_vec(),
+    );
+    let engine = tidings::engine::Engine::new(
+        snap,
+        std::sync::Arc::new(tidings::dialogue::MemoryStore::new()),
+        settings,
+    );
+    let r = tidings::eval::evaluate(&engine, &cases).await;
+    meets_targets(&r);
+}

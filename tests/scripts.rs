@@ -80,6 +80,22 @@ fn the_election_scripts_pass_on_the_election_scenario() {
     );
 }
 
+/// The league scripts run on the league demo at its own clock (matchday
+/// 13 under way).
+#[test]
+fn the_league_scripts_pass_on_the_league_scenario() {
+    let (code, out) = tidings_test(&[
+        "--data",
+        "dataset-demo/league",
+        "--intents",
+        "intents/league",
+        "tests/scripts/league",
+    ]);
+    assert_eq!(code, 0, "{out}");
+    assert!(out.contains("0 failing"), "{out}");
+    assert!(out.contains("1 script(s)"), "{out}");
+}
+
 #[test]
 fn a_failing_turn_shows_what_was_expected_and_what_came() {
     let p = temp_script(

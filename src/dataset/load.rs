@@ -399,9 +399,10 @@ pub fn build(
     sports: Vec<Sport>,
     groups: Vec<Group>,
     competitors: Vec<Competitor>,
-    contests: Vec<Contest>,
+    mut contests: Vec<Contest>,
     version: u64,
 ) -> Result<Dataset, LoadError> {
+    super::sides::fill_places(&mut contests);
     let mut p = Problems(Vec::new());
     let sf = "scenario.json";
     let tz = match TimeZone::get(&scenario.time_zone) {
@@ -455,6 +456,24 @@ pub fn build(
                 format!("award {a:?} listed twice"),
             );
         }
+    }
+
+    for (rec, field, msg) in super::table::check_rules(&scenario, &sports) {
+        // The table by its id, or "tables #n" for one without.
+        let k = scenario
+            .tables
+            .iter()
+            .position(|t| t.id == rec)
+            .or_else(|| {
+                rec.strip_prefix("tables #")
+                    .and_then(|n| n.parse::<usize>().ok())
+                    .map(|n| n - 1)
+            });
+        let at = match k {
+            Some(k) => format!("/tables/{k}/{field}"),
+            None => "/tables".to_string(),
+        };
+        p.add(sf, &rec, &field, at, msg);
     }
 
     let sport_ix = index(&sports, |s| &s.id, "sports.json", &mut p);
@@ -529,7 +548,8 @@ pub fn build(
         return Err(LoadError::Invalid(p.0));
     }
     for (ci, f) in facts.iter_mut().enumerate() {
-        f.name = contest_name(&contests, &sports, &sport_ix, ci);
+        f.name = super::sides::contest_name(&contests, &sports, &groups, &competitors, ci)
+            .unwrap_or_else(|| contest_name(&contests, &sports, &sport_ix, ci));
     }
     let mut entries_of = vec![Vec::new(); competitors.len()];
     for (ci, c) in contests.iter().enumerate() {
@@ -541,7 +561,7 @@ pub fn build(
             }
         }
     }
-    Ok(Dataset {
+    let mut data = Dataset {
         scenario,
         sports,
         groups,
@@ -557,7 +577,10 @@ pub fn build(
         competitor_ix,
         contest_ix,
         entries_of,
-    })
+        tables: Vec::new(),
+    };
+    data.tables = super::table::compute_all(&data);
+    Ok(data)
 }
 
 /// "women's long jump", with the phase added when it is not the final or
@@ -856,6 +879,9 @@ fn check_contest(
             }
         }
     }
+    for (rec, field, msg) in super::sides::check(c) {
+        p.add(f, &rec, field, at(field), msg);
+    }
     check_places(c, ci, &marks, better, scenario, p);
     ContestFacts {
         start,
@@ -932,14 +958,16 @@ fn check_places(
         let e = &c.entries[i];
         // Awards are given only when a final is over; heats place without them.
         // (The same rule as `Dataset::awards_in`.)
-        let expected = if c.status == Status::Final && c.phase == "final" {
-            scenario
-                .awards
-                .get(place as usize - 1)
-                .filter(|_| place >= 1)
-        } else {
-            None
-        };
+        // A draw is a result with no award due.
+        let expected =
+            if c.status == Status::Final && c.phase == "final" && !super::sides::is_draw(c) {
+                scenario
+                    .awards
+                    .get(place as usize - 1)
+                    .filter(|_| place >= 1)
+            } else {
+                None
+            };
         if place == 0 {
             p.add(f, &rec, "place", at("place"), "places start at 1");
             continue;

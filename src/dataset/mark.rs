@@ -104,6 +104,7 @@ fn expectation(measure: Measure) -> &'static str {
         Measure::Distance => "a distance in metres such as 8.21",
         Measure::Points => "points such as 14.533 or 87",
         Measure::Votes => "a whole number of votes such as 1234 or 1,234",
+        Measure::Score => "a whole-number score such as 0 or 3",
     }
 }
 
@@ -114,6 +115,7 @@ fn noun(measure: Measure) -> &'static str {
         Measure::Distance => "a distance",
         Measure::Points => "points",
         Measure::Votes => "votes",
+        Measure::Score => "a score",
     }
 }
 
@@ -188,7 +190,7 @@ pub fn parse(measure: Measure, text: &str) -> Result<Mark, MarkError> {
     let body = match measure {
         Measure::Time => strip_unit(trimmed, "s"),
         Measure::Distance => strip_unit(trimmed, "m"),
-        Measure::Points | Measure::Votes => trimmed,
+        Measure::Points | Measure::Votes | Measure::Score => trimmed,
     };
     let (units, decimals) = match measure {
         Measure::Time => {
@@ -237,6 +239,8 @@ pub fn parse(measure: Measure, text: &str) -> Result<Mark, MarkError> {
             (units, decimals.ok_or_else(too_long)?)
         }
         Measure::Votes => (vote_count(body).ok_or_else(malformed)?, 0),
+        // A side's score is a plain whole number: "3", never "3.0".
+        Measure::Score => (digits(body).ok_or_else(malformed)?, 0),
     };
     Mark::from_units(units, decimals).ok_or_else(too_long)
 }
@@ -374,6 +378,9 @@ pub fn format_text(measure: Measure, mark: &Mark) -> String {
             let (w, _) = split(units, d);
             words::count_noun(w, "vote", None, words::NumberStyle::Figures)
         }
+        // One side's score on its own is a bare figure; the two sides
+        // together read "3–2" (`dataset::sides`).
+        Measure::Score => split(units, d).0.to_string(),
     }
 }
 
@@ -441,6 +448,7 @@ pub fn format_spoken(measure: Measure, mark: &Mark) -> String {
         Measure::Distance => spoken_quantity(w, f, d, "metre", "metres"),
         Measure::Points => spoken_quantity(w, f, d, "point", "points"),
         Measure::Votes => words::count_noun(w, "vote", None, words::NumberStyle::Words),
+        Measure::Score => words::cardinal(w),
     }
 }
 
@@ -479,6 +487,7 @@ pub fn format_margin_text(measure: Measure, a: &Mark, b: &Mark) -> String {
         Measure::Votes => {
             words::count_noun(split(units, d).0, "vote", None, words::NumberStyle::Figures)
         }
+        Measure::Score => split(units, d).0.to_string(),
     }
 }
 
@@ -493,6 +502,7 @@ pub fn format_margin_spoken(measure: Measure, a: &Mark, b: &Mark) -> String {
         Measure::Distance => spoken_quantity(w, f, d, "metre", "metres"),
         Measure::Points => spoken_quantity(w, f, d, "point", "points"),
         Measure::Votes => words::count_noun(w, "vote", None, words::NumberStyle::Words),
+        Measure::Score => words::cardinal(w),
     }
 }
 

@@ -9,6 +9,8 @@ pub mod locate;
 pub mod mark;
 pub mod model;
 pub mod shared;
+pub mod sides;
+pub mod table;
 
 use std::collections::HashMap;
 
@@ -40,6 +42,8 @@ pub struct Dataset {
     pub clock: Option<Timestamp>,
     /// Increases with every change applied to the data.
     pub version: u64,
+    /// The scenario's tables, computed from the results of this version.
+    pub tables: Vec<table::Table>,
     sport_ix: HashMap<Id, usize>,
     group_ix: HashMap<Id, usize>,
     competitor_ix: HashMap<Id, usize>,

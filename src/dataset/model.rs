@@ -35,6 +35,18 @@ pub struct Scenario {
     /// election night), in questions such as "Which ward do you mean?".
     #[serde(default = "default_contest_noun")]
     pub contest_noun: String,
+    /// What one unit of a two-sided score is called, in the singular
+    /// ("goal", "run", "set", "frame"). Default `point`.
+    #[serde(default = "default_score_unit")]
+    pub score_unit: String,
+    /// Tables the engine computes from the results, each with its rules
+    /// (`dataset::table`). None by default.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub tables: Vec<crate::dataset::table::TableRule>,
+}
+
+fn default_score_unit() -> String {
+    "point".to_string()
 }
 
 fn default_contest_noun() -> String {
@@ -125,6 +137,9 @@ pub enum Measure {
     Points,
     /// Votes: whole numbers.
     Votes,
+    /// A score between two sides, home and away, each a whole number in
+    /// the scenario's `score_unit` (goals, runs, sets, frames).
+    Score,
 }
 
 impl Measure {
@@ -152,6 +167,34 @@ pub enum Status {
     Scheduled,
     Live,
     Final,
+    /// Put off before it started; it may have a new date later.
+    Postponed,
+    /// Stopped and not finished; its result does not count.
+    Abandoned,
+    /// Stopped for now; it may resume.
+    Suspended,
+}
+
+impl Status {
+    /// The status as written in the data and in replies ("postponed").
+    pub fn name(self) -> &'static str {
+        match self {
+            Status::Scheduled => "scheduled",
+            Status::Live => "live",
+            Status::Final => "final",
+            Status::Postponed => "postponed",
+            Status::Abandoned => "abandoned",
+            Status::Suspended => "suspended",
+        }
+    }
+
+    /// Whether the contest is off: put off, or stopped for good or for now.
+    pub fn is_off(self) -> bool {
+        matches!(
+            self,
+            Status::Postponed | Status::Abandoned | Status::Suspended
+        )
+    }
 }
 
 /// A single contest: one race, one match, one ward.
@@ -166,6 +209,10 @@ pub struct Contest {
     pub category: Option<String>,
     /// "heat 1", "semifinal", "final"... Awards are given in the final.
     pub phase: String,
+    /// The round of a season or tournament the contest belongs to
+    /// ("matchday 5", "round of 16", "group A", "semi-final").
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub round: Option<String>,
     /// Local start time in the scenario's time zone (`2027-08-14T19:40`).
     pub start: String,
     pub status: Status,
@@ -230,4 +277,15 @@ pub struct Entry {
     /// The award won, one of the scenario's awards.
     #[serde(default)]
     pub award: Option<String>,
+    /// Which side of a two-sided contest (measure `score`) the entry is.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub side: Option<Side>,
+}
+
+/// The two sides of a contest measured by a score.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, schemars::JsonSchema)]
+#[serde(rename_all = "snake_case")]
+pub enum Side {
+    Home,
+    Away,
 }

@@ -1112,6 +1112,7 @@ fn focus(
                     | "stand"
                     | "standing"
                     | "table"
+                    | "league"
                     | "end"
             )
         }) {
@@ -1133,7 +1134,9 @@ fn focus(
             }
             return some(
                 Focus::Rank,
-                &["where", "rank", "ranked", "stand", "table", "place"],
+                &[
+                    "where", "rank", "ranked", "stand", "table", "league", "place",
+                ],
             );
         }
         return some(Focus::Where, &["where", "venue", "location"]);

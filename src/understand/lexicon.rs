@@ -366,7 +366,16 @@ impl Lexicon {
             for a in &c.aliases {
                 add(a, Target::Entity(EntityRef::Contest(ci), Form::Alias));
             }
+            // A match is named by its two sides ("Ambervale v Kestrel Bay").
+            for n in data.match_names(ci) {
+                add(&n, Target::Entity(EntityRef::Contest(ci), Form::Full));
+            }
             add(&c.phase, Target::Phase(c.phase.clone()));
+            // A round of a season or tournament ("matchday 5") is asked
+            // about like a phase.
+            if let Some(r) = &c.round {
+                add(r, Target::Phase(r.clone()));
+            }
             if let Some(cat) = &c.category {
                 add(cat, Target::Category(cat.clone()));
                 for syn in category_synonyms(cat) {

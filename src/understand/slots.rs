@@ -588,9 +588,9 @@ pub fn resolve_contest(
             .iter()
             .copied()
             .filter(|&ci| match data.contests[ci].status {
-                Status::Live => true,
+                Status::Live | Status::Suspended => true,
                 Status::Final => !now,
-                Status::Scheduled => false,
+                Status::Scheduled | Status::Postponed | Status::Abandoned => false,
             })
             .collect();
         if live

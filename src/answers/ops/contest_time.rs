@@ -27,6 +27,9 @@ pub static SPEC: OpSpec = OpSpec {
             ],
         ),
         answered("over", &["contest_name", "start", "venue", "counted"]),
+        // Put off, abandoned or suspended: `status` says which, and
+        // `start` when it was (or is now) due.
+        answered("off", &["contest_name", "start", "venue", "status"]),
     ],
     run,
 };
@@ -53,9 +56,49 @@ fn run(input: &OpInput) -> OpOutput {
             "live"
         }
         Status::Final => "over",
+        s @ (Status::Postponed | Status::Abandoned | Status::Suspended) => {
+            f.put("status", Value::Text(s.name().to_string()));
+            "off"
+        }
     };
-    if data.contests[ci].status != Status::Scheduled {
+    if !matches!(
+        data.contests[ci].status,
+        Status::Scheduled | Status::Postponed
+    ) {
         vote_facts(data, ci, None, &mut f);
     }
     OpOutput::done(outcome, f, vec![EntityRef::Contest(ci)])
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::answers::ops::testing::{entity, run_with};
+    use crate::answers::value::Style;
+    use crate::dataset::sides::testing::league;
+
+    #[test]
+    fn a_contest_put_off_says_so_with_its_status() {
+        let d = league(
+            &["ash", "birch"],
+            &[
+                ("m1", "ash", "birch", "postponed", None),
+                ("m2", "birch", "ash", "abandoned", Some((1, 0))),
+                ("m3", "ash", "birch", "suspended", Some((0, 0))),
+            ],
+            "",
+        )
+        .unwrap();
+        for (ci, status) in [(0, "postponed"), (1, "abandoned"), (2, "suspended")] {
+            let mut slots = Slots::new();
+            slots.insert("contest".into(), entity(EntityRef::Contest(ci)));
+            match run_with(run, &d, &slots) {
+                OpOutput::Done { outcome, facts, .. } => {
+                    assert_eq!(outcome, "off");
+                    assert_eq!(facts["status"].render(Style::Text), status);
+                }
+                other => panic!("{other:?}"),
+            }
+        }
+    }
 }

@@ -18,6 +18,7 @@ mod group_result;
 mod head_to_head;
 mod leader;
 mod margin_of;
+mod match_score;
 mod medal_table;
 mod next_for;
 mod open_contests;
@@ -25,8 +26,15 @@ mod placed;
 mod podium;
 mod profile;
 mod result;
+mod round_matches;
 mod standings;
 pub mod support;
+mod table;
+mod team_form;
+mod team_last;
+mod team_next;
+mod team_record;
+pub mod team_support;
 
 use std::collections::{BTreeMap, HashMap};
 
@@ -401,6 +409,13 @@ pub static OPERATIONS: &[&OpSpec] = &[
     &placed::SPEC,
     &margin_of::SPEC,
     &about::SPEC,
+    &table::SPEC,
+    &match_score::SPEC,
+    &team_next::SPEC,
+    &team_last::SPEC,
+    &team_form::SPEC,
+    &team_record::SPEC,
+    &round_matches::SPEC,
     &builtin::GREETING,
     &builtin::THANKS,
     &builtin::HELP,

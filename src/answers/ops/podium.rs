@@ -67,7 +67,11 @@ fn run(input: &OpInput) -> OpOutput {
                 vec![me],
             )
         }
-        Status::Live => {
+        // A contest put off or abandoned has no result to give.
+        Status::Postponed | Status::Abandoned => {
+            return OpOutput::done("no_result", Facts::new(), vec![me]);
+        }
+        Status::Live | Status::Suspended => {
             let order = placed(c);
             let Some(&first) = order
                 .first()

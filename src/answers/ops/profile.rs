@@ -85,7 +85,9 @@ fn run(input: &OpInput) -> OpOutput {
                     next = Some(ci);
                 }
             }
-            Status::Live => {
+            // Put off or abandoned: neither next nor a result.
+            Status::Postponed | Status::Abandoned => {}
+            Status::Live | Status::Suspended => {
                 if !f.0.contains_key("live") {
                     f.put("live", format!("the {}", data.contest_name(ci)));
                 }

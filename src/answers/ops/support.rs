@@ -366,40 +366,18 @@ pub fn medal_table(data: &Dataset) -> Vec<MedalRow> {
 /// The medal table over the contests that pass `keep` (one sport, one
 /// day), ranked the same way.
 pub fn medal_table_of(data: &Dataset, keep: &dyn Fn(usize) -> bool) -> Vec<MedalRow> {
-    let awards = data.awards();
-    let mut counts = vec![vec![0u32; awards.len()]; data.groups.len()];
-    for (_, c) in data
-        .contests
-        .iter()
-        .enumerate()
-        .filter(|(i, c)| c.status == Status::Final && keep(*i))
-    {
-        for e in &c.entries {
-            let (Some(a), Some(g)) = (e.award.as_deref(), data.entry_group(e)) else {
-                continue;
-            };
-            if let Some(k) = awards.iter().position(|x| x == a) {
-                counts[g][k] += 1;
-            }
-        }
-    }
-    let mut rows: Vec<MedalRow> = counts
+    // The same computed table as any declared one (`dataset::table`),
+    // with the awards as its keys in rank order.
+    let rule = crate::dataset::table::awards_rule(data);
+    crate::dataset::table::compute_rule(data, &rule, keep)
+        .0
         .into_iter()
-        .enumerate()
-        .filter(|(_, c)| c.iter().any(|&n| n > 0))
-        .map(|(group, counts)| MedalRow {
-            group,
-            counts,
-            rank: 0,
+        .map(|r| MedalRow {
+            group: r.group,
+            counts: r.awards,
+            rank: r.rank,
         })
-        .collect();
-    rows.sort_by(|a, b| {
-        b.counts
-            .cmp(&a.counts)
-            .then_with(|| data.groups[a.group].name.cmp(&data.groups[b.group].name))
-    });
-    assign_ranks(&mut rows);
-    rows
+        .collect()
 }
 
 /// How many contests that give awards are not decided yet: "so far" in
