@@ -814,7 +814,7 @@ mod tests {
         assert!(has("key \"scored\" counts results"), "{msgs:?}");
         assert!(
             msgs.iter()
-                .all(|m| m.starts_with("scenario.json: record x")),
+                .all(|m| m.starts_with("scenario.json:1:") && m.contains(": record x: ")),
             "{msgs:?}"
         );
     }
